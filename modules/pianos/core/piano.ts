@@ -1,0 +1,54 @@
+import { z } from 'zod';
+
+export const PIANO_KINDS = ['upright', 'grand'] as const;
+export type PianoKind = (typeof PIANO_KINDS)[number];
+
+// Every stage a piano passes through, in order, then the two exits.
+export const STAGES = [
+  'received',
+  'assessed',
+  'in_workshop',
+  'ready',
+  'on_floor',
+  'held',
+  'sold',
+  'delivered',
+  'wholesaled',
+  'returned_to_owner',
+] as const;
+export type Stage = (typeof STAGES)[number];
+
+export const STAGE_LABELS: Record<Stage, string> = {
+  received: 'Received',
+  assessed: 'Assessed',
+  in_workshop: 'In workshop',
+  ready: 'Ready',
+  on_floor: 'On the floor',
+  held: 'Held',
+  sold: 'Sold',
+  delivered: 'Delivered',
+  wholesaled: 'Wholesaled',
+  returned_to_owner: 'Returned to owner',
+};
+
+export function stockNumber(sequence: number): string {
+  return `FW-${String(sequence).padStart(4, '0')}`;
+}
+
+export const pianoInput = z.object({
+  maker: z.string().trim().min(1, 'is required').max(80),
+  model: z.string().trim().max(80).nullish(),
+  serialNumber: z.string().trim().max(40).nullish(),
+  year: z.number().int().min(1700, 'must be 1700 or later').max(2100, 'must be 2100 or earlier').nullish(),
+  yearIsEstimate: z.boolean().default(false),
+  kind: z.enum(PIANO_KINDS, { message: 'must be upright or grand' }),
+  // Height of an upright or length of a grand; the smallest spinets are about 90 cm, concert grands about 310 cm.
+  sizeCm: z.number().int().min(50, 'must be at least 50 cm').max(400, 'must be at most 400 cm').nullish(),
+  finish: z.string().trim().max(80).nullish(),
+});
+export type PianoInput = z.infer<typeof pianoInput>;
+
+export function describeSize(kind: PianoKind, sizeCm: number | null | undefined): string {
+  if (sizeCm == null) return kind === 'grand' ? 'grand' : 'upright';
+  return kind === 'grand' ? `grand, ${sizeCm} cm long` : `upright, ${sizeCm} cm tall`;
+}

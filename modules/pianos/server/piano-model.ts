@@ -1,0 +1,54 @@
+import { PIANO_KINDS, STAGES, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { User } from '@/modules/accounts/server/user-model';
+import { BaseModel } from '@/server/db/base-model';
+
+export class Piano extends BaseModel {
+  static tableName = 'pianos';
+
+  id!: number;
+  stockNumber!: string;
+  maker!: string;
+  model!: string | null;
+  serialNumber!: string | null;
+  year!: number | null;
+  yearIsEstimate!: boolean;
+  kind!: PianoKind;
+  sizeCm!: number | null;
+  finish!: string | null;
+  stage!: Stage;
+  stageChangedAt!: string;
+  createdById!: number | null;
+  createdAt!: string;
+  createdBy?: User;
+
+  static jsonSchema = {
+    type: 'object',
+    required: ['maker', 'kind'],
+    properties: {
+      id: { type: 'integer' },
+      stockNumber: { type: 'string' },
+      maker: { type: 'string', minLength: 1, maxLength: 80 },
+      model: { type: ['string', 'null'], maxLength: 80 },
+      serialNumber: { type: ['string', 'null'], maxLength: 40 },
+      year: { type: ['integer', 'null'], minimum: 1700, maximum: 2100 },
+      yearIsEstimate: { type: 'boolean' },
+      kind: { type: 'string', enum: [...PIANO_KINDS] },
+      sizeCm: { type: ['integer', 'null'], minimum: 50, maximum: 400 },
+      finish: { type: ['string', 'null'], maxLength: 80 },
+      stage: { type: 'string', enum: [...STAGES] },
+      stageChangedAt: { type: 'string' },
+      createdById: { type: ['integer', 'null'] },
+      createdAt: { type: 'string' },
+      updatedAt: { type: 'string' },
+    },
+  };
+
+  static relationMappings = () => ({
+    // Who logged the piano in; staff names are readable by every staff role.
+    createdBy: {
+      relation: BaseModel.BelongsToOneRelation,
+      modelClass: User,
+      join: { from: 'pianos.created_by_id', to: 'users.id' },
+    },
+  });
+}

@@ -1,0 +1,24 @@
+import { can } from '@/modules/accounts/core/roles';
+import { pianoInput } from '@/modules/pianos/core/piano';
+import type { Actor } from '@/modules/accounts/server/user-service';
+import { notAllowed } from '@/server/errors';
+
+import { Piano } from './piano-model';
+
+/** A new piano record in stage `received`; its stock number comes from the database sequence. */
+export async function createPiano(actor: Actor, raw: unknown): Promise<Piano> {
+  if (!can(actor.role, 'createPianos')) throw notAllowed('create pianos');
+  const input = pianoInput.parse(raw);
+  const piano = await Piano.query().insertAndFetch({
+    maker: input.maker,
+    model: input.model ?? null,
+    serialNumber: input.serialNumber ?? null,
+    year: input.year ?? null,
+    yearIsEstimate: input.yearIsEstimate,
+    kind: input.kind,
+    sizeCm: input.sizeCm ?? null,
+    finish: input.finish ?? null,
+    createdById: actor.id,
+  });
+  return piano.$fetchGraph('createdBy');
+}

@@ -1,0 +1,88 @@
+import express, { type NextFunction, type Request, type Response } from 'express';
+import depthLimit from 'graphql-depth-limit';
+import { createHandler } from 'graphql-http/lib/use/express';
+import { GraphQLError } from 'graphql';
+import type { Knex } from 'knex';
+import fs from 'node:fs';
+import path from 'node:path';
+
+import type { User } from '@/modules/accounts/server/user-model';
+
+import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
+import { toAppError, toGraphQLError } from './errors';
+import type { GraphContext } from './graphql/context';
+import { DOMAINS } from './graphql/domains';
+import { MAX_QUERY_DEPTH } from './graphql/limits';
+import { buildSchema } from './graphql/schema';
+
+export interface AppDeps {
+  knex: Knex;
+  auth: AuthOptions;
+  webDir?: string;
+}
+
+const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api'];
+
+export function createApp(deps: AppDeps): express.Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  const pp = configurePassport(deps.auth);
+  app.use(pp.initialize());
+
+  app.get('/healthz', async (_req, res) => {
+    try {
+      await deps.knex.raw('select 1');
+      res.json({ ok: true });
+    } catch {
+      res.status(503).json({ ok: false });
+    }
+  });
+
+  app.use('/auth', authRouter(deps.auth));
+
+  const schema = buildSchema(DOMAINS);
+  app.use(express.json({ limit: '100kb' }));
+  app.all(
+    '/graphql',
+    requireUser(pp),
+    createHandler<GraphContext>({
+      schema,
+      context: (req) => ({ user: (req.raw as Request).user as User }),
+      validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
+      formatError: (err) => {
+        if (err instanceof GraphQLError && err.originalError && !(err.originalError instanceof GraphQLError)) {
+          const mapped = toGraphQLError(err.originalError);
+          return new GraphQLError(mapped.message, { path: err.path, nodes: err.nodes, extensions: mapped.extensions });
+        }
+        return err;
+      },
+    }),
+  );
+
+  if (deps.webDir) mountWeb(app, deps.webDir);
+
+  app.use((err: unknown, _req: Request, res: Response, next: NextFunction) => {
+    if (res.headersSent) return next(err);
+    const status = (err as { status?: number; type?: string }).type === 'entity.parse.failed' ? 400 : undefined;
+    const app = toAppError(err);
+    if (app.code === 'INTERNAL' && !status) console.error(err);
+    res.status(status ?? app.status).json({ error: status ? 'The request body is not valid JSON.' : app.message });
+  });
+  return app;
+}
+
+// The exported web app; every other GET that wants a page gets index.html, so deep links load.
+function mountWeb(app: express.Express, webDir: string): void {
+  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+  app.get('/{*splat}', (req, res, next) => {
+    if (API_PREFIXES.some((p) => req.path === p || req.path.startsWith(`${p}/`))) return next();
+    const index = path.join(webDir, 'index.html');
+    if (!fs.existsSync(index)) {
+      res.status(503).type('text').send('The web app is not built yet: run npm start.');
+      return;
+    }
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(index);
+  });
+}

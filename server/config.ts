@@ -1,0 +1,39 @@
+import path from 'node:path';
+
+export interface Config {
+  host: string;
+  port: number;
+  databaseUrl: string;
+  jwtSecret: string;
+  jwtTtlSeconds: number;
+  webDir: string;
+  s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
+  seedDemo: boolean;
+}
+
+function need(env: NodeJS.ProcessEnv, name: string): string {
+  const value = env[name];
+  if (!value) throw new Error(`Set ${name} (see README.md, Configuration).`);
+  return value;
+}
+
+export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
+  const jwtSecret = need(env, 'JWT_SECRET');
+  if (jwtSecret.length < 32) throw new Error('JWT_SECRET must be at least 32 characters.');
+  return {
+    host: env.HOST ?? '127.0.0.1',
+    port: Number(env.PORT ?? 8080),
+    databaseUrl: need(env, 'DATABASE_URL'),
+    jwtSecret,
+    jwtTtlSeconds: Number(env.JWT_TTL_SECONDS ?? 12 * 3600),
+    webDir: env.WEB_DIR ?? path.resolve(__dirname, '../dist'),
+    s3: {
+      endpoint: env.S3_ENDPOINT ?? 'http://127.0.0.1:4569',
+      region: env.S3_REGION ?? 'us-east-1',
+      bucket: env.S3_BUCKET ?? 'feltwire-photos',
+      accessKeyId: env.S3_ACCESS_KEY_ID ?? 'S3RVER',
+      secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
+    },
+    seedDemo: env.SEED_DEMO !== '0',
+  };
+}

@@ -1,0 +1,30 @@
+import knexFactory, { type Knex } from 'knex';
+import path from 'node:path';
+import { Model } from 'objection';
+import pg from 'pg';
+
+// Timestamps leave the database as ISO 8601 strings and dates as YYYY-MM-DD, never as JS Dates.
+pg.types.setTypeParser(1184, (v) => new Date(v).toISOString()); // timestamptz
+pg.types.setTypeParser(1114, (v) => new Date(`${v}Z`).toISOString()); // timestamp
+pg.types.setTypeParser(1082, (v) => v); // date
+pg.types.setTypeParser(20, (v) => Number(v)); // bigint counts
+
+export const MIGRATIONS_DIR = path.resolve(__dirname, '../../migrations');
+
+export function createKnex(databaseUrl: string, pool = { min: 0, max: 10 }): Knex {
+  return knexFactory({
+    client: 'pg',
+    connection: databaseUrl,
+    pool,
+    migrations: { directory: MIGRATIONS_DIR, loadExtensions: ['.ts'], tableName: 'knex_migrations' },
+  });
+}
+
+export function bindModels(knex: Knex): void {
+  Model.knex(knex);
+}
+
+export async function migrateLatest(knex: Knex): Promise<string[]> {
+  const [, applied] = await knex.migrate.latest();
+  return applied as string[];
+}

@@ -1,0 +1,7 @@
+import { accountsGraph } from '@/modules/accounts/server/user-graphql';
+import { pianosGraph } from '@/modules/pianos/server/piano-graphql';
+
+import type { GraphDomain } from './domain';
+
+// Every domain that adds to the GraphQL schema: a new domain adds one line here.
+export const DOMAINS: GraphDomain[] = [accountsGraph, pianosGraph];

@@ -1,0 +1,41 @@
+import { hashPassword } from '@/modules/accounts/server/user-service';
+import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
+
+import { createApp } from './app';
+import { readConfig } from './config';
+import { bindModels, createKnex, migrateLatest } from './db/knex';
+import { createS3, ensureBucket } from './storage';
+
+// Boots the product: migrate, seed the demo, check storage, serve the API and the web app.
+async function main(): Promise<void> {
+  const config = readConfig();
+  const knex = createKnex(config.databaseUrl);
+  bindModels(knex);
+  const applied = await migrateLatest(knex);
+  if (applied.length) console.log(`[feltwire] migrations applied: ${applied.length}`);
+  if (config.seedDemo) {
+    const seeded = await seedDemo(knex, hashPassword);
+    console.log(`[feltwire] demo data: ${seeded.users} users and ${seeded.pianos} pianos added`);
+  }
+  await ensureBucket(createS3(config.s3), config.s3.bucket);
+
+  const app = createApp({ knex, auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds }, webDir: config.webDir });
+  const server = app.listen(config.port, config.host, () => {
+    const url = `http://${config.host}:${config.port}`;
+    console.log(`\n  Feltwire is running at ${url}\n`);
+    console.log(`  Demo sign-ins (demo data only), password "${DEMO_PASSWORD}":`);
+    for (const u of DEMO_USERS) console.log(`    ${u.role.padEnd(11)} ${u.email}`);
+    console.log('\n  Press Ctrl-C to stop.\n');
+  });
+  const stop = () => {
+    server.close();
+    void knex.destroy();
+  };
+  process.once('SIGINT', stop);
+  process.once('SIGTERM', stop);
+}
+
+main().catch((err) => {
+  console.error('[feltwire] failed to start:', err);
+  process.exit(1);
+});

@@ -1,0 +1,17 @@
+import { can, isRole, ROLES } from '@/modules/accounts/core/roles';
+
+describe('roles', () => {
+  it('has the four staff roles', () => expect(ROLES).toEqual(['intake', 'technician', 'floor', 'manager']));
+  it.each([
+    ['manager', 'manageUsers', true],
+    ['intake', 'manageUsers', false],
+    ['technician', 'createPianos', false],
+    ['floor', 'readSellerDetails', false],
+    ['intake', 'readSellerDetails', true],
+    ['floor', 'readPianos', true],
+  ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
+  it('rejects what is not a role', () => {
+    expect(isRole('owner')).toBe(false);
+    expect(isRole('floor')).toBe(true);
+  });
+});
