@@ -5,6 +5,8 @@ set -euo pipefail
 ROOT=$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)
 export ROOT
 export TMPDIR="$ROOT/.tmp"
+# The pinned AWS SDK runs on Node 20; its notice about future releases needing Node 22 is noise here.
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true
 mkdir -p "$TMPDIR" "$ROOT/.data"
 
 log() { printf '\033[1m[feltwire]\033[0m %s\n' "$*" >&2; }

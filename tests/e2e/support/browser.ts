@@ -1,0 +1,54 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const PHONE = { width: 390, height: 844 };
+export const WIDE = { width: 1280, height: 800 };
+
+export function baseUrl(): string {
+  const url = process.env.E2E_BASE_URL;
+  if (!url) throw new Error('E2E_BASE_URL is not set: run the browser journeys with npm test');
+  return url;
+}
+
+const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
+
+/** A fresh Chromium profile per test file; each journey opens its own page. */
+export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+  const dir = fs.mkdtempSync(path.join(process.env.TMPDIR ?? os.tmpdir(), 'fw-chromium-'));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: ARGS,
+    headless: true,
+    viewport: PHONE,
+  });
+  return {
+    context,
+    close: async () => {
+      await context.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function newPage(context: BrowserContext, viewport: { width: number; height: number }): Promise<Page> {
+  const page = await context.newPage();
+  await page.setViewportSize(viewport);
+  page.on('pageerror', (err) => console.error('page error:', err.message));
+  return page;
+}
+
+export async function signIn(page: Page, email: string, password = 'feltwire-demo'): Promise<void> {
+  await page.goto(`${baseUrl()}/sign-in`);
+  await page.getByTestId('sign-in-email').fill(email);
+  await page.getByTestId('sign-in-password').fill(password);
+  await page.getByTestId('sign-in-submit').click();
+}
+
+export async function shot(page: Page, name: string): Promise<void> {
+  const dir = path.join(process.cwd(), '.tmp', 'shots');
+  fs.mkdirSync(dir, { recursive: true });
+  await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: false });
+}
