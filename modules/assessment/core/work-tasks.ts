@@ -1,0 +1,48 @@
+// The kinds of workshop task a finding can call for; the workshop's rate card prices each one.
+export const WORK_TASKS = [
+  'regulation',
+  'rebush_keys',
+  'ease_front_rail_pins',
+  'ease_sticking_keys',
+  'replace_keytops',
+  'reshape_voice_hammers',
+  'replace_hammers',
+  'voicing',
+  'replace_broken_strings',
+  'restring_section',
+  'soundboard_repair',
+  'reglue_ribs',
+  'pitch_raise',
+  'fine_tuning',
+  'tuning_pin_repair',
+  'cabinet_touch_up',
+] as const;
+export type WorkTask = (typeof WORK_TASKS)[number];
+
+export const WORK_TASK_LABELS: Record<WorkTask, string> = {
+  regulation: 'Regulation',
+  rebush_keys: 'Rebush keys',
+  ease_front_rail_pins: 'Ease front rail pins',
+  ease_sticking_keys: 'Free sticking keys',
+  replace_keytops: 'Replace keytops',
+  reshape_voice_hammers: 'Reshape and voice hammers',
+  replace_hammers: 'Replace hammers',
+  voicing: 'Voicing',
+  replace_broken_strings: 'Replace broken strings',
+  restring_section: 'Restring a section',
+  soundboard_repair: 'Soundboard shim or repair',
+  reglue_ribs: 'Reglue soundboard ribs',
+  pitch_raise: 'Pitch raise',
+  fine_tuning: 'Fine tuning',
+  tuning_pin_repair: 'Tuning pin repair (larger pins or pin block)',
+  cabinet_touch_up: 'Cabinet touch-up',
+};
+
+/** One recommended piece of work; `hours` only where the finding itself sizes the job. */
+export interface WorkItem {
+  task: WorkTask;
+  hours?: number;
+  note?: string;
+  /** A cheaper partial fix offered instead of the full one. */
+  alternativeTo?: WorkTask;
+}
