@@ -143,33 +143,33 @@ function gradeHammers(m: Measurements, r: GradeRules): Finding[] {
   return out;
 }
 
+// What each observed string state means: severity and the buyer's words; the worst state asks for restringing.
+const STEEL_STATES: Record<NonNullable<Measurements['steelCorrosion']>, [Severity, string]> = {
+  none: ['sound', 'Treble (steel) strings are clean.'],
+  light: ['sound', 'Treble (steel) strings show light surface rust, usual for their age.'],
+  moderate: ['watch', 'Treble (steel) strings show moderate rust: a sign of age.'],
+  heavy: ['needs_work', 'Treble (steel) strings are heavily rusted and pitted: they should be replaced.'],
+};
+const BASS_STATES: Record<NonNullable<Measurements['bassWinding']>, [Severity, string]> = {
+  bright: ['sound', 'Bass (copper-wound) strings are bright.'],
+  dull: ['sound', 'Bass (copper-wound) strings are dulled, usual for their age.'],
+  dark: ['watch', 'Bass (copper-wound) strings are dark with oxidation: a sign of age.'],
+  green: ['needs_work', 'Bass (copper-wound) strings show green oxidation: they should be replaced.'],
+};
+
+function stringSection(check: string, state: [Severity, string], section: string): Finding {
+  const [severity, text] = state;
+  return finding('strings', check, severity, text, severity === 'needs_work' ? [{ task: 'restring_section', note: section }] : []);
+}
+
 function gradeStrings(m: Measurements): Finding[] {
   const out: Finding[] = [];
-  if (m.steelCorrosion) {
-    const c = m.steelCorrosion;
-    const severity: Severity = c === 'heavy' ? 'needs_work' : c === 'moderate' ? 'watch' : 'sound';
-    const text = {
-      none: 'Treble (steel) strings are clean.',
-      light: 'Treble (steel) strings show light surface rust, usual for their age.',
-      moderate: 'Treble (steel) strings show moderate rust: a sign of age.',
-      heavy: 'Treble (steel) strings are heavily rusted and pitted: they should be replaced.',
-    }[c];
-    out.push(finding('strings', 'strings.steel', severity, text, c === 'heavy' ? [{ task: 'restring_section', note: 'treble section' }] : []));
-  }
-  if (m.bassWinding) {
-    const w = m.bassWinding;
-    const severity: Severity = w === 'green' ? 'needs_work' : w === 'dark' ? 'watch' : 'sound';
-    const text = {
-      bright: 'Bass (copper-wound) strings are bright.',
-      dull: 'Bass (copper-wound) strings are dulled, usual for their age.',
-      dark: 'Bass (copper-wound) strings are dark with oxidation: a sign of age.',
-      green: 'Bass (copper-wound) strings show green oxidation: they should be replaced.',
-    }[w];
-    out.push(finding('strings', 'strings.bass', severity, text, w === 'green' ? [{ task: 'restring_section', note: 'bass section' }] : []));
-  }
+  if (m.steelCorrosion) out.push(stringSection('strings.steel', STEEL_STATES[m.steelCorrosion], 'treble section'));
+  if (m.bassWinding) out.push(stringSection('strings.bass', BASS_STATES[m.bassWinding], 'bass section'));
   if (m.brokenStrings) {
     const n = m.brokenStrings;
-    out.push(finding('strings', 'strings.broken', 'needs_work', `${n} broken string${n === 1 ? '' : 's'}.`, [{ task: 'replace_broken_strings', note: `${n} string${n === 1 ? '' : 's'}` }]));
+    const strings = `${n} string${n === 1 ? '' : 's'}`;
+    out.push(finding('strings', 'strings.broken', 'needs_work', `${n} broken string${n === 1 ? '' : 's'}.`, [{ task: 'replace_broken_strings', note: strings }]));
   }
   return out;
 }
