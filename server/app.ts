@@ -7,6 +7,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 import type { User } from '@/modules/accounts/server/user-model';
+import type { PhotoStore } from '@/modules/photos/server/photo-store';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
 import { toAppError, toGraphQLError } from './errors';
@@ -14,10 +15,12 @@ import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
 import { MAX_QUERY_DEPTH } from './graphql/limits';
 import { buildSchema } from './graphql/schema';
+import { uploadsRouter } from './uploads';
 
 export interface AppDeps {
   knex: Knex;
   auth: AuthOptions;
+  photos: PhotoStore;
   webDir?: string;
 }
 
@@ -40,6 +43,7 @@ export function createApp(deps: AppDeps): express.Express {
   });
 
   app.use('/auth', authRouter(deps.auth));
+  app.use('/api', uploadsRouter(pp, deps.photos));
 
   const schema = buildSchema(DOMAINS);
   app.use(express.json({ limit: '100kb' }));
@@ -48,7 +52,7 @@ export function createApp(deps: AppDeps): express.Express {
     requireUser(pp),
     createHandler<GraphContext>({
       schema,
-      context: (req) => ({ user: (req.raw as Request).user as User }),
+      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos }),
       validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
       formatError: (err) => {
         if (err instanceof GraphQLError && err.originalError && !(err.originalError instanceof GraphQLError)) {

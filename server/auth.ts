@@ -48,13 +48,16 @@ export function configurePassport(opts: AuthOptions): passport.PassportStatic {
   return instance;
 }
 
-/** Refuses a request without a valid token for an active user, in GraphQL's error shape. */
-export function requireUser(pp: passport.PassportStatic) {
+const SIGN_IN_FIRST = 'Sign in first: the token is missing, expired or no longer valid.';
+
+/** Refuses a request without a valid token for an active user, in GraphQL's error shape or the REST one. */
+export function requireUser(pp: passport.PassportStatic, shape: 'graphql' | 'rest' = 'graphql') {
   return (req: Request, res: Response, next: NextFunction) => {
     pp.authenticate('jwt', { session: false }, (err: unknown, user: User | false) => {
       if (err) return next(err);
       if (!user) {
-        res.status(401).json({ errors: [{ message: 'Sign in first: the token is missing, expired or no longer valid.', extensions: { code: 'UNAUTHENTICATED' } }] });
+        const code = 'UNAUTHENTICATED';
+        res.status(401).json(shape === 'graphql' ? { errors: [{ message: SIGN_IN_FIRST, extensions: { code } }] } : { error: SIGN_IN_FIRST, code });
         return;
       }
       req.user = user;

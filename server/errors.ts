@@ -10,7 +10,7 @@ import {
 import { ZodError } from 'zod';
 
 // The few kinds of failure a client is told about; everything else is an internal error.
-export type ErrorCode = 'BAD_INPUT' | 'NOT_ALLOWED' | 'NOT_FOUND' | 'CONFLICT' | 'UNAUTHENTICATED' | 'INTERNAL';
+export type ErrorCode = 'BAD_INPUT' | 'NOT_ALLOWED' | 'NOT_FOUND' | 'CONFLICT' | 'UNAUTHENTICATED' | 'TOO_LARGE' | 'UNSUPPORTED_TYPE' | 'INTERNAL';
 
 const STATUS: Record<ErrorCode, number> = {
   BAD_INPUT: 400,
@@ -18,6 +18,8 @@ const STATUS: Record<ErrorCode, number> = {
   NOT_ALLOWED: 403,
   NOT_FOUND: 404,
   CONFLICT: 409,
+  TOO_LARGE: 413,
+  UNSUPPORTED_TYPE: 415,
   INTERNAL: 500,
 };
 

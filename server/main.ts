@@ -4,6 +4,8 @@ import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
 import { createApp } from './app';
 import { readConfig } from './config';
 import { bindModels, createKnex, migrateLatest } from './db/knex';
+import { s3PhotoStore } from '@/modules/photos/server/photo-store';
+
 import { createS3, ensureBucket } from './storage';
 
 // Boots the product: migrate, seed the demo, check storage, serve the API and the web app.
@@ -17,9 +19,10 @@ async function main(): Promise<void> {
     const seeded = await seedDemo(knex, hashPassword);
     console.log(`[feltwire] demo data: ${seeded.users} users and ${seeded.pianos} pianos added`);
   }
-  await ensureBucket(createS3(config.s3), config.s3.bucket);
+  const s3 = createS3(config.s3);
+  await ensureBucket(s3, config.s3.bucket);
 
-  const app = createApp({ knex, auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds }, webDir: config.webDir });
+  const app = createApp({ knex, auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds }, photos: s3PhotoStore(s3, config.s3.bucket), webDir: config.webDir });
   const server = app.listen(config.port, config.host, () => {
     const url = `http://${config.host}:${config.port}`;
     console.log(`\n  Feltwire is running at ${url}\n`);

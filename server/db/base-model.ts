@@ -6,9 +6,12 @@ export class BaseModel extends Model {
     return snakeCaseMappers();
   }
 
+  /** Tables without an updated_at column (append-only records) set this to false. */
+  static hasUpdatedAt = true;
+
   updatedAt?: string;
 
   $beforeUpdate(): void {
-    this.updatedAt = new Date().toISOString();
+    if ((this.constructor as typeof BaseModel).hasUpdatedAt) this.updatedAt = new Date().toISOString();
   }
 }

@@ -36,7 +36,7 @@ function readMiddleware(policies: Map<ModelClass<Model>, ReadModel>) {
       checkPage(args);
       const onQuery = (builder: QueryBuilder<Model>) => {
         // An absent optional variable filters nothing (objection's skipUndefined, minus its deprecated setter).
-        builder.internalOptions().skipUndefined = true;
+        (builder as unknown as { internalOptions(): { skipUndefined: boolean } }).internalOptions().skipUndefined = true;
         policy.readPolicy(builder, ctx);
         if (args.limit == null && args.range == null) builder.limit(DEFAULT_PAGE_SIZE);
       };

@@ -1,10 +1,15 @@
+import { randomBytes } from 'node:crypto';
+
+import { ListObjectsV2Command, type S3Client } from '@aws-sdk/client-s3';
 import type { Knex } from 'knex';
 import request from 'supertest';
 
 import type { Role } from '@/modules/accounts/core/roles';
 import { hashPassword } from '@/modules/accounts/server/user-service';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
+import { s3PhotoStore, type PhotoStore } from '@/modules/photos/server/photo-store';
 import { createApp } from '@/server/app';
+import { createS3, ensureBucket } from '@/server/storage';
 
 import { createTestDatabase } from './test-db';
 
@@ -12,6 +17,11 @@ export const TEST_AUTH = { jwtSecret: 'test-secret-that-is-long-enough-012345678
 
 export interface TestApi {
   knex: Knex;
+  s3: S3Client;
+  bucket: string;
+  photos: PhotoStore;
+  /** Every object key in this file's bucket. */
+  objectKeys: () => Promise<string[]>;
   http: ReturnType<typeof request>;
   app: ReturnType<typeof createApp>;
   tokenFor: (role: Role) => Promise<string>;
@@ -23,11 +33,20 @@ export interface TestApi {
 export async function startTestApi(): Promise<TestApi> {
   const db = await createTestDatabase();
   await seedDemo(db.knex, hashPassword);
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH });
+  // Each test file has a bucket of its own in the storage fake that scripts/test.sh started.
+  const s3 = createS3({ endpoint: process.env.S3_ENDPOINT ?? 'http://127.0.0.1:4579', region: 'us-east-1', bucket: '', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' });
+  const bucket = `fw-test-${randomBytes(4).toString('hex')}`;
+  await ensureBucket(s3, bucket);
+  const photos = s3PhotoStore(s3, bucket);
+  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos });
   const http = request(app);
   const tokens = new Map<Role, string>();
   return {
     knex: db.knex,
+    s3,
+    bucket,
+    photos,
+    objectKeys: async () => ((await s3.send(new ListObjectsV2Command({ Bucket: bucket }))).Contents ?? []).map((o) => o.Key!),
     http,
     app,
     tokenFor: async (role) => {
@@ -41,6 +60,9 @@ export async function startTestApi(): Promise<TestApi> {
     },
     gql: (token, query, variables) =>
       request(app).post('/graphql').set('Authorization', `Bearer ${token}`).send({ query, variables }),
-    close: db.drop,
+    close: async () => {
+      s3.destroy();
+      await db.drop();
+    },
   };
 }

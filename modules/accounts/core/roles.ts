@@ -9,13 +9,13 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails';
+export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
-  intake: ['readPianos', 'createPianos', 'readSellerDetails'],
-  technician: ['readPianos'],
+  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos'],
+  technician: ['readPianos', 'uploadPhotos'],
   floor: ['readPianos'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -48,6 +48,39 @@ export const pianoInput = z.object({
 });
 export type PianoInput = z.infer<typeof pianoInput>;
 
+export const CASE_CONDITIONS = ['excellent', 'good', 'worn', 'damaged'] as const;
+export type CaseCondition = (typeof CASE_CONDITIONS)[number];
+
+const yearField = z.number().int('must be a whole year').min(1700, 'must be 1700 or later').max(2100, 'must be 2100 or earlier');
+
+/** The piano as intake staff describe it: a year or an estimated range, and the case's condition. */
+export const intakePianoInput = pianoInput
+  .extend({
+    yearFrom: yearField.nullish(),
+    yearTo: yearField.nullish(),
+    caseCondition: z.enum(CASE_CONDITIONS, { message: `must be one of ${CASE_CONDITIONS.join(', ')}` }).nullish(),
+    caseNotes: z.string().trim().max(500).nullish(),
+  })
+  .superRefine((p, ctx) => {
+    if (p.yearFrom != null && p.yearTo != null && p.yearFrom > p.yearTo) {
+      ctx.addIssue({ code: 'custom', path: ['yearTo'], message: 'must not be before the start of the range' });
+    }
+  })
+  .transform((p) => {
+    // A range is an estimate; without a year, its middle stands for the year.
+    if (p.yearFrom != null && p.yearTo != null) {
+      return { ...p, yearIsEstimate: true, year: p.year ?? Math.round((p.yearFrom + p.yearTo) / 2) };
+    }
+    return p;
+  });
+export type IntakePianoInput = z.infer<typeof intakePianoInput>;
+
+export function describeYear(p: { year?: number | null; yearIsEstimate?: boolean; yearFrom?: number | null; yearTo?: number | null }): string {
+  if (p.yearFrom != null && p.yearTo != null) return `about ${p.yearFrom}-${p.yearTo}`;
+  if (p.year == null) return 'year unknown';
+  return p.yearIsEstimate ? `about ${p.year}` : String(p.year);
+}
+
 export function describeSize(kind: PianoKind, sizeCm: number | null | undefined): string {
   if (sizeCm == null) return kind === 'grand' ? 'grand' : 'upright';
   return kind === 'grand' ? `grand, ${sizeCm} cm long` : `upright, ${sizeCm} cm tall`;

@@ -1,4 +1,4 @@
-import { PIANO_KINDS, STAGES, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { CASE_CONDITIONS, PIANO_KINDS, STAGES, type CaseCondition, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
 import { User } from '@/modules/accounts/server/user-model';
 import { BaseModel } from '@/server/db/base-model';
 
@@ -12,6 +12,10 @@ export class Piano extends BaseModel {
   serialNumber!: string | null;
   year!: number | null;
   yearIsEstimate!: boolean;
+  yearFrom!: number | null;
+  yearTo!: number | null;
+  caseCondition!: CaseCondition | null;
+  caseNotes!: string | null;
   kind!: PianoKind;
   sizeCm!: number | null;
   finish!: string | null;
@@ -32,6 +36,10 @@ export class Piano extends BaseModel {
       serialNumber: { type: ['string', 'null'], maxLength: 40 },
       year: { type: ['integer', 'null'], minimum: 1700, maximum: 2100 },
       yearIsEstimate: { type: 'boolean' },
+      yearFrom: { type: ['integer', 'null'], minimum: 1700, maximum: 2100 },
+      yearTo: { type: ['integer', 'null'], minimum: 1700, maximum: 2100 },
+      caseCondition: { anyOf: [{ type: 'string', enum: [...CASE_CONDITIONS] }, { type: 'null' }] },
+      caseNotes: { type: ['string', 'null'], maxLength: 500 },
       kind: { type: 'string', enum: [...PIANO_KINDS] },
       sizeCm: { type: ['integer', 'null'], minimum: 50, maximum: 400 },
       finish: { type: ['string', 'null'], maxLength: 80 },

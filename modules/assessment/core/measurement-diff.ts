@@ -1,0 +1,17 @@
+import type { Measurements } from './measurements';
+
+export interface FieldChange {
+  field: string;
+  from: unknown;
+  to: unknown;
+}
+
+const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+
+/** The fields that differ between two versions of an assessment, in a stable order. */
+export function diffMeasurements(before: Measurements, after: Measurements): FieldChange[] {
+  const fields = [...new Set([...Object.keys(before), ...Object.keys(after)])].sort();
+  return fields
+    .filter((f) => !same(before[f as keyof Measurements], after[f as keyof Measurements]))
+    .map((f) => ({ field: f, from: before[f as keyof Measurements] ?? null, to: after[f as keyof Measurements] ?? null }));
+}

@@ -1,0 +1,76 @@
+import type { Grade } from '@/modules/assessment/core/grade';
+import type { GradeRules } from '@/modules/assessment/core/grade-rules';
+import type { Measurements } from '@/modules/assessment/core/measurements';
+import { User } from '@/modules/accounts/server/user-model';
+import { BaseModel } from '@/server/db/base-model';
+
+export class Intake extends BaseModel {
+  static tableName = 'intakes';
+  id!: number;
+  pianoId!: number;
+  sellerName!: string;
+  sellerPhone!: string | null;
+  sellerEmail!: string | null;
+  sellerAddress!: string | null;
+  acquisition!: string;
+  receivedOn!: string;
+  inspectedAt!: string;
+  notes!: string | null;
+  createdById!: number;
+  createdAt!: string;
+}
+
+export class Assessment extends BaseModel {
+  static tableName = 'assessments';
+  static hasUpdatedAt = false;
+  static jsonAttributes = ['measurements', 'grade'];
+  id!: number;
+  pianoId!: number;
+  version!: number;
+  kind!: 'intake' | 'post_workshop';
+  measurements!: Measurements;
+  grade!: Grade;
+  score!: number;
+  band!: Grade['band'];
+  referToTechnician!: boolean;
+  notRecommendedForRetail!: boolean;
+  rulesVersion!: string;
+  changeNote!: string | null;
+  submittedById!: number;
+  submittedAt!: string;
+  submittedBy?: User;
+
+  // The JSON documents stay out of the generated read type; hand-written queries serve them whole.
+  static jsonSchema = {
+    type: 'object',
+    properties: {
+      id: { type: 'integer' },
+      pianoId: { type: 'integer' },
+      version: { type: 'integer' },
+      kind: { type: 'string', enum: ['intake', 'post_workshop'] },
+      score: { type: 'integer', minimum: 0, maximum: 100 },
+      band: { type: 'string', enum: ['excellent', 'good', 'fair', 'poor'] },
+      referToTechnician: { type: 'boolean' },
+      notRecommendedForRetail: { type: 'boolean' },
+      rulesVersion: { type: 'string' },
+      changeNote: { type: ['string', 'null'] },
+      submittedById: { type: 'integer' },
+      submittedAt: { type: 'string' },
+    },
+  };
+
+  static relationMappings = () => ({
+    submittedBy: { relation: BaseModel.BelongsToOneRelation, modelClass: User, join: { from: 'assessments.submitted_by_id', to: 'users.id' } },
+  });
+}
+
+export class GradeRuleSet extends BaseModel {
+  static tableName = 'grade_rule_sets';
+  static hasUpdatedAt = false;
+  static jsonAttributes = ['rules'];
+  id!: number;
+  version!: string;
+  rules!: GradeRules;
+  createdById!: number | null;
+  createdAt!: string;
+}

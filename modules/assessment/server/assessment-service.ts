@@ -1,0 +1,179 @@
+import type { Knex } from 'knex';
+import { UniqueViolationError } from 'objection';
+
+import { can } from '@/modules/accounts/core/roles';
+import type { Actor } from '@/modules/accounts/server/user-service';
+import { gradeAssessment } from '@/modules/assessment/core/grade';
+import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
+import { correctionInput, intakeInput } from '@/modules/assessment/core/intake-input';
+import { diffMeasurements, type FieldChange } from '@/modules/assessment/core/measurement-diff';
+import type { Measurements } from '@/modules/assessment/core/measurements';
+import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-input';
+import { Photo } from '@/modules/photos/server/photo-model';
+import { Piano } from '@/modules/pianos/server/piano-model';
+import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
+
+import { Assessment, GradeRuleSet, Intake } from './assessment-models';
+
+export async function currentRules(trx?: Knex.Transaction): Promise<GradeRules> {
+  const latest = await GradeRuleSet.query(trx).orderBy('id', 'desc').first();
+  return latest ? latest.rules : defaultRules;
+}
+
+export async function setGradeRules(actor: Actor, raw: unknown): Promise<GradeRules> {
+  if (!can(actor.role, 'setGradeRules')) throw notAllowed('change the grading rules');
+  const input = gradeRulesInput.parse(raw);
+  return GradeRuleSet.transaction(async (trx) => {
+    await trx.raw('lock table grade_rule_sets in exclusive mode');
+    const { count } = (await GradeRuleSet.query(trx).count('* as count').first()) as unknown as { count: number };
+    const rules = withVersion(input, `shop-${Number(count) + 1}`);
+    await GradeRuleSet.query(trx).insert({ version: rules.version, rules, createdById: actor.id });
+    return rules;
+  });
+}
+
+// Draft photos the same user uploaded become the piano's.
+async function attachPhotos(trx: Knex.Transaction, actor: Actor, pianoId: number, photoIds: number[]): Promise<void> {
+  if (!photoIds.length) return;
+  const attached = await Photo.query(trx)
+    .patch({ pianoId, draftKey: null })
+    .whereIn('id', photoIds)
+    .where('uploaded_by_id', actor.id)
+    .where((q) => q.whereNull('piano_id').orWhere('piano_id', pianoId));
+  if (attached !== new Set(photoIds).size) throw badInput('photoIds', 'holds a photo that is not one of your uploads for this piano');
+}
+
+export interface SubmittedIntake {
+  pianoId: number;
+  stockNumber: string;
+  assessmentId: number;
+  version: number;
+  grade: ReturnType<typeof gradeAssessment>;
+}
+
+/** Records a whole intake in one transaction: the piano, where it came from, its graded inspection, its photos. */
+export async function submitIntake(actor: Actor, raw: unknown): Promise<SubmittedIntake> {
+  if (!can(actor.role, 'assess')) throw notAllowed('log intakes');
+  const input = intakeInput.parse(raw);
+  return Piano.transaction(async (trx) => {
+    const rules = await currentRules(trx);
+    const grade = gradeAssessment(input.measurements, rules);
+    const p = input.piano;
+    const piano = await Piano.query(trx).insertAndFetch({
+      maker: p.maker,
+      model: p.model ?? null,
+      serialNumber: p.serialNumber ?? null,
+      year: p.year ?? null,
+      yearIsEstimate: p.yearIsEstimate,
+      yearFrom: p.yearFrom ?? null,
+      yearTo: p.yearTo ?? null,
+      kind: p.kind,
+      sizeCm: p.sizeCm ?? null,
+      finish: p.finish ?? null,
+      caseCondition: p.caseCondition ?? null,
+      caseNotes: p.caseNotes ?? null,
+      createdById: actor.id,
+    });
+    await Intake.query(trx).insert({
+      pianoId: piano.id,
+      sellerName: input.seller.name,
+      sellerPhone: input.seller.phone ?? null,
+      sellerEmail: input.seller.email ?? null,
+      sellerAddress: input.seller.address ?? null,
+      acquisition: input.acquisition,
+      receivedOn: input.receivedOn,
+      inspectedAt: input.inspectedAt,
+      notes: input.notes ?? null,
+      createdById: actor.id,
+    });
+    const assessment = await insertAssessment(trx, actor, piano.id, 1, input.measurements, grade, null);
+    // The inspection is in: the piano moves on from received.
+    await Piano.query(trx).patch({ stage: 'assessed', stageChangedAt: new Date().toISOString() }).where({ id: piano.id, stage: 'received' });
+    await attachPhotos(trx, actor, piano.id, input.photoIds);
+    return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version: 1, grade };
+  });
+}
+
+function insertAssessment(trx: Knex.Transaction, actor: Actor, pianoId: number, version: number, measurements: Measurements, grade: SubmittedIntake['grade'], changeNote: string | null) {
+  return Assessment.query(trx).insertAndFetch({
+    pianoId,
+    version,
+    kind: 'intake',
+    measurements,
+    grade,
+    score: grade.score,
+    band: grade.band,
+    referToTechnician: grade.referToTechnician,
+    notRecommendedForRetail: grade.notRecommendedForRetail,
+    rulesVersion: grade.rulesVersion,
+    changeNote,
+    submittedById: actor.id,
+  });
+}
+
+/** A correction never edits a submitted assessment: it adds the next version, with the reason. */
+export async function correctAssessment(actor: Actor, raw: unknown): Promise<SubmittedIntake> {
+  if (!can(actor.role, 'assess')) throw notAllowed('correct assessments');
+  const input = correctionInput.parse(raw);
+  try {
+    return await Piano.transaction(async (trx) => {
+      const piano = await Piano.query(trx).findById(input.pianoId);
+      if (!piano) throw notFound(`piano ${input.pianoId}`);
+      const latest = await Assessment.query(trx).where('piano_id', piano.id).orderBy('version', 'desc').first();
+      if (!latest) throw notFound(`an assessment of piano ${piano.stockNumber}`);
+      const grade = gradeAssessment(input.measurements, await currentRules(trx));
+      const version = latest.version + 1;
+      const assessment = await insertAssessment(trx, actor, piano.id, version, input.measurements, grade, input.changeNote);
+      await attachPhotos(trx, actor, piano.id, input.photoIds);
+      return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version, grade };
+    });
+  } catch (err) {
+    if (err instanceof UniqueViolationError) throw new AppError('CONFLICT', 'Someone else corrected this assessment at the same moment: reload and try again.');
+    throw err;
+  }
+}
+
+export interface AssessmentVersion {
+  id: number;
+  version: number;
+  kind: string;
+  measurements: Measurements;
+  grade: SubmittedIntake['grade'];
+  rulesVersion: string;
+  changeNote: string | null;
+  submittedBy: string;
+  submittedAt: string;
+  /** What this version changed from the one before it. */
+  changes: FieldChange[];
+}
+
+export async function assessmentHistory(actor: Actor, pianoId: number): Promise<AssessmentVersion[]> {
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read assessments');
+  const rows = await Assessment.query().where('piano_id', pianoId).withGraphFetched('submittedBy').orderBy('version');
+  return rows.map((a, i) => ({
+    id: a.id,
+    version: a.version,
+    kind: a.kind,
+    measurements: a.measurements,
+    grade: a.grade,
+    rulesVersion: a.rulesVersion,
+    changeNote: a.changeNote,
+    submittedBy: a.submittedBy?.name ?? 'unknown',
+    submittedAt: a.submittedAt,
+    changes: i === 0 ? [] : diffMeasurements(rows[i - 1].measurements, a.measurements),
+  }));
+}
+
+/** Where the piano came from; the seller's details only for roles that may read personal data. */
+export async function intakeRecord(actor: Actor, pianoId: number): Promise<Record<string, unknown> | null> {
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read intakes');
+  const intake = await Intake.query().findOne({ piano_id: pianoId });
+  if (!intake) return null;
+  const base = { pianoId, acquisition: intake.acquisition, receivedOn: intake.receivedOn, inspectedAt: intake.inspectedAt, createdAt: intake.createdAt };
+  if (!can(actor.role, 'readSellerDetails')) return base;
+  return {
+    ...base,
+    seller: { name: intake.sellerName, phone: intake.sellerPhone, email: intake.sellerEmail, address: intake.sellerAddress },
+    notes: intake.notes,
+  };
+}

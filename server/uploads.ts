@@ -1,0 +1,37 @@
+import express, { type NextFunction, type Request, type Response, type Router } from 'express';
+import multer from 'multer';
+import type passport from 'passport';
+
+import type { User } from '@/modules/accounts/server/user-model';
+import { MAX_PHOTO_BYTES } from '@/modules/photos/core/photo-rules';
+import type { PhotoStore } from '@/modules/photos/server/photo-store';
+import { savePhoto } from '@/modules/photos/server/photo-service';
+
+import { requireUser } from './auth';
+import { AppError } from './errors';
+
+// multer holds one photo in memory (at most 10 MB) so its bytes can be checked before anything is stored.
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: MAX_PHOTO_BYTES, files: 1, fields: 8, fieldSize: 1024, parts: 10 },
+}).single('photo');
+
+function parseUpload(req: Request, res: Response, next: NextFunction): void {
+  upload(req, res, (err: unknown) => {
+    if (!err) return next();
+    if (err instanceof multer.MulterError) {
+      if (err.code === 'LIMIT_FILE_SIZE') return next(new AppError('TOO_LARGE', `photo: must be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB`, 'photo'));
+      return next(new AppError('BAD_INPUT', `${err.field ?? 'upload'}: ${err.message}`, err.field));
+    }
+    next(err);
+  });
+}
+
+export function uploadsRouter(pp: passport.PassportStatic, store: PhotoStore): Router {
+  const router = express.Router();
+  router.post('/photos', requireUser(pp, 'rest'), parseUpload, async (req, res) => {
+    const photo = await savePhoto(store, req.user as User, req.body ?? {}, req.file);
+    res.status(201).json(photo);
+  });
+  return router;
+}
