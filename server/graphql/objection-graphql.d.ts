@@ -19,6 +19,7 @@ declare module 'objection-graphql' {
       middleware: (resolver: GraphQLFieldResolver<unknown, unknown>, modelData: ModelData) => GraphQLFieldResolver<unknown, unknown>,
     ): SchemaBuilder;
     setBuilderOptions(options: { skipUndefined?: boolean }): SchemaBuilder;
+    argFactory(factory: (fields: unknown, modelClass: ModelClass<Model>) => Record<string, { type: unknown; query: (...args: never[]) => unknown }>): SchemaBuilder;
     build(): GraphQLSchema;
     models: Record<string, ModelData>;
     _typeForModel(modelData: ModelData): GraphQLObjectType;

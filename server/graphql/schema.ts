@@ -1,6 +1,6 @@
 import './objection-adapter';
 
-import { GraphQLObjectType, GraphQLSchema, type GraphQLFieldResolver } from 'graphql';
+import { GraphQLInt, GraphQLObjectType, GraphQLSchema, type GraphQLFieldResolver } from 'graphql';
 import type { Model, ModelClass, QueryBuilder } from 'objection';
 import { builder as graphQlBuilder, type SchemaBuilder } from 'objection-graphql';
 
@@ -16,7 +16,7 @@ interface PageArgs {
 }
 
 function checkPage(args: PageArgs): void {
-  if (args.limit != null && (args.limit < 1 || args.limit > MAX_PAGE_SIZE)) {
+  if (args.limit != null && !(args.limit >= 1 && args.limit <= MAX_PAGE_SIZE)) {
     throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
   }
   if (args.range != null) {
@@ -50,6 +50,11 @@ export function buildSchema(domains: GraphDomain[]): GraphQLSchema {
   const builder: SchemaBuilder = graphQlBuilder();
   for (const r of readModels) builder.model(r.model, { fieldName: r.fieldName, listFieldName: r.listFieldName });
   builder.extendWithMiddleware(readMiddleware(policies) as never);
+  // objection-graphql types limit and offset as [Int]; a plain Int is what clients mean and what checkPage checks.
+  builder.argFactory(() => ({
+    limit: { type: GraphQLInt, query: (q: QueryBuilder<Model>, v: number) => q.limit(v) },
+    offset: { type: GraphQLInt, query: (q: QueryBuilder<Model>, v: number) => q.offset(v) },
+  }));
 
   let typeOf: TypeOf = () => {
     throw new Error('types are not ready yet');

@@ -19,6 +19,20 @@ describe('the piano list', () => {
     }
   });
 
+  it('takes the page size and offset as plain Int variables', async () => {
+    const token = await api.tokenFor('floor');
+    const res = await api.gql(token, 'query($n: Int, $o: Int) { pianos(limit: $n, offset: $o, orderBy: stockNumber) { stockNumber } }', { n: 2, o: 3 });
+    expect(res.body.data.pianos).toEqual([{ stockNumber: 'FW-0004' }, { stockNumber: 'FW-0005' }]);
+  });
+
+  it('counts pianos per stage, every stage listed', async () => {
+    const res = await api.gql(await api.tokenFor('manager'), '{ stageCounts { stage count } }');
+    const counts = Object.fromEntries(res.body.data.stageCounts.map((c: { stage: string; count: number }) => [c.stage, c.count]));
+    expect(counts).toEqual({
+      received: 2, assessed: 2, in_workshop: 2, ready: 1, on_floor: 3, held: 1, sold: 1, delivered: 0, wholesaled: 0, returned_to_owner: 0,
+    });
+  });
+
   it('filters by stage', async () => {
     const res = await api.gql(await api.tokenFor('floor'), '{ pianos(stageEq: on_floor) { stage } }');
     const expected = DEMO_PIANOS.filter((p) => p.stage === 'on_floor').length;

@@ -1,11 +1,16 @@
-import { GraphQLBoolean, GraphQLInt, GraphQLNonNull, GraphQLString } from 'graphql';
+import { GraphQLBoolean, GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLObjectType, GraphQLString } from 'graphql';
 
 import { can } from '@/modules/accounts/core/roles';
 import { notAllowed } from '@/server/errors';
 import type { GraphDomain } from '@/server/graphql/domain';
 
 import { Piano } from './piano-model';
-import { createPiano } from './piano-service';
+import { createPiano, stageCounts } from './piano-service';
+
+const StageCount = new GraphQLObjectType({
+  name: 'StageCount',
+  fields: { stage: { type: new GraphQLNonNull(GraphQLString) }, count: { type: new GraphQLNonNull(GraphQLInt) } },
+});
 
 export const pianosGraph: GraphDomain = {
   readModels: [
@@ -18,6 +23,13 @@ export const pianosGraph: GraphDomain = {
       },
     },
   ],
+  queries: () => ({
+    stageCounts: {
+      type: new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(StageCount))),
+      description: 'How many pianos stand in each stage, in stage order.',
+      resolve: (_root, _args, ctx) => stageCounts(ctx.user),
+    },
+  }),
   mutations: (typeOf) => ({
     createPiano: {
       type: new GraphQLNonNull(typeOf(Piano)),

@@ -1,5 +1,5 @@
 import { can } from '@/modules/accounts/core/roles';
-import { pianoInput } from '@/modules/pianos/core/piano';
+import { pianoInput, STAGES, type Stage } from '@/modules/pianos/core/piano';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { notAllowed } from '@/server/errors';
 
@@ -21,4 +21,12 @@ export async function createPiano(actor: Actor, raw: unknown): Promise<Piano> {
     createdById: actor.id,
   });
   return piano.$fetchGraph('createdBy');
+}
+
+/** How many pianos stand in each stage, every stage listed (zero where none). */
+export async function stageCounts(actor: Actor): Promise<{ stage: Stage; count: number }[]> {
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read pianos');
+  const rows = (await Piano.query().select('stage').count('* as count').groupBy('stage')) as unknown as { stage: Stage; count: number }[];
+  const byStage = new Map(rows.map((r) => [r.stage, Number(r.count)]));
+  return STAGES.map((stage) => ({ stage, count: byStage.get(stage) ?? 0 }));
 }

@@ -46,20 +46,22 @@ export type PaletteName = keyof typeof PALETTE;
 export interface StageTone {
   ground: string;
   ink: string;
+  /** a strong line in the stage's colour on a light ground (tile edges) */
+  edge: string;
   mark: 'dot' | 'ring' | 'square' | 'bar';
 }
 
 export const STAGE_TONES: Record<Stage, StageTone> = {
-  received: { ground: '#E3E8EE', ink: '#2E3F52', mark: 'ring' },
-  assessed: { ground: '#EFE6D2', ink: '#5E4712', mark: 'ring' },
-  in_workshop: { ground: '#F3DEC9', ink: '#7A3E12', mark: 'square' },
-  ready: { ground: PALETTE.mossMist, ink: '#2D5A33', mark: 'dot' },
-  on_floor: { ground: PALETTE.felt, ink: PALETTE.ivory, mark: 'dot' },
-  held: { ground: '#F4E2A8', ink: '#5C4506', mark: 'square' },
-  sold: { ground: '#D9E3EF', ink: '#1F3D63', mark: 'dot' },
-  delivered: { ground: '#E6E6E1', ink: '#3F3F3A', mark: 'bar' },
-  wholesaled: { ground: '#ECE0E6', ink: '#5B2F46', mark: 'bar' },
-  returned_to_owner: { ground: '#EDE3DC', ink: '#5A3E2E', mark: 'bar' },
+  received: { ground: '#E3E8EE', ink: '#2E3F52', edge: '#2E3F52', mark: 'ring' },
+  assessed: { ground: '#EFE6D2', ink: '#5E4712', edge: '#5E4712', mark: 'ring' },
+  in_workshop: { ground: '#F3DEC9', ink: '#7A3E12', edge: '#7A3E12', mark: 'square' },
+  ready: { ground: PALETTE.mossMist, ink: '#2D5A33', edge: '#2D5A33', mark: 'dot' },
+  on_floor: { ground: PALETTE.felt, ink: PALETTE.ivory, edge: PALETTE.felt, mark: 'dot' },
+  held: { ground: '#F4E2A8', ink: '#5C4506', edge: '#5C4506', mark: 'square' },
+  sold: { ground: '#D9E3EF', ink: '#1F3D63', edge: '#1F3D63', mark: 'dot' },
+  delivered: { ground: '#E6E6E1', ink: '#3F3F3A', edge: '#3F3F3A', mark: 'bar' },
+  wholesaled: { ground: '#ECE0E6', ink: '#5B2F46', edge: '#5B2F46', mark: 'bar' },
+  returned_to_owner: { ground: '#EDE3DC', ink: '#5A3E2E', edge: '#5A3E2E', mark: 'bar' },
 };
 
 /** Family names as registered with expo-font; the ui layer maps them to the font files. */
@@ -151,6 +153,7 @@ export const TEXT_PAIRS: readonly TextPair[] = [
   { use: 'quiet button label on the page', text: P.felt, background: P.ivory, large: isLarge(T.bodyStrong) },
   { use: 'quiet button label on a card', text: P.felt, background: P.vellum, large: isLarge(T.bodyStrong) },
   { use: 'navigation brand on felt', text: P.ivory, background: P.felt, large: isLarge(T.heading) },
+  { use: 'navigation label on felt', text: P.ivory, background: P.felt, large: isLarge(T.bodyStrong) },
   { use: 'navigation item on felt', text: P.feltLichen, background: P.felt, large: isLarge(T.bodyStrong) },
   { use: 'navigation item on felt, hovered', text: P.feltLichen, background: P.feltShade, large: isLarge(T.small) },
   { use: 'navigation label on felt, hovered', text: P.ivory, background: P.feltShade, large: isLarge(T.bodyStrong) },
@@ -166,4 +169,22 @@ export const TEXT_PAIRS: readonly TextPair[] = [
     background: tone.ground,
     large: isLarge(T.badge),
   })),
+];
+
+export interface EdgePair {
+  use: string;
+  edge: string;
+  background: string;
+}
+
+/** Edges a user must see to use a control: W3C WCAG 2.2 SC 1.4.11 asks 3:1 against what is next to them. */
+export const EDGE_PAIRS: readonly EdgePair[] = [
+  { use: 'text field border on a card', edge: P.linenDark, background: P.vellum },
+  { use: 'text field border on the page', edge: P.linenDark, background: P.ivory },
+  { use: 'focus ring on the page', edge: P.brassShade, background: P.ivory },
+  { use: 'focus ring on a card', edge: P.brassShade, background: P.vellum },
+  { use: 'focus ring on a selected row', edge: P.brassShade, background: P.feltMist },
+  { use: 'focus halo on the felt navigation', edge: P.vellum, background: P.felt },
+  { use: 'choice and button outline on a card', edge: P.felt, background: P.vellum },
+  { use: 'sign-out outline on felt', edge: P.feltLichen, background: P.felt },
 ];

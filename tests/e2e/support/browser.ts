@@ -37,6 +37,9 @@ export async function newPage(context: BrowserContext, viewport: { width: number
   const page = await context.newPage();
   await page.setViewportSize(viewport);
   page.on('pageerror', (err) => console.error('page error:', err.message));
+  // The profile is shared by the file's journeys: each starts signed out, with no draft left behind.
+  await page.goto(`${baseUrl()}/sign-in`);
+  await page.evaluate(() => localStorage.clear());
   return page;
 }
 

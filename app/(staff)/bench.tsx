@@ -1,0 +1,5 @@
+import { BenchScreen } from '@/modules/pianos/ui/bench-screen';
+
+export default function BenchRoute() {
+  return <BenchScreen />;
+}

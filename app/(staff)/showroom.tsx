@@ -1,0 +1,5 @@
+import { ShowroomScreen } from '@/modules/pianos/ui/showroom-screen';
+
+export default function ShowroomRoute() {
+  return <ShowroomScreen />;
+}

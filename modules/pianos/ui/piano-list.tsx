@@ -1,0 +1,125 @@
+import { StyleSheet, Text, View } from 'react-native';
+
+import { STAGE_LABELS } from '@/modules/pianos/core/piano';
+import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { StageBadge } from '@/modules/theme/ui/stage-badge';
+import { Body } from '@/modules/theme/ui/text';
+import { useWide } from '@/modules/theme/ui/use-wide';
+
+import { formatDay, formatKindAndSize, formatYear, makerAndModel } from './piano-format';
+import type { PianoRecord } from './use-pianos';
+
+interface PianoListProps {
+  pianos: readonly PianoRecord[];
+  /** which date the last column shows */
+  dateColumn?: 'received' | 'stageChanged';
+  testID?: string;
+}
+
+const COLUMNS = [
+  { key: 'stock', label: 'Stock no.', flex: 1.1 },
+  { key: 'piano', label: 'Maker and model', flex: 2.6 },
+  { key: 'size', label: 'Kind and size', flex: 2 },
+  { key: 'year', label: 'Year', flex: 1.1 },
+  { key: 'stage', label: 'Stage', flex: 1.6 },
+  { key: 'date', label: '', flex: 1.3 },
+] as const;
+
+function rowLabel(p: PianoRecord): string {
+  return [p.stockNumber, makerAndModel(p.maker, p.model), formatKindAndSize(p.kind, p.sizeCm), `year ${formatYear(p.year, p.yearIsEstimate)}`, STAGE_LABELS[p.stage]].join(', ');
+}
+
+/** Pianos as a list of links: a table-like grid on a wide window, stacked cards on a phone. */
+export function PianoList({ pianos, dateColumn = 'received', testID }: PianoListProps) {
+  const wide = useWide();
+  const dateLabel = dateColumn === 'received' ? 'Taken in' : 'In stage since';
+  const dateOf = (p: PianoRecord) => formatDay(dateColumn === 'received' ? p.createdAt : p.stageChangedAt);
+  return (
+    <View style={wide ? styles.table : undefined} testID={testID}>
+      {wide ? (
+        <View aria-hidden style={[styles.row, styles.headRow]}>
+          {COLUMNS.map((c) => (
+            <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
+              {c.key === 'date' ? dateLabel : c.label}
+            </Text>
+          ))}
+        </View>
+      ) : null}
+      <View role="list" style={wide ? undefined : styles.cards}>
+        {pianos.map((p, index) => (
+          <View role="listitem" key={p.id}>
+            <LinkPressable
+              href={`/pianos/${p.id}`}
+              accessibilityLabel={rowLabel(p)}
+              testID={`piano-row-${p.id}`}
+              insetFocus={wide}
+              style={({ hovered }) => [wide ? styles.row : styles.card, wide && index > 0 && styles.rowRule, hovered && styles.hover]}
+            >
+              {wide ? <WideRow piano={p} date={dateOf(p)} /> : <PhoneCard piano={p} date={`${dateLabel.toLowerCase()} ${dateOf(p)}`} />}
+            </LinkPressable>
+          </View>
+        ))}
+      </View>
+    </View>
+  );
+}
+
+function WideRow({ piano: p, date }: { piano: PianoRecord; date: string }) {
+  return (
+    <>
+      <Body variant="bodyStrong" style={{ flex: COLUMNS[0].flex }}>
+        {p.stockNumber}
+      </Body>
+      <Body style={{ flex: COLUMNS[1].flex }} numberOfLines={2}>
+        {makerAndModel(p.maker, p.model)}
+      </Body>
+      <Body tone="secondary" style={{ flex: COLUMNS[2].flex }}>
+        {formatKindAndSize(p.kind, p.sizeCm)}
+      </Body>
+      <Body tone="secondary" style={{ flex: COLUMNS[3].flex }}>
+        {formatYear(p.year, p.yearIsEstimate)}
+      </Body>
+      <View style={{ flex: COLUMNS[4].flex }}>
+        <StageBadge stage={p.stage} />
+      </View>
+      <Body tone="quiet" variant="small" style={{ flex: COLUMNS[5].flex }}>
+        {date}
+      </Body>
+    </>
+  );
+}
+
+function PhoneCard({ piano: p, date }: { piano: PianoRecord; date: string }) {
+  return (
+    <>
+      <View style={styles.cardTop}>
+        <Body variant="bodyStrong">{p.stockNumber}</Body>
+        <StageBadge stage={p.stage} />
+      </View>
+      <Body variant="subheading">{makerAndModel(p.maker, p.model)}</Body>
+      <Body variant="small" tone="secondary">
+        {formatKindAndSize(p.kind, p.sizeCm)} · {formatYear(p.year, p.yearIsEstimate)} · {date}
+      </Body>
+    </>
+  );
+}
+
+const styles = StyleSheet.create({
+  table: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, overflow: 'hidden' },
+  cards: { gap: SPACE.sm },
+  row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, minHeight: 56 },
+  rowRule: { borderTopWidth: 1, borderTopColor: PALETTE.linen },
+  headRow: { backgroundColor: PALETTE.ivory, borderBottomWidth: 2, borderBottomColor: PALETTE.linen, minHeight: 44, paddingVertical: SPACE.sm },
+  head: { color: PALETTE.walnut },
+  hover: { backgroundColor: PALETTE.feltMist },
+  card: {
+    backgroundColor: PALETTE.vellum,
+    borderWidth: 1,
+    borderColor: PALETTE.linen,
+    borderRadius: RADIUS.lg,
+    padding: SPACE.lg,
+    gap: SPACE.xs,
+  },
+  cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
+});

@@ -1,0 +1,99 @@
+import { StyleSheet, Text, View } from 'react-native';
+
+import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { STAGES, STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
+import { PALETTE, RADIUS, SPACE, STAGE_TONES, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { Button } from '@/modules/theme/ui/button';
+import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { Screen } from '@/modules/theme/ui/screen';
+import { Section } from '@/modules/theme/ui/section';
+import { Body } from '@/modules/theme/ui/text';
+import { useWide } from '@/modules/theme/ui/use-wide';
+
+import { PianoListSection } from './piano-list-section';
+import { COUNT_CAP, useStageCounts } from './use-pianos';
+
+/** The manager's home: how many pianos stand in each stage, then the whole stock. */
+export function StockScreen() {
+  return (
+    <Screen
+      title="Stock"
+      eyebrow="Manager"
+      headingTestID="home-heading"
+      actions={<Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" />}
+    >
+      <Section title="By stage" description="Pick a stage to see its pianos.">
+        <StageCounts />
+      </Section>
+      <Section title="All pianos" description="Newest first.">
+        <PianoListSection filter={{ order: 'newest' }} emptyTitle="No pianos yet" emptyText="Pianos appear here as soon as intake takes one in." testID="stock-list" />
+      </Section>
+    </Screen>
+  );
+}
+
+function StageCounts() {
+  const { counts, error } = useStageCounts();
+  const wide = useWide();
+  const problem = graphProblem(error);
+  if (!counts) return problem ? <Notice tone="error">{problem.message}</Notice> : <Loading label="Counting pianos…" />;
+  const total = STAGES.reduce((sum, s) => sum + counts[s], 0);
+  return (
+    <View style={styles.grid} role="list" testID="stage-counts">
+      {STAGES.map((stage) => (
+        <View role="listitem" key={stage} style={[styles.cell, wide ? styles.cellWide : styles.cellPhone]}>
+          <StageTile stage={stage} count={counts[stage]} />
+        </View>
+      ))}
+      <View role="listitem" style={[styles.cell, wide ? styles.cellWide : styles.cellPhone]}>
+        <View style={[styles.tile, styles.totalTile]}>
+          <Text style={[TYPE_SCALE.title, styles.count]}>{total}</Text>
+          <Body variant="label" tone="secondary">
+            In all
+          </Body>
+        </View>
+      </View>
+    </View>
+  );
+}
+
+function StageTile({ stage, count }: { stage: Stage; count: number }) {
+  const shown = count >= COUNT_CAP ? `${COUNT_CAP}+` : String(count);
+  const tone = STAGE_TONES[stage];
+  return (
+    <LinkPressable
+      href={{ pathname: '/pianos', params: { stage } }}
+      accessibilityLabel={`${STAGE_LABELS[stage]}: ${shown} ${count === 1 ? 'piano' : 'pianos'}`}
+      testID={`stage-count-${stage}`}
+      style={({ hovered }) => [styles.tile, { borderTopColor: tone.edge }, hovered && styles.tileHover]}
+    >
+      <Text style={[TYPE_SCALE.title, styles.count, count === 0 && styles.countNone]}>{shown}</Text>
+      <Body variant="label" tone="secondary">
+        {STAGE_LABELS[stage]}
+      </Body>
+    </LinkPressable>
+  );
+}
+
+const styles = StyleSheet.create({
+  grid: { flexDirection: 'row', flexWrap: 'wrap', marginHorizontal: -SPACE.xs },
+  cell: { padding: SPACE.xs },
+  cellPhone: { width: '50%' },
+  cellWide: { width: '16.66%', minWidth: 140 },
+  tile: {
+    minHeight: 88,
+    backgroundColor: PALETTE.vellum,
+    borderWidth: 1,
+    borderColor: PALETTE.linen,
+    borderTopWidth: 4,
+    borderRadius: RADIUS.sm,
+    paddingHorizontal: SPACE.md,
+    paddingVertical: SPACE.sm,
+    justifyContent: 'space-between',
+  },
+  tileHover: { backgroundColor: PALETTE.feltMist },
+  totalTile: { backgroundColor: PALETTE.ivory, borderTopColor: PALETTE.brass, borderStyle: 'solid' },
+  count: { color: PALETTE.ebony },
+  countNone: { color: PALETTE.pinGrey },
+});
