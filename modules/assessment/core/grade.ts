@@ -169,7 +169,7 @@ function gradeStrings(m: Measurements): Finding[] {
   if (m.brokenStrings) {
     const n = m.brokenStrings;
     const strings = `${n} string${n === 1 ? '' : 's'}`;
-    out.push(finding('strings', 'strings.broken', 'needs_work', `${n} broken string${n === 1 ? '' : 's'}.`, [{ task: 'replace_broken_strings', note: strings }]));
+    out.push(finding('strings', 'strings.broken', 'needs_work', `${n} broken string${n === 1 ? '' : 's'}.`, [{ task: 'replace_broken_strings', quantity: n, note: strings }]));
   }
   return out;
 }

@@ -42,6 +42,8 @@ export const WORK_TASK_LABELS: Record<WorkTask, string> = {
 export interface WorkItem {
   task: WorkTask;
   hours?: number;
+  /** How many units the task covers where the rate card prices it per unit (strings, keytops). */
+  quantity?: number;
   note?: string;
   /** A cheaper partial fix offered instead of the full one. */
   alternativeTo?: WorkTask;
