@@ -8,6 +8,7 @@ pg.types.setTypeParser(1184, (v) => new Date(v).toISOString()); // timestamptz
 pg.types.setTypeParser(1114, (v) => new Date(`${v}Z`).toISOString()); // timestamp
 pg.types.setTypeParser(1082, (v) => v); // date
 pg.types.setTypeParser(20, (v) => Number(v)); // bigint counts
+pg.types.setTypeParser(1700, (v) => Number(v)); // numeric: hours, humidity (well within a double's precision)
 
 export const MIGRATIONS_DIR = path.resolve(__dirname, '../../migrations');
 

@@ -49,3 +49,12 @@ export const correctionInput = z
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
   })
   .strict();
+
+/** Re-measurements after workshop work: only the fields measured again; the rest carry over. */
+export const remeasureInput = z
+  .object({
+    pianoId: z.number().int().positive(),
+    measurements: measurementsInput,
+    changeNote: z.string().trim().max(500).nullish(),
+  })
+  .strict();

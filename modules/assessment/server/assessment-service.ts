@@ -5,12 +5,13 @@ import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { gradeAssessment } from '@/modules/assessment/core/grade';
 import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
-import { correctionInput, intakeInput } from '@/modules/assessment/core/intake-input';
+import { correctionInput, intakeInput, remeasureInput } from '@/modules/assessment/core/intake-input';
 import { diffMeasurements, type FieldChange } from '@/modules/assessment/core/measurement-diff';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-input';
 import { Photo } from '@/modules/photos/server/photo-model';
 import { Piano } from '@/modules/pianos/server/piano-model';
+import { movePiano, recordArrival } from '@/modules/pianos/server/stage-service';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { Assessment, GradeRuleSet, Intake } from './assessment-models';
@@ -74,6 +75,7 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       caseNotes: p.caseNotes ?? null,
       createdById: actor.id,
     });
+    await recordArrival(trx, piano, actor.id, actor.role);
     await Intake.query(trx).insert({
       pianoId: piano.id,
       sellerName: input.seller.name,
@@ -88,17 +90,26 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
     });
     const assessment = await insertAssessment(trx, actor, piano.id, 1, input.measurements, grade, null);
     // The inspection is in: the piano moves on from received.
-    await Piano.query(trx).patch({ stage: 'assessed', stageChangedAt: new Date().toISOString() }).where({ id: piano.id, stage: 'received' });
+    await movePiano({ pianoId: piano.id, action: 'submit_assessment', by: actor.role, userId: actor.id }, trx);
     await attachPhotos(trx, actor, piano.id, input.photoIds);
     return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version: 1, grade };
   });
 }
 
-function insertAssessment(trx: Knex.Transaction, actor: Actor, pianoId: number, version: number, measurements: Measurements, grade: SubmittedIntake['grade'], changeNote: string | null) {
+function insertAssessment(
+  trx: Knex.Transaction,
+  actor: Actor,
+  pianoId: number,
+  version: number,
+  measurements: Measurements,
+  grade: SubmittedIntake['grade'],
+  changeNote: string | null,
+  kind: Assessment['kind'] = 'intake',
+) {
   return Assessment.query(trx).insertAndFetch({
     pianoId,
     version,
-    kind: 'intake',
+    kind,
     measurements,
     grade,
     score: grade.score,
@@ -129,6 +140,31 @@ export async function correctAssessment(actor: Actor, raw: unknown): Promise<Sub
     });
   } catch (err) {
     if (err instanceof UniqueViolationError) throw new AppError('CONFLICT', 'Someone else corrected this assessment at the same moment: reload and try again.');
+    throw err;
+  }
+}
+
+/** After workshop work: the areas measured again, over the latest assessment, graded as a post-workshop version. */
+export async function submitRemeasurement(actor: Actor, raw: unknown): Promise<SubmittedIntake> {
+  if (!can(actor.role, 'remeasure')) throw notAllowed('submit re-measurements');
+  const input = remeasureInput.parse(raw);
+  if (!Object.keys(input.measurements).length) throw badInput('measurements', 'give at least one re-measured value');
+  try {
+    return await Piano.transaction(async (trx) => {
+      const piano = await Piano.query(trx).findById(input.pianoId).forUpdate();
+      if (!piano) throw notFound(`piano ${input.pianoId}`);
+      if (piano.stage !== 'in_workshop') throw new AppError('CONFLICT', 'Re-measurements are taken while the piano is in the workshop.');
+      const latest = await Assessment.query(trx).where('piano_id', piano.id).orderBy('version', 'desc').first();
+      if (!latest) throw notFound(`an assessment of piano ${piano.stockNumber}`);
+      const measurements = { ...latest.measurements, ...input.measurements };
+      const grade = gradeAssessment(measurements, await currentRules(trx));
+      const version = latest.version + 1;
+      const note = input.changeNote || 'Re-measured after workshop work.';
+      const assessment = await insertAssessment(trx, actor, piano.id, version, measurements, grade, note, 'post_workshop');
+      return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version, grade };
+    });
+  } catch (err) {
+    if (err instanceof UniqueViolationError) throw new AppError('CONFLICT', 'Another assessment was saved at the same moment: reload and try again.');
     throw err;
   }
 }

@@ -6,6 +6,8 @@ import type { GraphDomain } from '@/server/graphql/domain';
 
 import { Piano } from './piano-model';
 import { createPiano, stageCounts } from './piano-service';
+import { movePiano, stageHistory } from './stage-service';
+import { GraphQLJSON } from '@/server/graphql/json-scalar';
 
 const StageCount = new GraphQLObjectType({
   name: 'StageCount',
@@ -29,8 +31,21 @@ export const pianosGraph: GraphDomain = {
       description: 'How many pianos stand in each stage, in stage order.',
       resolve: (_root, _args, ctx) => stageCounts(ctx.user),
     },
+    stageHistory: {
+      type: new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(GraphQLJSON))),
+      description: 'Every stage move of a piano, oldest first: who, when, from, to, why.',
+      args: { pianoId: { type: new GraphQLNonNull(GraphQLInt) } },
+      resolve: (_root, args: { pianoId: number }, ctx) => stageHistory(ctx.user.role, args.pianoId),
+    },
   }),
   mutations: (typeOf) => ({
+    movePiano: {
+      type: new GraphQLNonNull(typeOf(Piano)),
+      description: 'One move through the stages (put on the floor, sell, deliver...), checked by role and stage.',
+      args: { pianoId: { type: new GraphQLNonNull(GraphQLInt) }, action: { type: new GraphQLNonNull(GraphQLString) }, why: { type: GraphQLString } },
+      resolve: async (_root, args: { pianoId: number; action: string; why?: string }, ctx) =>
+        (await movePiano({ pianoId: args.pianoId, action: args.action as never, by: ctx.user.role, userId: ctx.user.id, why: args.why })).$toJson(),
+    },
     createPiano: {
       type: new GraphQLNonNull(typeOf(Piano)),
       args: {

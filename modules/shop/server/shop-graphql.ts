@@ -1,0 +1,78 @@
+import { GraphQLBoolean, GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLString } from 'graphql';
+
+import { submitRemeasurement } from '@/modules/assessment/server/assessment-service';
+import { Piano } from '@/modules/pianos/server/piano-model';
+import { notAllowed } from '@/server/errors';
+import type { GraphDomain } from '@/server/graphql/domain';
+import { GraphQLJSON } from '@/server/graphql/json-scalar';
+
+import { WorkItem } from './shop-models';
+import {
+  addNote,
+  addPart,
+  addWorkItem,
+  approvePlan,
+  currentRateCard,
+  decide,
+  finishWorkshop,
+  itemDetail,
+  logClimate,
+  logTime,
+  overruns,
+  planView,
+  recentClimate,
+  removeWorkItem,
+  setRateCard,
+  setWorkItemDone,
+  startTimer,
+  stopTimer,
+  updateWorkItem,
+  workQueue,
+} from './shop-service';
+
+const int = { type: new GraphQLNonNull(GraphQLInt) };
+const json = { type: new GraphQLNonNull(GraphQLJSON) };
+const jsonList = new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(GraphQLJSON)));
+const toJson = (m: { $toJson?: () => unknown }) => (m.$toJson ? m.$toJson() : m);
+
+export const shopGraph: GraphDomain = {
+  readModels: [
+    {
+      model: WorkItem,
+      fieldName: 'workItem',
+      listFieldName: 'workItems',
+      readPolicy: (_builder, ctx) => {
+        if (ctx.user.role !== 'technician' && ctx.user.role !== 'manager') throw notAllowed('read workshop items');
+      },
+    },
+  ],
+  queries: () => ({
+    rateCard: { type: json.type, resolve: () => currentRateCard() },
+    workQueue: { type: jsonList, description: 'Your items and the unassigned ones, by priority and due date.', resolve: (_r, _a, ctx) => workQueue(ctx.user) },
+    workItemDetail: { type: json.type, args: { itemId: int }, resolve: (_r, a: { itemId: number }, ctx) => itemDetail(ctx.user, a.itemId) },
+    workPlan: { type: GraphQLJSON, args: { pianoId: int }, resolve: (_r, a: { pianoId: number }, ctx) => planView(ctx.user, a.pianoId) },
+    workshopOverruns: { type: jsonList, resolve: (_r, _a, ctx) => overruns(ctx.user) },
+    climateReadings: { type: jsonList, resolve: (_r, _a, ctx) => recentClimate(ctx.user) },
+  }),
+  mutations: (typeOf) => ({
+    decidePiano: {
+      type: json.type,
+      args: { pianoId: int, decision: { type: new GraphQLNonNull(GraphQLString) }, why: { type: GraphQLString } },
+      resolve: (_r, a: { pianoId: number; decision: string; why?: string }, ctx) => decide(ctx.user, a),
+    },
+    addWorkItem: { type: json.type, args: { pianoId: int, item: json }, resolve: async (_r, a: { pianoId: number; item: unknown }, ctx) => toJson(await addWorkItem(ctx.user, a.pianoId, a.item)) },
+    updateWorkItem: { type: json.type, args: { itemId: int, patch: json }, resolve: async (_r, a: { itemId: number; patch: unknown }, ctx) => toJson(await updateWorkItem(ctx.user, a.itemId, a.patch)) },
+    removeWorkItem: { type: new GraphQLNonNull(GraphQLBoolean), args: { itemId: int }, resolve: (_r, a: { itemId: number }, ctx) => removeWorkItem(ctx.user, a.itemId) },
+    approvePlan: { type: new GraphQLNonNull(typeOf(Piano)), args: { pianoId: int, why: { type: GraphQLString } }, resolve: async (_r, a: { pianoId: number; why?: string }, ctx) => toJson(await approvePlan(ctx.user, a.pianoId, a.why)) },
+    startTimer: { type: json.type, args: { itemId: int }, resolve: async (_r, a: { itemId: number }, ctx) => toJson(await startTimer(ctx.user, a.itemId)) },
+    stopTimer: { type: json.type, args: { itemId: int }, resolve: async (_r, a: { itemId: number }, ctx) => toJson(await stopTimer(ctx.user, a.itemId)) },
+    logTime: { type: json.type, args: { entry: json }, resolve: async (_r, a: { entry: unknown }, ctx) => toJson(await logTime(ctx.user, a.entry)) },
+    addPart: { type: json.type, args: { part: json }, resolve: async (_r, a: { part: unknown }, ctx) => toJson(await addPart(ctx.user, a.part)) },
+    addWorkNote: { type: json.type, args: { itemId: int, body: { type: new GraphQLNonNull(GraphQLString) } }, resolve: async (_r, a: { itemId: number; body: string }, ctx) => toJson(await addNote(ctx.user, a.itemId, a.body)) },
+    setWorkItemDone: { type: json.type, args: { itemId: int, done: { type: new GraphQLNonNull(GraphQLBoolean) } }, resolve: async (_r, a: { itemId: number; done: boolean }, ctx) => toJson(await setWorkItemDone(ctx.user, a.itemId, a.done)) },
+    submitRemeasurement: { type: json.type, args: { input: json }, resolve: (_r, a: { input: unknown }, ctx) => submitRemeasurement(ctx.user, a.input) },
+    finishWorkshop: { type: new GraphQLNonNull(typeOf(Piano)), args: { pianoId: int }, resolve: async (_r, a: { pianoId: number }, ctx) => toJson(await finishWorkshop(ctx.user, a.pianoId)) },
+    logClimate: { type: json.type, args: { reading: json }, resolve: (_r, a: { reading: unknown }, ctx) => logClimate(ctx.user, a.reading) },
+    setRateCard: { type: json.type, args: { card: json }, resolve: (_r, a: { card: unknown }, ctx) => setRateCard(ctx.user, a.card) },
+  }),
+};

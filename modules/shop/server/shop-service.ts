@@ -1,0 +1,439 @@
+import type { Knex } from 'knex';
+import { UniqueViolationError } from 'objection';
+
+import { can, type Role } from '@/modules/accounts/core/roles';
+import { User } from '@/modules/accounts/server/user-model';
+import type { Actor } from '@/modules/accounts/server/user-service';
+import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
+import { Assessment } from '@/modules/assessment/server/assessment-models';
+import { Piano } from '@/modules/pianos/server/piano-model';
+import { movePiano } from '@/modules/pianos/server/stage-service';
+import { cautionsFor } from '@/modules/shop/core/cautions';
+import { readClimate } from '@/modules/shop/core/climate';
+import { estimateReconditioning } from '@/modules/shop/core/estimate';
+import { roundMinor } from '@/modules/shop/core/money';
+import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
+import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
+import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
+
+import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, WorkItem, WorkNote, WorkPlan } from './shop-models';
+
+const isManager = (a: Actor) => a.role === 'manager';
+const atBench = (a: Actor) => a.role === 'technician' || a.role === 'manager';
+function requireRole(actor: Actor, ok: (a: Actor) => boolean, what: string): void {
+  if (!ok(actor)) throw notAllowed(what);
+}
+
+// ---- rate card ----
+
+export async function currentRateCard(trx?: Knex.Transaction): Promise<RateCard> {
+  const latest = await RateCardSet.query(trx).orderBy('id', 'desc').first();
+  return latest ? latest.card : demoRateCard;
+}
+
+export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard> {
+  requireRole(actor, isManager, 'change the rate card');
+  const input = rateCardInput.parse(raw);
+  return RateCardSet.transaction(async (trx) => {
+    await trx.raw('lock table rate_cards in exclusive mode');
+    const { count } = (await RateCardSet.query(trx).count('* as count').first()) as unknown as { count: number };
+    const card: RateCard = { ...input, version: `rates-${Number(count) + 1}` };
+    await RateCardSet.query(trx).insert({ version: card.version, card, createdById: actor.id });
+    return card;
+  });
+}
+
+// ---- decision and plan ----
+
+async function latestAssessment(trx: Knex.Transaction | undefined, pianoId: number) {
+  return Assessment.query(trx).where('piano_id', pianoId).orderBy('version', 'desc').first();
+}
+
+/** The manager's choice for an assessed piano. Recondition drafts a plan; the others move the piano. */
+export async function decide(actor: Actor, raw: { pianoId: number; decision: string; why?: string | null }): Promise<{ stage: string; planId: number | null }> {
+  requireRole(actor, isManager, 'decide what happens to a piano');
+  if (!DECISIONS.includes(raw.decision as Decision)) throw badInput('decision', `must be one of ${DECISIONS.join(', ')}`);
+  const decision = raw.decision as Decision;
+  if (decision !== 'recondition') {
+    const piano = await movePiano({ pianoId: raw.pianoId, action: decision, by: actor.role, userId: actor.id, why: raw.why });
+    return { stage: piano.stage, planId: null };
+  }
+  return Piano.transaction(async (trx) => {
+    const piano = await Piano.query(trx).findById(raw.pianoId).forUpdate();
+    if (!piano) throw notFound(`piano ${raw.pianoId}`);
+    if (piano.stage !== 'assessed') throw new AppError('CONFLICT', `A piano in stage "${piano.stage}" cannot get a reconditioning plan; it must be assessed.`);
+    const existing = await WorkPlan.query(trx).findOne({ piano_id: piano.id });
+    if (existing) return { stage: piano.stage, planId: existing.id };
+    const assessment = await latestAssessment(trx, piano.id);
+    if (!assessment) throw notFound(`an assessment of ${piano.stockNumber}`);
+    const card = await currentRateCard(trx);
+    const estimate = estimateReconditioning(assessment.grade.findings, card);
+    const plan = await WorkPlan.query(trx).insertAndFetch({
+      pianoId: piano.id,
+      assessmentId: assessment.id,
+      rateCardVersion: card.version,
+      currency: card.currency,
+      hourlyRateMinor: card.hourlyRateMinor,
+      createdById: actor.id,
+    });
+    for (const line of estimate.lines) {
+      await WorkItem.query(trx).insert({
+        planId: plan.id,
+        pianoId: piano.id,
+        task: line.task,
+        title: line.label,
+        estimatedHours: line.hours,
+        estimatedPartsMinor: line.partsMinor,
+        quantity: line.quantity,
+        because: line.because,
+        priority: 2,
+      });
+    }
+    return { stage: piano.stage, planId: plan.id };
+  });
+}
+
+async function planFor(trx: Knex.Transaction | undefined, pianoId: number): Promise<WorkPlan> {
+  const plan = await WorkPlan.query(trx).findOne({ piano_id: pianoId });
+  if (!plan) throw notFound(`a reconditioning plan for piano ${pianoId}`);
+  return plan;
+}
+
+async function checkAssignee(id: number | null | undefined): Promise<void> {
+  if (id == null) return;
+  const user = await User.query().findById(id);
+  if (!user || !user.active || !(['technician', 'manager'] as Role[]).includes(user.role)) throw badInput('assignedToId', 'must be an active technician or manager');
+}
+
+export async function addWorkItem(actor: Actor, pianoId: number, raw: unknown): Promise<WorkItem> {
+  requireRole(actor, isManager, 'plan workshop work');
+  const input = workItemInput.parse(raw);
+  if (input.task === 'custom' && !input.title) throw badInput('title', 'is required for a custom item');
+  await checkAssignee(input.assignedToId);
+  const plan = await planFor(undefined, pianoId);
+  return WorkItem.query().insertAndFetch({
+    planId: plan.id,
+    pianoId,
+    task: input.task as WorkTask | 'custom',
+    title: input.title ?? WORK_TASK_LABELS[input.task as WorkTask],
+    estimatedHours: input.estimatedHours,
+    estimatedPartsMinor: input.estimatedPartsMinor,
+    quantity: input.quantity,
+    because: [],
+    assignedToId: input.assignedToId ?? null,
+    priority: input.priority,
+    dueOn: input.dueOn ?? null,
+  });
+}
+
+async function loadItem(trx: Knex.Transaction | undefined, itemId: number): Promise<WorkItem> {
+  const item = await WorkItem.query(trx).findById(itemId);
+  if (!item) throw notFound(`work item ${itemId}`);
+  return item;
+}
+
+export async function updateWorkItem(actor: Actor, itemId: number, raw: unknown): Promise<WorkItem> {
+  requireRole(actor, isManager, 'change workshop work');
+  const patch = workItemPatch.parse(raw);
+  await checkAssignee(patch.assignedToId);
+  const item = await loadItem(undefined, itemId);
+  return item.$query().patchAndFetch(patch as Partial<WorkItem>);
+}
+
+export async function removeWorkItem(actor: Actor, itemId: number): Promise<boolean> {
+  requireRole(actor, isManager, 'drop workshop work');
+  return WorkItem.transaction(async (trx) => {
+    const item = await loadItem(trx, itemId);
+    const logged = await TimeEntry.query(trx).where('work_item_id', itemId).resultSize();
+    const parts = await PartUse.query(trx).where('work_item_id', itemId).resultSize();
+    if (logged || parts || item.status !== 'planned') throw new AppError('CONFLICT', 'This item has work logged against it: mark it done instead of dropping it.');
+    await item.$query(trx).delete();
+    return true;
+  });
+}
+
+export async function approvePlan(actor: Actor, pianoId: number, why?: string | null): Promise<Piano> {
+  requireRole(actor, isManager, 'approve plans');
+  return Piano.transaction(async (trx) => {
+    const plan = await planFor(trx, pianoId);
+    const piano = await movePiano(
+      {
+        pianoId,
+        action: 'approve_plan',
+        by: actor.role,
+        userId: actor.id,
+        why,
+        facts: async () => ({ planApproved: (await WorkItem.query(trx).where('plan_id', plan.id).resultSize()) > 0 }),
+      },
+      trx,
+    );
+    await plan.$query(trx).patch({ approvedById: actor.id, approvedAt: new Date().toISOString() });
+    return piano;
+  });
+}
+
+// ---- the bench ----
+
+async function benchItem(trx: Knex.Transaction | undefined, actor: Actor, itemId: number): Promise<WorkItem> {
+  requireRole(actor, atBench, 'log workshop work');
+  const item = await loadItem(trx, itemId);
+  if (actor.role === 'technician' && item.assignedToId != null && item.assignedToId !== actor.id) throw notAllowed('log work on an item assigned to someone else');
+  const piano = await Piano.query(trx).findById(item.pianoId);
+  if (piano?.stage !== 'in_workshop') throw new AppError('CONFLICT', 'Work is logged only while the piano is in the workshop.');
+  return item;
+}
+
+export async function startTimer(actor: Actor, itemId: number): Promise<TimeEntry> {
+  try {
+    return await WorkItem.transaction(async (trx) => {
+      const item = await benchItem(trx, actor, itemId);
+      if (item.status === 'done') throw new AppError('CONFLICT', 'This item is done: reopen it before logging more time.');
+      // Starting work on an unassigned item takes it.
+      await item.$query(trx).patch({ status: 'in_progress', ...(item.assignedToId == null ? { assignedToId: actor.id } : {}) });
+      return TimeEntry.query(trx).insertAndFetch({ workItemId: itemId, technicianId: actor.id, startedAt: new Date().toISOString() });
+    });
+  } catch (err) {
+    if (err instanceof UniqueViolationError) throw new AppError('CONFLICT', 'Your timer is already running on another item: stop it first.');
+    throw err;
+  }
+}
+
+export async function stopTimer(actor: Actor, itemId: number): Promise<TimeEntry> {
+  await benchItem(undefined, actor, itemId);
+  const running = await TimeEntry.query().findOne({ work_item_id: itemId, technician_id: actor.id, ended_at: null, minutes: null });
+  if (!running) throw new AppError('CONFLICT', 'No timer of yours is running on this item.');
+  return running.$query().patchAndFetch({ endedAt: new Date().toISOString() });
+}
+
+export async function logTime(actor: Actor, raw: unknown): Promise<TimeEntry> {
+  const input = timeEntryInput.parse(raw);
+  await benchItem(undefined, actor, input.workItemId);
+  return TimeEntry.query().insertAndFetch({ workItemId: input.workItemId, technicianId: actor.id, startedAt: new Date().toISOString(), minutes: input.minutes, note: input.note ?? null });
+}
+
+export async function addPart(actor: Actor, raw: unknown): Promise<PartUse> {
+  const input = partUseInput.parse(raw);
+  await benchItem(undefined, actor, input.workItemId);
+  return PartUse.query().insertAndFetch({ ...input, loggedById: actor.id });
+}
+
+export async function addNote(actor: Actor, itemId: number, body: string): Promise<WorkNote> {
+  const text = (body ?? '').trim();
+  if (!text || text.length > 2000) throw badInput('body', 'must be 1 to 2000 characters');
+  await benchItem(undefined, actor, itemId);
+  return WorkNote.query().insertAndFetch({ workItemId: itemId, authorId: actor.id, body: text });
+}
+
+export async function setWorkItemDone(actor: Actor, itemId: number, done: boolean): Promise<WorkItem> {
+  return WorkItem.transaction(async (trx) => {
+    const item = await benchItem(trx, actor, itemId);
+    const now = new Date().toISOString();
+    await TimeEntry.query(trx).patch({ endedAt: now }).where({ work_item_id: itemId }).whereNull('ended_at').whereNull('minutes');
+    return item.$query(trx).patchAndFetch(done ? { status: 'done', doneAt: now } : { status: 'in_progress', doneAt: null });
+  });
+}
+
+/** Every item done, and a post-workshop assessment since the plan was approved: the piano is ready. */
+export async function finishWorkshop(actor: Actor, pianoId: number): Promise<Piano> {
+  return Piano.transaction(async (trx) => {
+    const plan = await planFor(trx, pianoId);
+    return movePiano(
+      {
+        pianoId,
+        action: 'finish_workshop',
+        by: actor.role,
+        userId: actor.id,
+        facts: async () => {
+          const items = await WorkItem.query(trx).where('plan_id', plan.id);
+          const post = await Assessment.query(trx).where({ piano_id: pianoId, kind: 'post_workshop' }).where('submitted_at', '>=', plan.approvedAt ?? plan.createdAt).resultSize();
+          return { allWorkDone: items.length > 0 && items.every((i) => i.status === 'done'), postWorkshopAssessed: post > 0 };
+        },
+      },
+      trx,
+    );
+  });
+}
+
+// ---- reading the work ----
+
+function minutesOf(entries: TimeEntry[], now: number): number {
+  return entries.reduce((sum, e) => sum + (e.minutes ?? Math.round(((e.endedAt ? Date.parse(e.endedAt) : now) - Date.parse(e.startedAt)) / 60000)), 0);
+}
+
+export interface ItemView {
+  id: number;
+  pianoId: number;
+  task: string;
+  title: string;
+  status: string;
+  priority: number;
+  dueOn: string | null;
+  assignedToId: number | null;
+  assignedTo: string | null;
+  because: string[];
+  quantity: number;
+  estimatedHours: number;
+  estimatedCostMinor: number;
+  loggedMinutes: number;
+  partsMinor: number;
+  actualCostMinor: number;
+  timerRunningFor: number[];
+  cautions: { kind: string; text: string }[];
+}
+
+async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) => number): Promise<ItemView[]> {
+  if (!items.length) return [];
+  const ids = items.map((i) => i.id);
+  const [entries, parts, users] = await Promise.all([
+    TimeEntry.query().whereIn('work_item_id', ids),
+    PartUse.query().whereIn('work_item_id', ids),
+    WorkItem.knex()('users').select('id', 'name'),
+  ]);
+  const names = new Map((users as { id: number; name: string }[]).map((u) => [u.id, u.name]));
+  const now = Date.now();
+  return items.map((i) => {
+    const mine = entries.filter((e) => e.workItemId === i.id);
+    const loggedMinutes = minutesOf(mine, now);
+    const partsMinor = parts.filter((p) => p.workItemId === i.id).reduce((s, p) => s + p.costMinor * p.quantity, 0);
+    const rate = hourlyRateMinor(i.pianoId);
+    return {
+      id: i.id,
+      pianoId: i.pianoId,
+      task: i.task,
+      title: i.title,
+      status: i.status,
+      priority: i.priority,
+      dueOn: i.dueOn,
+      assignedToId: i.assignedToId,
+      assignedTo: i.assignedToId != null ? (names.get(i.assignedToId) ?? null) : null,
+      because: i.because,
+      quantity: i.quantity,
+      estimatedHours: i.estimatedHours,
+      estimatedCostMinor: roundMinor(i.estimatedHours * rate) + i.estimatedPartsMinor,
+      loggedMinutes,
+      partsMinor,
+      actualCostMinor: roundMinor((loggedMinutes / 60) * rate) + partsMinor,
+      timerRunningFor: mine.filter((e) => !e.endedAt && e.minutes == null).map((e) => e.technicianId),
+      cautions: cautionsFor(i.task),
+    };
+  });
+}
+
+/** A technician's queue: their items and the unassigned ones on pianos in the workshop, by priority and due date. */
+export async function workQueue(actor: Actor): Promise<(ItemView & { stockNumber: string; piano: string })[]> {
+  requireRole(actor, atBench, 'see the work queue');
+  const q = WorkItem.query()
+    .join('pianos', 'pianos.id', 'work_items.piano_id')
+    .where('pianos.stage', 'in_workshop')
+    .whereNot('work_items.status', 'done')
+    .orderBy([{ column: 'work_items.priority' }, { column: 'work_items.due_on', nulls: 'last' }, { column: 'work_items.id' }])
+    .select('work_items.*');
+  if (actor.role === 'technician') q.where((w) => w.where('work_items.assigned_to_id', actor.id).orWhereNull('work_items.assigned_to_id'));
+  const items = await q;
+  const plans = await WorkPlan.query().whereIn('piano_id', [...new Set(items.map((i) => i.pianoId))]);
+  const pianos = await Piano.query().whereIn('id', [...new Set(items.map((i) => i.pianoId))]);
+  const views = await itemViews(items, (id) => plans.find((p) => p.pianoId === id)?.hourlyRateMinor ?? 0);
+  return views.map((v) => {
+    const p = pianos.find((x) => x.id === v.pianoId)!;
+    return { ...v, stockNumber: p.stockNumber, piano: [p.maker, p.model].filter(Boolean).join(' ') };
+  });
+}
+
+export interface PlanView {
+  planId: number;
+  pianoId: number;
+  currency: string;
+  hourlyRateMinor: number;
+  rateCardVersion: string;
+  approvedAt: string | null;
+  items: ItemView[];
+  totals: { estimatedHours: number; loggedHours: number; estimatedCostMinor: number; actualCostMinor: number; varianceMinor: number };
+  byTask: { task: string; estimatedHours: number; loggedHours: number; estimatedCostMinor: number; actualCostMinor: number; varianceMinor: number }[];
+}
+
+const hoursOf = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
+
+export async function planView(actor: Actor, pianoId: number): Promise<PlanView | null> {
+  requireRole(actor, (a) => can(a.role, 'readPianos') && a.role !== 'floor', 'see workshop plans');
+  const plan = await WorkPlan.query().findOne({ piano_id: pianoId });
+  if (!plan) return null;
+  const items = await itemViews(await WorkItem.query().where('plan_id', plan.id).orderBy([{ column: 'priority' }, { column: 'id' }]), () => plan.hourlyRateMinor);
+  const byTaskMap = new Map<string, PlanView['byTask'][number]>();
+  for (const i of items) {
+    const t = byTaskMap.get(i.task) ?? { task: i.task, estimatedHours: 0, loggedHours: 0, estimatedCostMinor: 0, actualCostMinor: 0, varianceMinor: 0 };
+    t.estimatedHours += i.estimatedHours;
+    t.loggedHours = hoursOf(t.loggedHours * 60 + i.loggedMinutes);
+    t.estimatedCostMinor += i.estimatedCostMinor;
+    t.actualCostMinor += i.actualCostMinor;
+    t.varianceMinor = t.actualCostMinor - t.estimatedCostMinor;
+    byTaskMap.set(i.task, t);
+  }
+  const estimatedCostMinor = items.reduce((s, i) => s + i.estimatedCostMinor, 0);
+  const actualCostMinor = items.reduce((s, i) => s + i.actualCostMinor, 0);
+  return {
+    planId: plan.id,
+    pianoId,
+    currency: plan.currency,
+    hourlyRateMinor: plan.hourlyRateMinor,
+    rateCardVersion: plan.rateCardVersion,
+    approvedAt: plan.approvedAt,
+    items,
+    totals: {
+      estimatedHours: items.reduce((s, i) => s + i.estimatedHours, 0),
+      loggedHours: hoursOf(items.reduce((s, i) => s + i.loggedMinutes, 0)),
+      estimatedCostMinor,
+      actualCostMinor,
+      varianceMinor: actualCostMinor - estimatedCostMinor,
+    },
+    byTask: [...byTaskMap.values()],
+  };
+}
+
+/**
+ * The manager's list of pianos whose workshop work runs over, worst first. While work goes on, the
+ * overrun is what items already cost beyond their own estimates; items not started do not offset it.
+ */
+export async function overruns(actor: Actor): Promise<{ pianoId: number; stockNumber: string; stage: string; overrunMinor: number; itemsOver: string[]; estimatedCostMinor: number; actualCostMinor: number; varianceMinor: number; currency: string }[]> {
+  requireRole(actor, isManager, 'see workshop overruns');
+  const plans = await WorkPlan.query().whereNotNull('approved_at');
+  const out = [];
+  for (const plan of plans) {
+    const view = (await planView(actor, plan.pianoId))!;
+    const over = view.items.filter((i) => i.actualCostMinor > i.estimatedCostMinor);
+    if (over.length) {
+      const piano = (await Piano.query().findById(plan.pianoId))!;
+      const overrunMinor = over.reduce((s, i) => s + i.actualCostMinor - i.estimatedCostMinor, 0);
+      out.push({ pianoId: plan.pianoId, stockNumber: piano.stockNumber, stage: piano.stage, overrunMinor, itemsOver: over.map((i) => i.title), ...view.totals, currency: plan.currency });
+    }
+  }
+  return out.sort((a, b) => b.overrunMinor - a.overrunMinor);
+}
+
+export async function itemDetail(actor: Actor, itemId: number) {
+  requireRole(actor, atBench, 'open workshop items');
+  const item = await loadItem(undefined, itemId);
+  const plan = (await WorkPlan.query().findById(item.planId))!;
+  const [view] = await itemViews([item], () => plan.hourlyRateMinor);
+  const [entries, parts, notes] = await Promise.all([
+    TimeEntry.query().where('work_item_id', itemId).orderBy('id'),
+    PartUse.query().where('work_item_id', itemId).orderBy('id'),
+    WorkNote.query().where('work_item_id', itemId).orderBy('id'),
+  ]);
+  return { ...view, currency: plan.currency, entries, parts, notes };
+}
+
+// ---- climate ----
+
+export async function logClimate(actor: Actor, raw: unknown) {
+  requireRole(actor, atBench, 'log the workshop climate');
+  const input = climateInput.parse(raw);
+  const reading = readClimate(input.tempC, input.relativeHumidity);
+  const row = await ClimateReadingRow.query().insertAndFetch({ tempC: input.tempC, relativeHumidity: input.relativeHumidity, emcPct: Math.round(reading.emcPct * 100) / 100, loggedById: actor.id });
+  return { ...row, warning: reading.warning };
+}
+
+export async function recentClimate(actor: Actor, limit = 20) {
+  requireRole(actor, atBench, 'read the workshop climate');
+  const rows = await ClimateReadingRow.query().orderBy('at', 'desc').limit(limit);
+  return rows.map((r) => ({ ...r, warning: readClimate(r.tempC, r.relativeHumidity).warning }));
+}
