@@ -1,7 +1,13 @@
 import type { Knex } from 'knex';
 
 import type { Role } from '@/modules/accounts/core/roles';
+import { gradeAssessment } from '@/modules/assessment/core/grade';
+import { defaultRules } from '@/modules/assessment/core/grade-rules';
+import type { Measurements } from '@/modules/assessment/core/measurements';
 import type { PianoKind, Stage } from '@/modules/pianos/core/piano';
+import { readClimate } from '@/modules/shop/core/climate';
+import { estimateReconditioning } from '@/modules/shop/core/estimate';
+import { demoRateCard } from '@/modules/shop/core/rate-card';
 
 // An invented dealer, Larkspur Lane Pianos, with invented staff, makers and stock. Demo data only.
 export const DEMO_PASSWORD = 'feltwire-demo';
@@ -40,6 +46,30 @@ export const DEMO_PIANOS: DemoPiano[] = [
   { maker: 'Wendell Kestrel', model: 'Boudoir', serialNumber: 'WK-8102', year: 1964, yearIsEstimate: true, kind: 'grand', sizeCm: 150, finish: 'satin black', stage: 'sold' },
 ];
 
+// The road each demo piano took to its stage, with the action that made each move.
+const ROADS: Record<Stage, [string, Stage][]> = {
+  received: [],
+  assessed: [['submit_assessment', 'assessed']],
+  in_workshop: [['submit_assessment', 'assessed'], ['approve_plan', 'in_workshop']],
+  ready: [['submit_assessment', 'assessed'], ['approve_plan', 'in_workshop'], ['finish_workshop', 'ready']],
+  on_floor: [['submit_assessment', 'assessed'], ['approve_plan', 'in_workshop'], ['finish_workshop', 'ready'], ['put_on_floor', 'on_floor']],
+  held: [['submit_assessment', 'assessed'], ['sell_as_is', 'ready'], ['put_on_floor', 'on_floor'], ['hold', 'held']],
+  sold: [['submit_assessment', 'assessed'], ['approve_plan', 'in_workshop'], ['finish_workshop', 'ready'], ['put_on_floor', 'on_floor'], ['sell', 'sold']],
+  delivered: [],
+  wholesaled: [],
+  returned_to_owner: [],
+};
+const MOVER: Record<string, string> = { submit_assessment: 'intake', approve_plan: 'manager', sell_as_is: 'manager', finish_workshop: 'technician', put_on_floor: 'floor', hold: 'system', sell: 'floor' };
+
+// Invented inspections: each demo piano gets one of these, by its place in the list.
+const DEMO_MEASUREMENTS: Measurements[] = [
+  { keySidePlayMm: 1.5, keyLevelDeviationMm: 0.8, hammerGrooveDepthMm: 1.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'light', bassWinding: 'dull', soundboardCracks: [{ lengthCm: 22, widestGapMm: 0.4, crossesRib: false, buzzes: false, hurtsTuning: false }], ribsSeparated: false, a4Hz: 437.2, tuningPins: 'firm', bassEvenness: 4, middleEvenness: 4, trebleEvenness: 3, dynamicRange: 4, overallImpression: 4 },
+  { keySidePlayMm: 2.6, keyTouchesNeighbour: true, keyLevelDeviationMm: 2.4, hammerGrooveDepthMm: 3.2, hammerFelt: 'hard', hammerFeltLeft: 'thin', steelCorrosion: 'moderate', bassWinding: 'dark', brokenStrings: 2, soundboardCracks: [], ribsSeparated: false, a4Hz: 428.4, tuningPins: 'some_loose', bassEvenness: 3, middleEvenness: 3, trebleEvenness: 3, dynamicRange: 3, overallImpression: 3 },
+  { keySidePlayMm: 1.2, keyLevelDeviationMm: 0.4, hammerGrooveDepthMm: 0.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'none', bassWinding: 'bright', soundboardCracks: [], ribsSeparated: false, a4Hz: 439.1, tuningPins: 'firm', bassEvenness: 5, middleEvenness: 5, trebleEvenness: 4, dynamicRange: 5, overallImpression: 5 },
+];
+
+const DAY = 86_400_000;
+
 /** Adds the demo users and pianos that are not there yet; running it twice changes nothing. */
 export async function seedDemo(knex: Knex, hash: (password: string) => Promise<string>): Promise<{ users: number; pianos: number }> {
   const passwordHash = await hash(DEMO_PASSWORD);
@@ -48,12 +78,19 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
     .onConflict('email')
     .ignore()
     .returning('id');
-  const intake = await knex('users').where({ email: 'intake@feltwire.test' }).first('id');
+  const staff = Object.fromEntries(
+    (await knex('users').whereIn('email', DEMO_USERS.map((u) => u.email)).select('id', 'role')).map((u: { id: number; role: string }) => [u.role, u.id]),
+  ) as Record<string, number>;
+  const intake = { id: staff.intake };
   let pianos = 0;
-  for (const p of DEMO_PIANOS) {
+  const now = Date.now();
+  for (const [index, p] of DEMO_PIANOS.entries()) {
     const exists = await knex('pianos').where({ serial_number: p.serialNumber, maker: p.maker }).first('id');
     if (exists) continue;
-    await knex('pianos').insert({
+    // Older stock arrived earlier: a piano further along its road came in further back.
+    const road = ROADS[p.stage];
+    const arrived = now - (8 + road.length * 9 + index) * DAY;
+    const [{ id }] = await knex('pianos').insert({
       maker: p.maker,
       model: p.model,
       serial_number: p.serialNumber,
@@ -64,8 +101,76 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
       finish: p.finish,
       stage: p.stage,
       created_by_id: intake?.id ?? null,
-    });
+      created_at: new Date(arrived).toISOString(),
+      stage_changed_at: new Date(arrived + road.length * 9 * DAY).toISOString(),
+    }).returning('id');
+    await seedStory(knex, staff, id, index, p.stage, arrived);
     pianos += 1;
   }
+  if (!(await knex('climate_readings').first('id'))) {
+    for (const [daysAgo, tempC, rh] of [[6, 20.5, 44], [4, 21, 47], [2, 19.5, 38], [0, 20, 45]]) {
+      const { emcPct } = readClimate(tempC, rh);
+      await knex('climate_readings').insert({ temp_c: tempC, relative_humidity: rh, emc_pct: Math.round(emcPct * 100) / 100, logged_by_id: staff.technician, at: new Date(now - daysAgo * DAY).toISOString() });
+    }
+  }
   return { users: users.length, pianos };
+}
+
+// A demo piano's past: its stage moves, and once assessed, its intake, assessment and workshop plan.
+async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: number, index: number, stage: Stage, arrived: number): Promise<void> {
+  const at = (step: number) => new Date(arrived + step * 9 * DAY).toISOString();
+  await knex('stage_moves').insert({ piano_id: pianoId, action: 'receive', from_stage: null, to_stage: 'received', by_user_id: staff.intake, by_role: 'intake', at: at(0) });
+  let from: Stage = 'received';
+  for (const [step, [action, to]] of ROADS[stage].entries()) {
+    const role = MOVER[action];
+    await knex('stage_moves').insert({ piano_id: pianoId, action, from_stage: from, to_stage: to, by_user_id: role === 'system' ? null : staff[role], by_role: role, at: at(step + 1), why: action === 'hold' ? 'Deposit paid (demo)' : null });
+    from = to;
+  }
+  if (stage === 'received') return;
+  await knex('intakes').insert({
+    piano_id: pianoId,
+    seller_name: ['Wren Halvorsen', 'Dario Quennell', 'Maud Ostrander-Pike'][index % 3],
+    seller_phone: `+1 555 01${String(10 + index)}`,
+    seller_email: `seller${index + 1}@example.test`,
+    seller_address: `${10 + index} Linden Close, Millbrook`,
+    acquisition: ['trade_in', 'purchase', 'consignment'][index % 3],
+    received_on: at(0).slice(0, 10),
+    inspected_at: ['customer_home', 'showroom', 'workshop'][index % 3],
+    created_by_id: staff.intake,
+    created_at: at(0),
+  });
+  const measurements = DEMO_MEASUREMENTS[index % DEMO_MEASUREMENTS.length];
+  const grade = gradeAssessment(measurements, defaultRules);
+  const [{ id: assessmentId }] = await knex('assessments').insert({
+    piano_id: pianoId, version: 1, kind: 'intake', measurements: JSON.stringify(measurements), grade: JSON.stringify(grade), score: grade.score, band: grade.band,
+    refer_to_technician: grade.referToTechnician, not_recommended_for_retail: grade.notRecommendedForRetail, rules_version: grade.rulesVersion, submitted_by_id: staff.intake, submitted_at: at(1),
+  }).returning('id');
+  if (!['in_workshop', 'ready', 'on_floor', 'sold'].includes(stage)) return;
+  const estimate = estimateReconditioning(grade.findings, demoRateCard);
+  const [{ id: planId }] = await knex('work_plans').insert({
+    piano_id: pianoId, assessment_id: assessmentId, rate_card_version: demoRateCard.version, currency: demoRateCard.currency, hourly_rate_minor: demoRateCard.hourlyRateMinor,
+    created_by_id: staff.manager, created_at: at(1), approved_by_id: staff.manager, approved_at: at(2),
+  }).returning('id');
+  const done = stage !== 'in_workshop';
+  for (const [i, line] of estimate.lines.entries()) {
+    const [{ id: itemId }] = await knex('work_items').insert({
+      plan_id: planId, piano_id: pianoId, task: line.task, title: line.label, estimated_hours: line.hours, estimated_parts_minor: line.partsMinor, quantity: line.quantity,
+      because: line.because, assigned_to_id: i % 2 === 0 ? staff.technician : null, priority: 1 + (i % 3), status: done ? 'done' : i === 0 ? 'in_progress' : 'planned',
+      done_at: done ? at(3) : null,
+    }).returning('id');
+    if (done || i === 0) {
+      // Logged hours run a little over or under the estimate, as real work does.
+      const minutes = Math.round(line.hours * 60 * (i % 2 === 0 ? 1.15 : 0.9));
+      if (minutes > 0) await knex('time_entries').insert({ work_item_id: itemId, technician_id: staff.technician, started_at: at(2), minutes: Math.min(minutes, 1440), note: 'Demo entry' });
+    }
+  }
+  if (!done) return;
+  // The workshop's re-measurements of what it worked on.
+  const after: Measurements = { ...measurements, keyTouchesNeighbour: false, keySidePlayMm: 1.3, keyLevelDeviationMm: 0.3, hammerGrooveDepthMm: 0.6, brokenStrings: 0, a4Hz: 440, trebleEvenness: 4 };
+  const regrade = gradeAssessment(after, defaultRules);
+  await knex('assessments').insert({
+    piano_id: pianoId, version: 2, kind: 'post_workshop', measurements: JSON.stringify(after), grade: JSON.stringify(regrade), score: regrade.score, band: regrade.band,
+    refer_to_technician: regrade.referToTechnician, not_recommended_for_retail: regrade.notRecommendedForRetail, rules_version: regrade.rulesVersion,
+    change_note: 'Re-measured after workshop work.', submitted_by_id: staff.technician, submitted_at: at(3),
+  });
 }

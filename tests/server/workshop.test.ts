@@ -204,6 +204,7 @@ describe('the bench', () => {
 
 describe('workshop climate', () => {
   it('computes the moisture content and warns outside 40-50 % RH', async () => {
+    const seeded = (await api.knex('climate_readings').count('* as n').first())!.n as number;
     // Hailwood-Horrobin (Wood Handbook, ch. 4), checked against its published value in the core tests
     const damp = (await call('technician', 'mutation($r: JSON!) { logClimate(reading: $r) }', { r: { tempC: 21, relativeHumidity: 55 } })).logClimate;
     expect(damp.emcPct).toBeCloseTo(equilibriumMoistureContent(fahrenheit(21), 55), 2);
@@ -212,11 +213,12 @@ describe('workshop climate', () => {
     const dry = (await call('technician', 'mutation($r: JSON!) { logClimate(reading: $r) }', { r: { tempC: 21, relativeHumidity: 32 } })).logClimate;
     expect(dry.warning).toMatch(/^Dry air/);
     const list = (await call('manager', '{ climateReadings }')).climateReadings;
-    expect(list).toHaveLength(2);
+    expect(list).toHaveLength(seeded + 2);
+    expect(list[0]).toMatchObject({ tempC: 21, relativeHumidity: 32, emcPct: dry.emcPct });
     const bad = await refused('technician', 'mutation($r: JSON!) { logClimate(reading: $r) }', { r: { tempC: 21, relativeHumidity: 120 } });
     expect(bad.extensions.field).toBe('relativeHumidity');
     const hot = await refused('technician', 'mutation($r: JSON!) { logClimate(reading: $r) }', { r: { tempC: 60, relativeHumidity: 55 } });
     expect(hot.extensions.field).toBe('tempC');
-    expect((await call('manager', '{ climateReadings }')).climateReadings).toHaveLength(2);
+    expect((await call('manager', '{ climateReadings }')).climateReadings).toHaveLength(seeded + 2);
   });
 });
