@@ -60,7 +60,7 @@ build_web_if_changed
 step "browser journeys"
 E2E_DB="fw_${RUN_ID}_e2e"
 pg_psql "$PG_PORT" -d postgres -c "create database \"$E2E_DB\" template \"$TEST_DB_TEMPLATE\""
-DATABASE_URL="$TEST_PG_URL/$E2E_DB" JWT_SECRET="e2e-secret-$(head -c 24 /dev/urandom | base64)" PORT=$APP_PORT SEED_DEMO=1 \
+MAIL_FAKE_PORT=${FELTWIRE_TEST_MAIL_PORT:-2535} DATABASE_URL="$TEST_PG_URL/$E2E_DB" JWT_SECRET="e2e-secret-$(head -c 24 /dev/urandom | base64)" PORT=$APP_PORT SEED_DEMO=1 \
   node_modules/.bin/tsx server/main.ts > "$TMPDIR/e2e-server-$RUN_ID.log" 2>&1 &
 CHILDREN+=($!)
 wait_for_port "$APP_PORT" 60 || { cat "$TMPDIR/e2e-server-$RUN_ID.log"; exit 1; }

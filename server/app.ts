@@ -8,6 +8,7 @@ import path from 'node:path';
 
 import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
+import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
 import { toAppError, toGraphQLError } from './errors';
@@ -16,15 +17,23 @@ import { DOMAINS } from './graphql/domains';
 import { MAX_QUERY_DEPTH } from './graphql/limits';
 import { buildSchema } from './graphql/schema';
 import { uploadsRouter } from './uploads';
+import type { Mailer } from './mail';
+import { inboxRouter, type MailFake } from './mail-fake';
+import { documentsRouter, publicRouter } from './public-routes';
 
 export interface AppDeps {
   knex: Knex;
   auth: AuthOptions;
   photos: PhotoStore;
+  mailer: Mailer;
+  /** The address buyers reach the app at, for links in e-mails and on floor tags. */
+  publicUrl: string;
+  /** The local inbox, when the mail fake runs (development and tests). */
+  mailFake?: MailFake;
   webDir?: string;
 }
 
-const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api'];
+const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api', '/dev'];
 
 export function createApp(deps: AppDeps): express.Express {
   const app = express();
@@ -43,7 +52,11 @@ export function createApp(deps: AppDeps): express.Express {
   });
 
   app.use('/auth', authRouter(deps.auth));
+  const disclosure: DisclosureDeps = { photos: deps.photos, mailer: deps.mailer, publicUrl: deps.publicUrl };
+  app.use('/api/public', publicRouter(disclosure));
   app.use('/api', uploadsRouter(pp, deps.photos));
+  app.use('/api', documentsRouter(pp, disclosure));
+  if (deps.mailFake) app.use('/dev', inboxRouter(deps.mailFake));
 
   const schema = buildSchema(DOMAINS);
   app.use(express.json({ limit: '100kb' }));
@@ -52,7 +65,7 @@ export function createApp(deps: AppDeps): express.Express {
     requireUser(pp),
     createHandler<GraphContext>({
       schema,
-      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos }),
+      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos, disclosure }),
       validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
       formatError: (err) => {
         if (err instanceof GraphQLError && err.originalError && !(err.originalError instanceof GraphQLError)) {

@@ -9,6 +9,8 @@ export interface Config {
   webDir: string;
   s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
   seedDemo: boolean;
+  publicUrl: string;
+  mail: { from: string; smtpHost: string | null; smtpPort: number; smtpUser?: string; smtpPass?: string; fakePort: number };
 }
 
 function need(env: NodeJS.ProcessEnv, name: string): string {
@@ -35,5 +37,15 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
       secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
     },
     seedDemo: env.SEED_DEMO !== '0',
+    publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${env.PORT ?? 8080}`).replace(/\/$/, ''),
+    mail: {
+      from: env.MAIL_FROM ?? 'Larkspur Lane Pianos <hello@feltwire.test>',
+      // Without an SMTP relay, the server runs the local mail fake and its inbox page at /dev/inbox.
+      smtpHost: env.SMTP_HOST ?? null,
+      smtpPort: Number(env.SMTP_PORT ?? 587),
+      smtpUser: env.SMTP_USER,
+      smtpPass: env.SMTP_PASS,
+      fakePort: Number(env.MAIL_FAKE_PORT ?? 2525),
+    },
   };
 }

@@ -6,6 +6,8 @@ import { readConfig } from './config';
 import { bindModels, createKnex, migrateLatest } from './db/knex';
 import { s3PhotoStore } from '@/modules/photos/server/photo-store';
 
+import { smtpMailer } from './mail';
+import { startMailFake, type MailFake } from './mail-fake';
 import { createS3, ensureBucket } from './storage';
 
 // Boots the product: migrate, seed the demo, check storage, serve the API and the web app.
@@ -22,16 +24,31 @@ async function main(): Promise<void> {
   const s3 = createS3(config.s3);
   await ensureBucket(s3, config.s3.bucket);
 
-  const app = createApp({ knex, auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds }, photos: s3PhotoStore(s3, config.s3.bucket), webDir: config.webDir });
+  let mailFake: MailFake | undefined;
+  const m = config.mail;
+  if (!m.smtpHost) mailFake = await startMailFake(m.fakePort);
+  const mailer = smtpMailer({ host: m.smtpHost ?? '127.0.0.1', port: mailFake?.port ?? m.smtpPort, from: m.from, user: m.smtpUser, pass: m.smtpPass });
+
+  const app = createApp({
+    knex,
+    auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds },
+    photos: s3PhotoStore(s3, config.s3.bucket),
+    mailer,
+    mailFake,
+    publicUrl: config.publicUrl,
+    webDir: config.webDir,
+  });
   const server = app.listen(config.port, config.host, () => {
     const url = `http://${config.host}:${config.port}`;
     console.log(`\n  Feltwire is running at ${url}\n`);
+    if (mailFake) console.log(`  E-mail it sends lands in the demo inbox: ${url}/dev/inbox\n`);
     console.log(`  Demo sign-ins (demo data only), password "${DEMO_PASSWORD}":`);
     for (const u of DEMO_USERS) console.log(`    ${u.role.padEnd(11)} ${u.email}`);
     console.log('\n  Press Ctrl-C to stop.\n');
   });
   const stop = () => {
     server.close();
+    void mailFake?.close();
     void knex.destroy();
   };
   process.once('SIGINT', stop);

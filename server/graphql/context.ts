@@ -1,8 +1,10 @@
 import type { User } from '@/modules/accounts/server/user-model';
+import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 
 // What every resolver gets: the signed-in, active user (loaded fresh for each request) and the services.
 export type GraphContext = {
   user: User;
   photos: PhotoStore;
+  disclosure: DisclosureDeps;
 };

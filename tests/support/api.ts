@@ -9,6 +9,8 @@ import { hashPassword } from '@/modules/accounts/server/user-service';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
 import { s3PhotoStore, type PhotoStore } from '@/modules/photos/server/photo-store';
 import { createApp } from '@/server/app';
+import { smtpMailer } from '@/server/mail';
+import { startMailFake, type MailFake } from '@/server/mail-fake';
 import { createS3, ensureBucket } from '@/server/storage';
 
 import { createTestDatabase } from './test-db';
@@ -20,6 +22,7 @@ export interface TestApi {
   s3: S3Client;
   bucket: string;
   photos: PhotoStore;
+  mail: MailFake;
   /** Every object key in this file's bucket. */
   objectKeys: () => Promise<string[]>;
   http: ReturnType<typeof request>;
@@ -38,7 +41,9 @@ export async function startTestApi(): Promise<TestApi> {
   const bucket = `fw-test-${randomBytes(4).toString('hex')}`;
   await ensureBucket(s3, bucket);
   const photos = s3PhotoStore(s3, bucket);
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos });
+  const mail = await startMailFake(0);
+  const mailer = smtpMailer({ host: '127.0.0.1', port: mail.port, from: 'Test Dealer <dealer@feltwire.test>' });
+  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, publicUrl: 'http://feltwire.test' });
   const http = request(app);
   const tokens = new Map<Role, string>();
   return {
@@ -46,6 +51,7 @@ export async function startTestApi(): Promise<TestApi> {
     s3,
     bucket,
     photos,
+    mail,
     objectKeys: async () => ((await s3.send(new ListObjectsV2Command({ Bucket: bucket }))).Contents ?? []).map((o) => o.Key!),
     http,
     app,
@@ -62,6 +68,7 @@ export async function startTestApi(): Promise<TestApi> {
       request(app).post('/graphql').set('Authorization', `Bearer ${token}`).send({ query, variables }),
     close: async () => {
       s3.destroy();
+      await mail.close();
       await db.drop();
     },
   };

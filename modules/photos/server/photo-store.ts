@@ -1,9 +1,10 @@
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, type S3Client } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 
-// Where photo bytes live: one bucket, reached through the S3 API (the storage fake locally).
+// Where photos and documents live: one bucket, reached through the S3 API (the storage fake locally).
 export interface PhotoStore {
   put(key: string, body: Buffer, contentType: string): Promise<void>;
+  get(key: string): Promise<Buffer>;
   remove(key: string): Promise<void>;
   /** A short-lived link to read the object without signing in. */
   readUrl(key: string): Promise<string>;
@@ -15,6 +16,10 @@ export function s3PhotoStore(s3: S3Client, bucket: string): PhotoStore {
   return {
     async put(key, body, contentType) {
       await s3.send(new PutObjectCommand({ Bucket: bucket, Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+    },
+    async get(key) {
+      const out = await s3.send(new GetObjectCommand({ Bucket: bucket, Key: key }));
+      return Buffer.from(await out.Body!.transformToByteArray());
     },
     async remove(key) {
       await s3.send(new DeleteObjectCommand({ Bucket: bucket, Key: key }));

@@ -16,6 +16,8 @@ export class Piano extends BaseModel {
   yearTo!: number | null;
   caseCondition!: CaseCondition | null;
   caseNotes!: string | null;
+  askingPriceMinor!: number | null;
+  priceCurrency!: string | null;
   kind!: PianoKind;
   sizeCm!: number | null;
   finish!: string | null;
@@ -40,6 +42,8 @@ export class Piano extends BaseModel {
       yearTo: { type: ['integer', 'null'], minimum: 1700, maximum: 2100 },
       caseCondition: { anyOf: [{ type: 'string', enum: [...CASE_CONDITIONS] }, { type: 'null' }] },
       caseNotes: { type: ['string', 'null'], maxLength: 500 },
+      askingPriceMinor: { type: ['integer', 'null'], minimum: 0 },
+      priceCurrency: { type: ['string', 'null'] },
       kind: { type: 'string', enum: [...PIANO_KINDS] },
       sizeCm: { type: ['integer', 'null'], minimum: 50, maximum: 400 },
       finish: { type: ['string', 'null'], maxLength: 80 },

@@ -1,0 +1,78 @@
+import fs from 'node:fs';
+
+import PDFDocument from 'pdfkit';
+import QRCode from 'qrcode';
+
+import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
+
+// The app's own font, shipped in an npm package, loaded once and subsetted into each PDF.
+const FONT_REGULAR = fs.readFileSync(require.resolve('@expo-google-fonts/source-sans-3/400Regular/SourceSans3_400Regular.ttf'));
+const FONT_BOLD = fs.readFileSync(require.resolve('@expo-google-fonts/source-sans-3/600SemiBold/SourceSans3_600SemiBold.ttf'));
+
+function newDoc(title: string): PDFKit.PDFDocument {
+  const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: title, Producer: 'Feltwire' } });
+  doc.registerFont('body', FONT_REGULAR);
+  doc.registerFont('bold', FONT_BOLD);
+  doc.font('body');
+  return doc;
+}
+
+function finish(doc: PDFKit.PDFDocument): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  doc.on('data', (c: Buffer) => chunks.push(c));
+  return new Promise((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+    doc.end();
+  });
+}
+
+export interface SignedCopyMeta {
+  version: number;
+  digest: string;
+  price: string | null;
+  buyerName: string;
+  buyerEmail: string;
+  acknowledgedAt: string;
+  countersignedBy: string;
+  countersignedAt: string;
+}
+
+/** The signed copy: the disclosure as the buyer read it, its version and digest, and both signatures. */
+export function signedCopyPdf(content: DisclosureContent, meta: SignedCopyMeta): Promise<Buffer> {
+  const doc = newDoc(`Condition disclosure ${content.piano.stockNumber} v${meta.version}`);
+  const p = content.piano;
+  doc.fontSize(10).fillColor('#4a4238').text(`${content.dealerName} · condition disclosure · signed copy`);
+  doc.moveDown(0.5).font('bold').fontSize(20).fillColor('#1d1a16').text(`${p.maker}${p.model ? ` ${p.model}` : ''}`);
+  doc.font('body').fontSize(11).text(`Stock number ${p.stockNumber}${p.serialNumber ? ` · serial ${p.serialNumber}` : ''} · ${p.year} · ${p.size}${p.finish ? ` · ${p.finish}` : ''}`);
+  if (meta.price) doc.font('bold').text(`Asking price: ${meta.price}`).font('body');
+  doc.text(`Version ${meta.version}. Assessed on ${content.assessedOn}${content.assessedAfterWorkshop ? ', after reconditioning in the workshop' : ''}.`);
+  if (content.pitch) doc.text(content.pitch.text);
+  for (const area of content.areas) {
+    doc.moveDown(0.8).font('bold').fontSize(13).text(`${area.label}: ${area.condition}`).font('body').fontSize(11);
+    for (const f of area.findings) doc.text(`• ${f.text}`, { indent: 8 });
+    if (area.workDone.length) doc.text(`Work done: ${area.workDone.join('; ')}.`, { indent: 8 });
+  }
+  doc.moveDown(0.8).font('bold').fontSize(13).text('Warranty').font('body').fontSize(11).text(content.warranty);
+  for (const n of content.notices) doc.moveDown(0.4).font('bold').text(`${n.title}. `, { continued: true }).font('body').text(n.text);
+  doc.moveDown(1).font('bold').fontSize(13).text('Signatures').font('body').fontSize(11);
+  doc.text(`Buyer: ${meta.buyerName} (${meta.buyerEmail}) acknowledged reading version ${meta.version} on ${meta.acknowledgedAt}.`);
+  doc.text(`Dealer: countersigned by ${meta.countersignedBy} on ${meta.countersignedAt}.`);
+  doc.moveDown(0.5).fontSize(9).fillColor('#4a4238').text(`Version ${meta.version} digest (SHA-256): ${meta.digest}`);
+  return finish(doc);
+}
+
+/** The floor tag: stock number, piano, price, and a QR code of the public disclosure link. */
+export async function floorTagPdf(tag: { stockNumber: string; title: string; price: string | null; url: string; dealerName: string }): Promise<Buffer> {
+  const qr = await QRCode.toBuffer(tag.url, { type: 'png', errorCorrectionLevel: 'M', margin: 1, width: 480 });
+  const doc = newDoc(`Floor tag ${tag.stockNumber}`);
+  doc.fontSize(12).fillColor('#4a4238').text(tag.dealerName, { align: 'center' });
+  doc.moveDown(0.5).font('bold').fontSize(34).fillColor('#1d1a16').text(tag.stockNumber, { align: 'center' });
+  doc.font('body').fontSize(18).text(tag.title, { align: 'center' });
+  if (tag.price) doc.moveDown(0.5).font('bold').fontSize(28).text(tag.price, { align: 'center' }).font('body');
+  doc.image(qr, (doc.page.width - 240) / 2, doc.y + 20, { width: 240 });
+  doc.y += 270;
+  doc.fontSize(13).text('Scan to read this piano’s condition disclosure on your phone.', { align: 'center' });
+  doc.fontSize(9).fillColor('#4a4238').text(tag.url, { align: 'center' });
+  return finish(doc);
+}

@@ -1,0 +1,269 @@
+import { randomBytes } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+
+import Handlebars from 'handlebars';
+
+import type { Actor } from '@/modules/accounts/server/user-service';
+import { User } from '@/modules/accounts/server/user-model';
+import { Assessment } from '@/modules/assessment/server/assessment-models';
+import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import { Photo } from '@/modules/photos/server/photo-model';
+import type { PhotoStore } from '@/modules/photos/server/photo-store';
+import { Piano } from '@/modules/pianos/server/piano-model';
+import { formatMoney, type Currency } from '@/modules/shop/core/money';
+import { WorkItem } from '@/modules/shop/server/shop-models';
+import { AppError, notAllowed, notFound } from '@/server/errors';
+import type { Mailer } from '@/server/mail';
+
+import { contentDigest } from './digest';
+import { floorTagPdf, signedCopyPdf } from './disclosure-pdf';
+import { Acknowledgement, Disclosure, DisclosureLink, ShopSetting } from './disclosure-models';
+
+const template = (name: string) => Handlebars.compile(fs.readFileSync(path.join(__dirname, 'templates', name), 'utf8'));
+const DISCLOSURE_HTML = template('disclosure.hbs');
+const SIGNED_COPY_EMAIL = template('signed-copy-email.hbs');
+
+export interface DisclosureDeps {
+  photos: PhotoStore;
+  mailer: Mailer;
+  publicUrl: string;
+}
+
+// 24 random bytes: 192 bits, written in 32 URL-safe characters.
+const TOKEN = /^[A-Za-z0-9_-]{32}$/;
+const newToken = () => randomBytes(24).toString('base64url');
+const NOT_FOUND = () => new AppError('NOT_FOUND', 'Not found.');
+
+const canPublish = (a: Actor) => a.role === 'manager' || a.role === 'floor';
+
+export function priceText(minor: number | null, currency: string | null): string | null {
+  return minor != null && currency ? formatMoney(minor, currency as Currency) : null;
+}
+
+export async function shopTexts(): Promise<{ dealerName: string; warranty: string }> {
+  const rows = await ShopSetting.query().whereIn('key', ['dealerName', 'warranty']);
+  const get = (k: string) => rows.find((r) => r.key === k)?.value as string | undefined;
+  return { dealerName: get('dealerName') ?? 'Larkspur Lane Pianos', warranty: get('warranty') ?? DEFAULT_WARRANTY };
+}
+
+export async function setShopTexts(actor: Actor, raw: unknown) {
+  if (actor.role !== 'manager') throw notAllowed('edit the disclosure texts');
+  const input = textsInput.parse(raw);
+  for (const [key, value] of Object.entries(input)) {
+    await ShopSetting.query().insert({ key, value: JSON.stringify(value) as never, updatedById: actor.id }).onConflict('key').merge();
+  }
+  return shopTexts();
+}
+
+export async function setAskingPrice(actor: Actor, raw: unknown): Promise<Piano> {
+  if (actor.role !== 'manager') throw notAllowed('set prices');
+  const input = priceInput.parse(raw);
+  const piano = await Piano.query().findById(input.pianoId);
+  if (!piano) throw notFound(`piano ${input.pianoId}`);
+  return piano.$query().patchAndFetch({ askingPriceMinor: input.askingPriceMinor, priceCurrency: input.currency });
+}
+
+/** Gathers only public facts about a piano and builds its disclosure content. */
+async function contentFor(pianoId: number): Promise<DisclosureContent> {
+  const piano = await Piano.query().findById(pianoId);
+  if (!piano) throw notFound(`piano ${pianoId}`);
+  const assessment = await Assessment.query().where('piano_id', pianoId).orderBy('version', 'desc').first();
+  if (!assessment) throw new AppError('CONFLICT', `${piano.stockNumber} has no assessment to disclose yet.`);
+  const work = await WorkItem.query().where({ piano_id: pianoId, status: 'done' }).orderBy('id');
+  const photos = await Photo.query().where('piano_id', pianoId).where((q) => q.whereNull('phase').orWhere('phase', 'after')).orderBy('id');
+  const p = piano;
+  return buildDisclosure({
+    piano: { ...piano, caseCondition: piano.caseCondition, caseNotes: piano.caseNotes },
+    askingPriceMinor: p.askingPriceMinor,
+    currency: p.priceCurrency ?? 'USD',
+    assessment: { kind: assessment.kind, measurements: assessment.measurements, grade: assessment.grade, submittedAt: assessment.submittedAt },
+    workDone: work.map((w) => ({ task: w.task, title: w.title })),
+    photos: photos.map((ph) => ({ id: ph.id, area: ph.area, caption: ph.caption })),
+    texts: await shopTexts(),
+  });
+}
+
+function renderHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
+  return DISCLOSURE_HTML({ content, version, digest, publishedOn: publishedAt.slice(0, 10), price: content.askingPrice ? formatMoney(content.askingPrice.minor, content.askingPrice.currency as Currency) : null });
+}
+
+export interface Published {
+  version: number;
+  digest: string;
+  token: string;
+  url: string;
+  publishedAt: string;
+  unchanged: boolean;
+}
+
+/** Freezes the piano's disclosure as a new version, unless nothing in it changed since the last one. */
+export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pianoId: number): Promise<Published> {
+  if (!canPublish(actor)) throw notAllowed('publish disclosures');
+  const content = await contentFor(pianoId);
+  const digest = contentDigest(content);
+  return Disclosure.transaction(async (trx) => {
+    await trx.raw('select pg_advisory_xact_lock(?)', [pianoId]);
+    let link = await DisclosureLink.query(trx).findById(pianoId);
+    if (!link) link = await DisclosureLink.query(trx).insertAndFetch({ pianoId, token: newToken() });
+    const url = `${deps.publicUrl}/d/${link.token}`;
+    const latest = await Disclosure.query(trx).where('piano_id', pianoId).orderBy('version', 'desc').first();
+    if (latest && latest.digest === digest) return { version: latest.version, digest, token: link.token, url, publishedAt: latest.publishedAt, unchanged: true };
+    const version = (latest?.version ?? 0) + 1;
+    const publishedAt = new Date().toISOString();
+    await Disclosure.query(trx).insert({ pianoId, version, content, html: renderHtml(content, version, digest, publishedAt), digest, publishedById: actor.id, publishedAt });
+    return { version, digest, token: link.token, url, publishedAt, unchanged: false };
+  });
+}
+
+export async function disclosureVersions(actor: Actor, pianoId: number) {
+  if (!['floor', 'manager', 'intake', 'technician'].includes(actor.role)) throw notAllowed('read disclosures');
+  const link = await DisclosureLink.query().findById(pianoId);
+  const rows = await Disclosure.query().where('piano_id', pianoId).orderBy('version').select('id', 'version', 'digest', 'published_at', 'published_by_id');
+  return { token: link?.token ?? null, versions: rows.map((r) => ({ id: r.id, version: r.version, digest: r.digest, publishedAt: r.publishedAt })) };
+}
+
+async function byToken(token: string): Promise<{ link: DisclosureLink; newest: Disclosure }> {
+  if (typeof token !== 'string' || !TOKEN.test(token)) throw NOT_FOUND();
+  const link = await DisclosureLink.query().findOne({ token });
+  if (!link) throw NOT_FOUND();
+  const newest = await Disclosure.query().where('piano_id', link.pianoId).orderBy('version', 'desc').first();
+  if (!newest) throw NOT_FOUND();
+  return { link, newest };
+}
+
+/** What anyone with the link may read: the content, never the piano's internal record. */
+export async function publicDisclosure(deps: DisclosureDeps, token: string, version?: number) {
+  const { link, newest } = await byToken(token);
+  const shown = version == null ? newest : await Disclosure.query().findOne({ piano_id: link.pianoId, version });
+  if (!shown) throw NOT_FOUND();
+  const photoRows = shown.content.photos.length ? await Photo.query().whereIn('id', shown.content.photos.map((p) => p.id)) : [];
+  const photos = await Promise.all(
+    shown.content.photos.map(async (p) => {
+      const row = photoRows.find((r) => r.id === p.id);
+      return { ...p, url: row ? await deps.photos.readUrl(row.objectKey) : null };
+    }),
+  );
+  const held = (await Piano.query().findById(link.pianoId).select('stage'))?.stage;
+  return {
+    version: shown.version,
+    digest: shown.digest,
+    publishedAt: shown.publishedAt,
+    newestVersion: newest.version,
+    changedAt: newest.publishedAt,
+    isNewest: shown.version === newest.version,
+    available: held === 'on_floor',
+    content: { ...shown.content, photos },
+  };
+}
+
+export async function publicDisclosureHtml(token: string, version?: number): Promise<string> {
+  const { link, newest } = await byToken(token);
+  const shown = version == null ? newest : await Disclosure.query().findOne({ piano_id: link.pianoId, version });
+  if (!shown) throw NOT_FOUND();
+  return shown.html;
+}
+
+/** A buyer acknowledges the version they read; a stale digest is refused, so nobody signs for text they did not see. */
+export async function acknowledge(token: string, raw: unknown): Promise<{ acknowledgementId: number; receiptToken: string; version: number; digest: string; acknowledgedAt: string }> {
+  const { newest } = await byToken(token);
+  const input = acknowledgeInput.parse(raw);
+  if (input.digest !== newest.digest) {
+    throw new AppError('CONFLICT', `The disclosure changed since you opened it: version ${newest.version} is the newest. Read it again before acknowledging.`, 'digest');
+  }
+  const ack = await Acknowledgement.query().insertAndFetch({ disclosureId: newest.id, buyerName: input.fullName, buyerEmail: input.email, digest: newest.digest, receiptToken: newToken() });
+  return { acknowledgementId: ack.id, receiptToken: ack.receiptToken, version: newest.version, digest: newest.digest, acknowledgedAt: ack.acknowledgedAt };
+}
+
+export async function acknowledgementsFor(actor: Actor, pianoId: number) {
+  if (!canPublish(actor)) throw notAllowed('see acknowledgements');
+  const rows = await Acknowledgement.query()
+    .join('disclosures', 'disclosures.id', 'acknowledgements.disclosure_id')
+    .leftJoin('users', 'users.id', 'acknowledgements.countersigned_by_id')
+    .where('disclosures.piano_id', pianoId)
+    .orderBy('acknowledgements.id', 'desc')
+    .select('acknowledgements.*', 'disclosures.version', 'users.name as countersigned_by');
+  return rows.map((r) => {
+    const row = r as Acknowledgement & { version: number; countersignedBy: string | null };
+    return { id: row.id, version: row.version, buyerName: row.buyerName, buyerEmail: row.buyerEmail, digest: row.digest, acknowledgedAt: row.acknowledgedAt, countersignedBy: row.countersignedBy, countersignedAt: row.countersignedAt, hasPdf: !!row.pdfKey };
+  });
+}
+
+async function pdfFor(ack: Acknowledgement, countersignedBy: string): Promise<{ pdf: Buffer; disclosure: Disclosure }> {
+  const disclosure = (await Disclosure.query().findById(ack.disclosureId))!;
+  const c = disclosure.content;
+  const pdf = await signedCopyPdf(c, {
+    version: disclosure.version,
+    digest: disclosure.digest,
+    price: c.askingPrice ? formatMoney(c.askingPrice.minor, c.askingPrice.currency as Currency) : null,
+    buyerName: ack.buyerName,
+    buyerEmail: ack.buyerEmail,
+    acknowledgedAt: ack.acknowledgedAt,
+    countersignedBy,
+    countersignedAt: ack.countersignedAt!,
+  });
+  return { pdf, disclosure };
+}
+
+/** Floor staff or a manager countersign; the signed copy is made, stored, and e-mailed to the buyer. */
+export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledgementId: number) {
+  if (!canPublish(actor)) throw notAllowed('countersign disclosures');
+  const ack = await Acknowledgement.query().findById(acknowledgementId);
+  if (!ack) throw notFound(`acknowledgement ${acknowledgementId}`);
+  if (ack.countersignedAt) throw new AppError('CONFLICT', 'This acknowledgement is already countersigned.');
+  const signer = (await User.query().findById(actor.id))!;
+  const signed = await ack.$query().patchAndFetch({ countersignedById: actor.id, countersignedAt: new Date().toISOString() });
+  const { pdf, disclosure } = await pdfFor(signed, signer.name);
+  const pdfKey = `disclosures/${disclosure.pianoId}/signed-${signed.id}-${signed.receiptToken.slice(0, 8)}.pdf`;
+  await deps.photos.put(pdfKey, pdf, 'application/pdf');
+  await signed.$query().patch({ pdfKey });
+  const c = disclosure.content;
+  const pianoName = `${c.piano.maker}${c.piano.model ? ` ${c.piano.model}` : ''}`;
+  await deps.mailer.send({
+    to: signed.buyerEmail,
+    subject: `Your signed condition disclosure: ${pianoName}, ${c.piano.stockNumber}`,
+    text: SIGNED_COPY_EMAIL({
+      buyerName: signed.buyerName,
+      piano: pianoName,
+      stockNumber: c.piano.stockNumber,
+      dealerName: c.dealerName,
+      version: disclosure.version,
+      acknowledgedOn: signed.acknowledgedAt.slice(0, 10),
+      countersignedBy: signer.name,
+      digest: disclosure.digest,
+      downloadUrl: `${deps.publicUrl}/api/public/receipts/${signed.receiptToken}.pdf`,
+    }),
+    attachments: [{ filename: `disclosure-${c.piano.stockNumber}-v${disclosure.version}-signed.pdf`, content: pdf, contentType: 'application/pdf' }],
+  });
+  return { id: signed.id, countersignedAt: signed.countersignedAt, countersignedBy: signer.name, pdfKey };
+}
+
+export async function signedPdfByReceipt(deps: DisclosureDeps, receiptToken: string): Promise<{ pdf: Buffer; filename: string }> {
+  if (!TOKEN.test(receiptToken)) throw NOT_FOUND();
+  const ack = await Acknowledgement.query().findOne({ receipt_token: receiptToken });
+  if (!ack?.pdfKey) throw NOT_FOUND();
+  return { pdf: await deps.photos.get(ack.pdfKey), filename: `disclosure-signed-${ack.id}.pdf` };
+}
+
+export async function signedPdfForStaff(deps: DisclosureDeps, actor: Actor, acknowledgementId: number): Promise<{ pdf: Buffer; filename: string }> {
+  if (!canPublish(actor)) throw notAllowed('download signed copies');
+  const ack = await Acknowledgement.query().findById(acknowledgementId);
+  if (!ack?.pdfKey) throw notFound(`a signed copy for acknowledgement ${acknowledgementId}`);
+  return { pdf: await deps.photos.get(ack.pdfKey), filename: `disclosure-signed-${ack.id}.pdf` };
+}
+
+export async function floorTag(deps: DisclosureDeps, actor: Actor, pianoId: number): Promise<Buffer> {
+  if (!canPublish(actor)) throw notAllowed('print floor tags');
+  const piano = await Piano.query().findById(pianoId);
+  if (!piano) throw notFound(`piano ${pianoId}`);
+  const link = await DisclosureLink.query().findById(pianoId);
+  if (!link) throw new AppError('CONFLICT', 'Publish the disclosure first: the tag carries its link.');
+  const p = piano;
+  return floorTagPdf({
+    stockNumber: piano.stockNumber,
+    title: [piano.maker, piano.model].filter(Boolean).join(' '),
+    price: priceText(p.askingPriceMinor, p.priceCurrency),
+    url: `${deps.publicUrl}/d/${link.token}`,
+    dealerName: (await shopTexts()).dealerName,
+  });
+}

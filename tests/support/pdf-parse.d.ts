@@ -1,0 +1,4 @@
+declare module 'pdf-parse/lib/pdf-parse.js' {
+  import parse from 'pdf-parse';
+  export default parse;
+}
