@@ -6,6 +6,7 @@ import { defaultRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import type { PianoKind, Stage } from '@/modules/pianos/core/piano';
 import { readClimate } from '@/modules/shop/core/climate';
+import { publishDisclosure } from '@/modules/disclosure/server/disclosure-service';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { demoRateCard } from '@/modules/shop/core/rate-card';
 
@@ -106,6 +107,16 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
     }).returning('id');
     await seedStory(knex, staff, id, index, p.stage, arrived);
     pianos += 1;
+  }
+  // Pianos ready for sale carry an asking price; those on the floor have a published disclosure.
+  const forSale = await knex('pianos').whereIn('stage', ['ready', 'on_floor', 'held', 'sold']).whereNull('asking_price_minor').select('id', 'kind', 'size_cm');
+  for (const p of forSale) {
+    const price = p.kind === 'grand' ? 1_250_000 + p.size_cm * 4_000 : 240_000 + p.size_cm * 1_500;
+    await knex('pianos').where({ id: p.id }).update({ asking_price_minor: price, price_currency: 'USD' });
+  }
+  const showing = await knex('pianos').whereIn('stage', ['on_floor', 'held']).whereNotExists(knex('disclosures').whereRaw('disclosures.piano_id = pianos.id')).select('id');
+  for (const p of showing) {
+    await publishDisclosure({ photos: undefined as never, mailer: undefined as never, publicUrl: '' }, { id: staff.manager, role: 'manager' }, p.id);
   }
   if (!(await knex('climate_readings').first('id'))) {
     for (const [daysAgo, tempC, rh] of [[6, 20.5, 44], [4, 21, 47], [2, 19.5, 38], [0, 20, 45]]) {
