@@ -6,6 +6,7 @@ cd "$ROOT"
 PG_PORT=${FELTWIRE_TEST_PG_PORT:-55442}
 S3_PORT=${FELTWIRE_TEST_S3_PORT:-4579}
 APP_PORT=${FELTWIRE_TEST_APP_PORT:-8089}
+PAY_PORT=${FELTWIRE_TEST_PAY_PORT:-12121}
 RUN_ID="t$$_$(date +%s)"
 CHILDREN=()
 STORE="$TMPDIR/storage-$RUN_ID"
@@ -60,9 +61,13 @@ build_web_if_changed
 step "browser journeys"
 E2E_DB="fw_${RUN_ID}_e2e"
 pg_psql "$PG_PORT" -d postgres -c "create database \"$E2E_DB\" template \"$TEST_DB_TEMPLATE\""
-MAIL_FAKE_PORT=${FELTWIRE_TEST_MAIL_PORT:-2535} DATABASE_URL="$TEST_PG_URL/$E2E_DB" JWT_SECRET="e2e-secret-$(head -c 24 /dev/urandom | base64)" PORT=$APP_PORT SEED_DEMO=1 \
+E2E_WEBHOOK_SECRET="whsec_e2e_$(head -c 12 /dev/urandom | od -An -tx1 | tr -d ' \n')"
+node_modules/.bin/tsx stripe-fake/main.ts "$PAY_PORT" "http://127.0.0.1:$APP_PORT/api/webhooks/payments" "$E2E_WEBHOOK_SECRET" >/dev/null &
+CHILDREN+=($!)
+wait_for_port "$PAY_PORT" 30
+STRIPE_API_URL="http://127.0.0.1:$PAY_PORT" STRIPE_WEBHOOK_SECRET="$E2E_WEBHOOK_SECRET" MAIL_FAKE_PORT=${FELTWIRE_TEST_MAIL_PORT:-2535} DATABASE_URL="$TEST_PG_URL/$E2E_DB" JWT_SECRET="e2e-secret-$(head -c 24 /dev/urandom | base64)" PORT=$APP_PORT SEED_DEMO=1 \
   node_modules/.bin/tsx server/main.ts > "$TMPDIR/e2e-server-$RUN_ID.log" 2>&1 &
 CHILDREN+=($!)
 wait_for_port "$APP_PORT" 60 || { cat "$TMPDIR/e2e-server-$RUN_ID.log"; exit 1; }
-E2E_BASE_URL="http://127.0.0.1:$APP_PORT" node_modules/.bin/jest --ci --config tests/e2e/jest.config.js --runInBand
+E2E_BASE_URL="http://127.0.0.1:$APP_PORT" E2E_PAY_URL="http://127.0.0.1:$PAY_PORT" node_modules/.bin/jest --ci --config tests/e2e/jest.config.js --runInBand
 log "all checks passed"

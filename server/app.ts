@@ -9,6 +9,8 @@ import path from 'node:path';
 import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
+import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDeps } from '@/modules/deposits/server/deposit-service';
+import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
 import { toAppError, toGraphQLError } from './errors';
@@ -26,6 +28,7 @@ export interface AppDeps {
   auth: AuthOptions;
   photos: PhotoStore;
   mailer: Mailer;
+  payments: { stripe: Stripe; webhookSecret: string };
   /** The address buyers reach the app at, for links in e-mails and on floor tags. */
   publicUrl: string;
   /** The local inbox, when the mail fake runs (development and tests). */
@@ -53,6 +56,18 @@ export function createApp(deps: AppDeps): express.Express {
 
   app.use('/auth', authRouter(deps.auth));
   const disclosure: DisclosureDeps = { photos: deps.photos, mailer: deps.mailer, publicUrl: deps.publicUrl };
+  const deposits: DepositDeps = { ...deps.payments, mailer: deps.mailer, publicUrl: deps.publicUrl };
+  // The signature is checked over the exact bytes received, so this route reads the raw body.
+  app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
+    res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));
+  });
+  app.post('/api/public/disclosures/:token/deposit', express.json({ limit: '4kb' }), async (req, res) => {
+    res.status(201).json(await startDeposit(deposits, req.params.token, req.body));
+  });
+  app.get('/api/public/disclosures/:token/deposit', async (req, res) => {
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await publicDepositStatus(req.params.token, String(req.query.session ?? '')));
+  });
   app.use('/api/public', publicRouter(disclosure));
   app.use('/api', uploadsRouter(pp, deps.photos));
   app.use('/api', documentsRouter(pp, disclosure));
@@ -65,7 +80,7 @@ export function createApp(deps: AppDeps): express.Express {
     requireUser(pp),
     createHandler<GraphContext>({
       schema,
-      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos, disclosure }),
+      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos, disclosure, deposits }),
       validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
       formatError: (err) => {
         if (err instanceof GraphQLError && err.originalError && !(err.originalError instanceof GraphQLError)) {

@@ -10,6 +10,7 @@ export interface Config {
   s3: { endpoint: string; region: string; bucket: string; accessKeyId: string; secretAccessKey: string };
   seedDemo: boolean;
   publicUrl: string;
+  payments: { secretKey: string; apiUrl: string | null; webhookSecret: string };
   mail: { from: string; smtpHost: string | null; smtpPort: number; smtpUser?: string; smtpPass?: string; fakePort: number };
 }
 
@@ -17,6 +18,17 @@ function need(env: NodeJS.ProcessEnv, name: string): string {
   const value = env[name];
   if (!value) throw new Error(`Set ${name} (see README.md, Configuration).`);
   return value;
+}
+
+function paymentsConfig(env: NodeJS.ProcessEnv): Config['payments'] {
+  // STRIPE_API_URL set to '' means the provider's real API; unset means the local stand-in.
+  const apiUrl = env.STRIPE_API_URL === '' ? null : (env.STRIPE_API_URL ?? 'http://127.0.0.1:12111');
+  const local = apiUrl != null && new URL(apiUrl).hostname === '127.0.0.1';
+  return {
+    secretKey: local ? (env.STRIPE_SECRET_KEY ?? 'sk_test_feltwire_local') : need(env, 'STRIPE_SECRET_KEY'),
+    apiUrl,
+    webhookSecret: local ? (env.STRIPE_WEBHOOK_SECRET ?? 'whsec_local_development_only') : need(env, 'STRIPE_WEBHOOK_SECRET'),
+  };
 }
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
@@ -38,6 +50,7 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     },
     seedDemo: env.SEED_DEMO !== '0',
     publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${env.PORT ?? 8080}`).replace(/\/$/, ''),
+    payments: paymentsConfig(env),
     mail: {
       from: env.MAIL_FROM ?? 'Larkspur Lane Pianos <hello@feltwire.test>',
       // Without an SMTP relay, the server runs the local mail fake and its inbox page at /dev/inbox.

@@ -4,6 +4,8 @@ import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
 import { createApp } from './app';
 import { readConfig } from './config';
 import { bindModels, createKnex, migrateLatest } from './db/knex';
+import { expireHolds } from '@/modules/deposits/server/deposit-service';
+import { createStripe } from '@/modules/deposits/server/payments';
 import { s3PhotoStore } from '@/modules/photos/server/photo-store';
 
 import { smtpMailer } from './mail';
@@ -29,8 +31,11 @@ async function main(): Promise<void> {
   if (!m.smtpHost) mailFake = await startMailFake(m.fakePort);
   const mailer = smtpMailer({ host: m.smtpHost ?? '127.0.0.1', port: mailFake?.port ?? m.smtpPort, from: m.from, user: m.smtpUser, pass: m.smtpPass });
 
+  const stripe = createStripe(config.payments.secretKey, config.payments.apiUrl);
+  const payments = { stripe, webhookSecret: config.payments.webhookSecret };
   const app = createApp({
     knex,
+    payments,
     auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds },
     photos: s3PhotoStore(s3, config.s3.bucket),
     mailer,
@@ -46,7 +51,13 @@ async function main(): Promise<void> {
     for (const u of DEMO_USERS) console.log(`    ${u.role.padEnd(11)} ${u.email}`);
     console.log('\n  Press Ctrl-C to stop.\n');
   });
+  // Holds that ran out free their pianos, checked once a minute.
+  const sweep = setInterval(() => {
+    expireHolds({ ...payments, mailer, publicUrl: config.publicUrl }).catch((err) => console.error('[feltwire] expiring holds failed:', err));
+  }, 60_000);
+  (sweep as unknown as NodeJS.Timeout).unref();
   const stop = () => {
+    clearInterval(sweep);
     server.close();
     void mailFake?.close();
     void knex.destroy();

@@ -1,4 +1,5 @@
 import type { User } from '@/modules/accounts/server/user-model';
+import type { DepositDeps } from '@/modules/deposits/server/deposit-service';
 import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 
@@ -7,4 +8,5 @@ export type GraphContext = {
   user: User;
   photos: PhotoStore;
   disclosure: DisclosureDeps;
+  deposits: DepositDeps;
 };

@@ -9,7 +9,9 @@ import { hashPassword } from '@/modules/accounts/server/user-service';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
 import { s3PhotoStore, type PhotoStore } from '@/modules/photos/server/photo-store';
 import { createApp } from '@/server/app';
+import { createStripe } from '@/modules/deposits/server/payments';
 import { smtpMailer } from '@/server/mail';
+import { startStripeFake, type StripeFake } from '@/stripe-fake/stripe-fake';
 import { startMailFake, type MailFake } from '@/server/mail-fake';
 import { createS3, ensureBucket } from '@/server/storage';
 
@@ -23,6 +25,10 @@ export interface TestApi {
   bucket: string;
   photos: PhotoStore;
   mail: MailFake;
+  stripeFake: StripeFake;
+  webhookSecret: string;
+  /** Serves the app on a loopback port and points the payment stand-in's webhooks at it. */
+  listen: () => Promise<string>;
   /** Every object key in this file's bucket. */
   objectKeys: () => Promise<string[]>;
   http: ReturnType<typeof request>;
@@ -43,7 +49,11 @@ export async function startTestApi(): Promise<TestApi> {
   const photos = s3PhotoStore(s3, bucket);
   const mail = await startMailFake(0);
   const mailer = smtpMailer({ host: '127.0.0.1', port: mail.port, from: 'Test Dealer <dealer@feltwire.test>' });
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, publicUrl: 'http://feltwire.test' });
+  const stripeFake = await startStripeFake({ port: 0, retryDelaysMs: [50, 100, 200] });
+  const webhookSecret = `whsec_test_${randomBytes(12).toString('hex')}`;
+  const payments = { stripe: createStripe('sk_test_feltwire', stripeFake.url), webhookSecret };
+  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test' });
+  let server: import('node:http').Server | undefined;
   const http = request(app);
   const tokens = new Map<Role, string>();
   return {
@@ -52,6 +62,17 @@ export async function startTestApi(): Promise<TestApi> {
     bucket,
     photos,
     mail,
+    stripeFake,
+    webhookSecret,
+    listen: async () => {
+      server = await new Promise((resolve) => {
+        const s = app.listen(0, '127.0.0.1', () => resolve(s));
+      });
+      const address = server!.address() as import('node:net').AddressInfo;
+      const url = `http://127.0.0.1:${address.port}`;
+      stripeFake.setWebhook(`${url}/api/webhooks/payments`, webhookSecret);
+      return url;
+    },
     objectKeys: async () => ((await s3.send(new ListObjectsV2Command({ Bucket: bucket }))).Contents ?? []).map((o) => o.Key!),
     http,
     app,
@@ -69,6 +90,9 @@ export async function startTestApi(): Promise<TestApi> {
     close: async () => {
       s3.destroy();
       await mail.close();
+      await stripeFake.idle();
+      await stripeFake.close();
+      if (server) await new Promise((resolve) => server!.close(resolve));
       await db.drop();
     },
   };

@@ -123,7 +123,7 @@ export async function disclosureVersions(actor: Actor, pianoId: number) {
   return { token: link?.token ?? null, versions: rows.map((r) => ({ id: r.id, version: r.version, digest: r.digest, publishedAt: r.publishedAt })) };
 }
 
-async function byToken(token: string): Promise<{ link: DisclosureLink; newest: Disclosure }> {
+export async function disclosureByToken(token: string): Promise<{ link: DisclosureLink; newest: Disclosure }> {
   if (typeof token !== 'string' || !TOKEN.test(token)) throw NOT_FOUND();
   const link = await DisclosureLink.query().findOne({ token });
   if (!link) throw NOT_FOUND();
@@ -134,7 +134,7 @@ async function byToken(token: string): Promise<{ link: DisclosureLink; newest: D
 
 /** What anyone with the link may read: the content, never the piano's internal record. */
 export async function publicDisclosure(deps: DisclosureDeps, token: string, version?: number) {
-  const { link, newest } = await byToken(token);
+  const { link, newest } = await disclosureByToken(token);
   const shown = version == null ? newest : await Disclosure.query().findOne({ piano_id: link.pianoId, version });
   if (!shown) throw NOT_FOUND();
   const photoRows = shown.content.photos.length ? await Photo.query().whereIn('id', shown.content.photos.map((p) => p.id)) : [];
@@ -158,7 +158,7 @@ export async function publicDisclosure(deps: DisclosureDeps, token: string, vers
 }
 
 export async function publicDisclosureHtml(token: string, version?: number): Promise<string> {
-  const { link, newest } = await byToken(token);
+  const { link, newest } = await disclosureByToken(token);
   const shown = version == null ? newest : await Disclosure.query().findOne({ piano_id: link.pianoId, version });
   if (!shown) throw NOT_FOUND();
   return shown.html;
@@ -166,7 +166,7 @@ export async function publicDisclosureHtml(token: string, version?: number): Pro
 
 /** A buyer acknowledges the version they read; a stale digest is refused, so nobody signs for text they did not see. */
 export async function acknowledge(token: string, raw: unknown): Promise<{ acknowledgementId: number; receiptToken: string; version: number; digest: string; acknowledgedAt: string }> {
-  const { newest } = await byToken(token);
+  const { newest } = await disclosureByToken(token);
   const input = acknowledgeInput.parse(raw);
   if (input.digest !== newest.digest) {
     throw new AppError('CONFLICT', `The disclosure changed since you opened it: version ${newest.version} is the newest. Read it again before acknowledging.`, 'digest');
