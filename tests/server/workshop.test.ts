@@ -202,6 +202,23 @@ describe('the bench', () => {
   });
 });
 
+describe('the rate card', () => {
+  it('a manager’s edit makes a new version that the next plan is priced with; others are refused', async () => {
+    const { version: _v, ...card } = demoRateCard;
+    const saved = (await call('manager', 'mutation($c: JSON!) { setRateCard(card: $c) }', { c: { ...card, hourlyRateMinor: 11000 } })).setRateCard;
+    expect(saved.version).toMatch(/^rates-\d+$/);
+    expect((await call('technician', '{ rateCard }')).rateCard).toMatchObject({ version: saved.version, hourlyRateMinor: 11000 });
+    const pianoId = await assessedPiano();
+    await call('manager', `mutation { decidePiano(pianoId: ${pianoId}, decision: "recondition") }`);
+    const plan = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan;
+    expect(plan).toMatchObject({ rateCardVersion: saved.version, hourlyRateMinor: 11000 });
+    const tech = await refused('technician', 'mutation($c: JSON!) { setRateCard(card: $c) }', { c: card });
+    expect(tech.extensions.code).toBe('NOT_ALLOWED');
+    const bad = await refused('manager', 'mutation($c: JSON!) { setRateCard(card: $c) }', { c: { ...card, hourlyRateMinor: 95.5 } });
+    expect(bad.extensions).toMatchObject({ code: 'BAD_INPUT', field: 'hourlyRateMinor' });
+  });
+});
+
 describe('workshop climate', () => {
   it('computes the moisture content and warns outside 40-50 % RH', async () => {
     const seeded = (await api.knex('climate_readings').count('* as n').first())!.n as number;

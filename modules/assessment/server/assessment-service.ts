@@ -12,6 +12,7 @@ import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-in
 import { Photo } from '@/modules/photos/server/photo-model';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano, recordArrival } from '@/modules/pianos/server/stage-service';
+import { nextVersion } from '@/server/db/versions';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { Assessment, GradeRuleSet, Intake } from './assessment-models';
@@ -25,9 +26,7 @@ export async function setGradeRules(actor: Actor, raw: unknown): Promise<GradeRu
   if (!can(actor.role, 'setGradeRules')) throw notAllowed('change the grading rules');
   const input = gradeRulesInput.parse(raw);
   return GradeRuleSet.transaction(async (trx) => {
-    await trx.raw('lock table grade_rule_sets in exclusive mode');
-    const { count } = (await GradeRuleSet.query(trx).count('* as count').first()) as unknown as { count: number };
-    const rules = withVersion(input, `shop-${Number(count) + 1}`);
+    const rules = withVersion(input, await nextVersion(trx, GradeRuleSet.tableName, 'shop'));
     await GradeRuleSet.query(trx).insert({ version: rules.version, rules, createdById: actor.id });
     return rules;
   });

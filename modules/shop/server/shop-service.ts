@@ -14,6 +14,7 @@ import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
 import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
+import { nextVersion } from '@/server/db/versions';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, WorkItem, WorkNote, WorkPlan } from './shop-models';
@@ -35,9 +36,7 @@ export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard>
   requireRole(actor, isManager, 'change the rate card');
   const input = rateCardInput.parse(raw);
   return RateCardSet.transaction(async (trx) => {
-    await trx.raw('lock table rate_cards in exclusive mode');
-    const { count } = (await RateCardSet.query(trx).count('* as count').first()) as unknown as { count: number };
-    const card: RateCard = { ...input, version: `rates-${Number(count) + 1}` };
+    const card: RateCard = { ...input, version: await nextVersion(trx, RateCardSet.tableName, 'rates') };
     await RateCardSet.query(trx).insert({ version: card.version, card, createdById: actor.id });
     return card;
   });
