@@ -96,6 +96,20 @@ describe('POST /api/photos', () => {
     await nothingStored(before);
   });
 
+  it('records a workshop photo’s item and phase, and refuses an item of another piano', async () => {
+    const token = await api.tokenFor('technician');
+    const item = await api.knex('work_items').first();
+    const ok = await api.http.post('/api/photos').set('Authorization', `Bearer ${token}`).field('area', 'hammers').field('pianoId', String(item.piano_id)).field('workItemId', String(item.id)).field('phase', 'before').attach('photo', JPEG, 'k.jpg');
+    expect(ok.status).toBe(201);
+    expect(ok.body).toMatchObject({ workItemId: item.id, phase: 'before', pianoId: item.piano_id });
+    const other = await api.knex('pianos').whereNot('id', item.piano_id).first();
+    const before = await state();
+    const bad = await api.http.post('/api/photos').set('Authorization', `Bearer ${token}`).field('area', 'hammers').field('pianoId', String(other.id)).field('workItemId', String(item.id)).attach('photo', JPEG, 'k.jpg');
+    expect(bad.status).toBe(400);
+    expect(bad.body.error).toMatch(/^workItemId: /);
+    await nothingStored(before);
+  });
+
   it('will not attach another user’s draft photo to an intake', async () => {
     const up = await api.http.post('/api/photos').set('Authorization', `Bearer ${await api.tokenFor('manager')}`).field('area', 'case').field('draftKey', draftKey).attach('photo', JPEG, 'k.jpg');
     expect(up.status).toBe(201);

@@ -9,6 +9,8 @@ export class Photo extends BaseModel {
   draftKey!: string | null;
   area!: PhotoArea;
   caption!: string | null;
+  workItemId!: number | null;
+  phase!: 'before' | 'after' | null;
   objectKey!: string;
   contentType!: string;
   bytes!: number;

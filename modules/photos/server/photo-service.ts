@@ -18,12 +18,18 @@ export const photoFields = z
     pianoId: z.coerce.number().int().positive().optional(),
     // A draft key is made by the phone for an intake not yet submitted.
     draftKey: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, 'must be 16-64 letters, digits or dashes').optional(),
+    // Workshop photos: which item, and before or after the work (before-photos stay off the disclosure).
+    workItemId: z.coerce.number().int().positive().optional(),
+    phase: z.enum(['before', 'after'], { message: 'must be before or after' }).optional(),
   })
-  .refine((f) => f.pianoId != null || f.draftKey != null, { message: 'give a pianoId or a draftKey', path: ['pianoId'] });
+  .refine((f) => f.pianoId != null || f.draftKey != null, { message: 'give a pianoId or a draftKey', path: ['pianoId'] })
+  .refine((f) => f.workItemId == null || f.pianoId != null, { message: 'a workshop photo needs its pianoId', path: ['pianoId'] });
 
 export interface PhotoView {
   id: number;
   pianoId: number | null;
+  workItemId: number | null;
+  phase: string | null;
   area: string;
   caption: string | null;
   contentType: string;
@@ -33,7 +39,7 @@ export interface PhotoView {
 }
 
 export async function photoView(store: PhotoStore, p: Photo): Promise<PhotoView> {
-  return { id: p.id, pianoId: p.pianoId, area: p.area, caption: p.caption, contentType: p.contentType, bytes: p.bytes, createdAt: p.createdAt, url: await store.readUrl(p.objectKey) };
+  return { id: p.id, pianoId: p.pianoId, workItemId: p.workItemId, phase: p.phase, area: p.area, caption: p.caption, contentType: p.contentType, bytes: p.bytes, createdAt: p.createdAt, url: await store.readUrl(p.objectKey) };
 }
 
 /** Checks an upload by its bytes, stores it in S3, then records it; a failed record removes the object. */
@@ -45,6 +51,10 @@ export async function savePhoto(store: PhotoStore, actor: Actor, fields: unknown
   const type = sniffImageType(file.buffer);
   if (!type) throw new AppError('UNSUPPORTED_TYPE', 'photo: must be a JPEG, PNG or WebP image', 'photo');
   if (f.pianoId != null && !(await Piano.query().findById(f.pianoId))) throw notFound(`piano ${f.pianoId}`);
+  if (f.workItemId != null) {
+    const item = await Photo.knex()('work_items').where({ id: f.workItemId, piano_id: f.pianoId }).first('id');
+    if (!item) throw badInput('workItemId', `is not a work item of piano ${f.pianoId}`);
+  }
 
   const owner = f.pianoId != null ? `pianos/${f.pianoId}` : `drafts/${f.draftKey}`;
   const objectKey = `${owner}/${randomUUID()}.${IMAGE_EXTENSIONS[type]}`;
@@ -55,6 +65,8 @@ export async function savePhoto(store: PhotoStore, actor: Actor, fields: unknown
       draftKey: f.pianoId != null ? null : f.draftKey!,
       area: f.area,
       caption: f.caption || null,
+      workItemId: f.workItemId ?? null,
+      phase: f.phase ?? null,
       objectKey,
       contentType: type,
       bytes: file.size,
