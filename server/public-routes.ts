@@ -12,6 +12,8 @@ import {
   type DisclosureDeps,
 } from '@/modules/disclosure/server/disclosure-service';
 
+import { publicDepositTerms } from '@/modules/deposits/server/deposit-service';
+
 import { requireUser } from './auth';
 
 function version(raw: unknown): number | undefined {
@@ -35,7 +37,9 @@ export function publicRouter(deps: DisclosureDeps): Router {
     next();
   });
   router.get('/disclosures/:token', async (req, res) => {
-    res.json(await publicDisclosure(deps, req.params.token, version(req.query.version)));
+    const shown = await publicDisclosure(deps, req.params.token, version(req.query.version));
+    const price = shown.content.askingPrice;
+    res.json({ ...shown, depositTerms: price ? await publicDepositTerms(price) : null });
   });
   router.get('/disclosures/:token/html', async (req, res) => {
     res.type('html').send(await publicDisclosureHtml(req.params.token, version(req.query.version)));

@@ -66,6 +66,9 @@ describe('a deposit paid online', () => {
     const early = await api.http.post(`/api/public/disclosures/${token}/deposit`).send({ receiptToken: 'x'.repeat(32) });
     expect(early.status).toBe(409);
 
+    // The buyer's page quotes the deposit before the checkout.
+    const page = (await api.http.get(`/api/public/disclosures/${token}`)).body;
+    expect(page.depositTerms).toEqual({ amountMinor: depositAmount(price, 'USD'), currency: 'USD', holdDays: 14 });
     const receipt = await acknowledged(token, 'Hana Liebermann', 'hana@example.test');
     const co = await checkout(token, receipt);
     // 10 % of the price, at least 250.00 (shop default)
@@ -187,6 +190,8 @@ describe('a deposit paid online', () => {
     expect(sale.stage).toBe('sold');
     expect(sale.balance).toMatchObject({ depositMinor: co.amountMinor, balanceMinor: one.price - co.amountMinor, taxMinor: 0 });
     expect((await api.knex('deposits').where({ checkout_session_id: co.sessionId }).first()).status).toBe('applied');
+    const after = (await call('floor', `{ deposits(pianoId: ${one.pianoId}) }`)).deposits;
+    expect(after.balance).toMatchObject({ depositMinor: co.amountMinor, balanceMinor: one.price - co.amountMinor });
   });
 
   it('answers the SDK in the provider’s error shape', async () => {

@@ -37,6 +37,13 @@ export async function setDepositRules(actor: Actor, raw: unknown): Promise<Depos
   return rules;
 }
 
+/** The deposit a buyer would pay on a disclosed price, under the shop's current rules. */
+export async function publicDepositTerms(price: { minor: number; currency: string }): Promise<{ amountMinor: number; currency: Currency; holdDays: number }> {
+  const rules = await depositRules();
+  const currency = price.currency as Currency;
+  return { amountMinor: depositAmount(price.minor, currency, rules), currency, holdDays: rules.holdDays };
+}
+
 /** A buyer who acknowledged the current disclosure version starts a checkout for the deposit. */
 export async function startDeposit(deps: DepositDeps, token: string, raw: unknown): Promise<{ url: string; amountMinor: number; currency: string }> {
   const { link, newest } = await disclosureByToken(token);
@@ -46,7 +53,9 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
   if (!ack || ack.disclosureId !== newest.id) throw new AppError('CONFLICT', 'Acknowledge the current version of the disclosure before paying a deposit.', 'receiptToken');
   const piano = (await Piano.query().findById(link.pianoId))!;
   if (piano.stage !== 'on_floor') throw new AppError('CONFLICT', piano.stage === 'held' ? 'This piano is already held for another buyer.' : 'This piano is not available for a deposit.');
-  if (piano.askingPriceMinor == null || !piano.priceCurrency) throw new AppError('CONFLICT', 'This piano has no asking price yet.');
+  // The deposit is figured on the price printed on the version the buyer acknowledged.
+  const price = newest.content.askingPrice;
+  if (!price) throw new AppError('CONFLICT', 'This piano has no asking price yet.');
 
   // A second press reuses the open checkout instead of starting another.
   const open = await Deposit.query().findOne({ acknowledgement_id: ack.id, status: 'pending' });
@@ -54,8 +63,7 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
     const session = await deps.stripe.checkout.sessions.retrieve(open.checkoutSessionId);
     if (session.status === 'open' && session.url) return { url: session.url, amountMinor: open.amountMinor, currency: open.currency };
   }
-  const currency = piano.priceCurrency as Currency;
-  const amountMinor = depositAmount(piano.askingPriceMinor, currency, await depositRules());
+  const { amountMinor, currency } = await publicDepositTerms(price);
   const session = await deps.stripe.checkout.sessions.create(
     {
       mode: 'payment',
@@ -236,7 +244,8 @@ export async function depositsFor(actor: Actor, pianoId: number) {
   const piano = await Piano.query().findById(pianoId);
   if (!piano) throw notFound(`piano ${pianoId}`);
   const deposits = await Deposit.query().where('piano_id', pianoId).orderBy('id', 'desc');
-  const holding = deposits.find((d) => d.status === 'holding');
+  // Before the sale the holding deposit counts toward the balance; after it, the applied one.
+  const holding = deposits.find((d) => d.status === 'holding') ?? deposits.find((d) => d.status === 'applied');
   const rules = await depositRules();
   const balance = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, (piano.priceCurrency ?? 'USD') as Currency, rules) : null;
   return { deposits: deposits.map((d) => d.$toJson()), balance, rules };
