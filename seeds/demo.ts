@@ -114,7 +114,11 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
     const price = p.kind === 'grand' ? 1_250_000 + p.size_cm * 4_000 : 240_000 + p.size_cm * 1_500;
     await knex('pianos').where({ id: p.id }).update({ asking_price_minor: price, price_currency: 'USD' });
   }
-  const showing = await knex('pianos').whereIn('stage', ['on_floor', 'held']).whereNotExists(knex('disclosures').whereRaw('disclosures.piano_id = pianos.id')).select('id');
+  const showing = await knex('pianos')
+    .whereIn('stage', ['on_floor', 'held'])
+    .whereNotExists(knex('disclosures').whereRaw('disclosures.piano_id = pianos.id'))
+    .whereExists(knex('assessments').whereRaw('assessments.piano_id = pianos.id'))
+    .select('id');
   for (const p of showing) {
     await publishDisclosure({ photos: undefined as never, mailer: undefined as never, publicUrl: '' }, { id: staff.manager, role: 'manager' }, p.id);
   }

@@ -1,4 +1,4 @@
-import { BenchScreen } from '@/modules/pianos/ui/bench-screen';
+import { BenchScreen } from '@/modules/shop/ui/bench-screen';
 
 export default function BenchRoute() {
   return <BenchScreen />;

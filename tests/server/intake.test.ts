@@ -112,6 +112,15 @@ describe('corrections', () => {
     expect(await api.knex('assessments').where({ piano_id: first.pianoId, version: 1 }).first()).toEqual(before);
   });
 
+  it('refuses a correction made from a version that is no longer the newest', async () => {
+    const first = (await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake() })).body.data.submitIntake;
+    const ok = await api.gql(await api.tokenFor('intake'), CORRECT, { input: { pianoId: first.pianoId, measurements: buildMeasurements({ keySidePlayMm: 2.5 }), changeNote: 'a', baseVersion: 1 } });
+    expect(ok.body.data.correctAssessment.version).toBe(2);
+    const stale = await api.gql(await api.tokenFor('manager'), CORRECT, { input: { pianoId: first.pianoId, measurements: buildMeasurements({ keySidePlayMm: 1 }), changeNote: 'b', baseVersion: 1 } });
+    expect(stale.body.errors[0].extensions).toMatchObject({ code: 'CONFLICT', field: 'baseVersion' });
+    expect(await api.knex('assessments').where({ piano_id: first.pianoId }).count('* as n').first()).toEqual({ n: 2 });
+  });
+
   it('refuses a correction without a reason, and one by floor staff', async () => {
     const first = (await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake() })).body.data.submitIntake;
     const noReason = await api.gql(await api.tokenFor('intake'), CORRECT, { input: { pianoId: first.pianoId, measurements: buildMeasurements(), changeNote: ' ' } });

@@ -1,5 +1,5 @@
-import { TradeInFormScreen } from '@/modules/pianos/ui/trade-in-form-screen';
+import { IntakeScreen } from '@/modules/assessment/ui/intake-screen';
 
 export default function NewTradeInRoute() {
-  return <TradeInFormScreen />;
+  return <IntakeScreen />;
 }

@@ -12,9 +12,14 @@ const PIANOS: NavItem = { label: 'Pianos', href: '/pianos', hint: 'Every piano i
 
 export const NAV_ITEMS: Record<Role, readonly NavItem[]> = {
   intake: [{ label: 'Trade-ins', href: '/trade-ins', hint: 'Take pianos in' }, PIANOS],
-  technician: [{ label: 'Bench', href: '/bench', hint: 'The work queue' }, PIANOS],
+  technician: [{ label: 'Bench', href: '/bench', hint: 'The work queue' }, { label: 'Climate', href: '/workshop/climate', hint: 'Air and wood moisture' }, PIANOS],
   floor: [{ label: 'Showroom', href: '/showroom', hint: 'Pianos on the floor' }, PIANOS],
-  manager: [{ label: 'Stock', href: '/stock', hint: 'Counts by stage' }, { label: 'Team', href: '/team', hint: 'Accounts and roles' }, PIANOS],
+  manager: [
+    { label: 'Stock', href: '/stock', hint: 'Counts by stage' },
+    { label: 'Workshop', href: '/workshop', hint: 'Plans, overruns, rates' },
+    { label: 'Team', href: '/team', hint: 'Accounts and roles' },
+    PIANOS,
+  ],
 };
 
 export const ROLE_HOME: Record<Role, string> = {
@@ -28,7 +33,12 @@ export const ROLE_HOME: Record<Role, string> = {
 const OWNED_PATHS: readonly { prefix: string; roles: readonly Role[] }[] = [
   { prefix: '/trade-ins/new', roles: ['intake', 'manager'] },
   { prefix: '/trade-ins', roles: ['intake'] },
-  { prefix: '/bench', roles: ['technician'] },
+  { prefix: '/bench', roles: ['technician', 'manager'] },
+  { prefix: '/workshop/rates', roles: ['manager'] },
+  { prefix: '/workshop/overruns', roles: ['manager'] },
+  { prefix: '/workshop', roles: ['technician', 'manager'] },
+  { prefix: '/present/rules', roles: ['manager'] },
+  { prefix: '/present', roles: ['floor', 'manager'] },
   { prefix: '/showroom', roles: ['floor'] },
   { prefix: '/stock', roles: ['manager'] },
   { prefix: '/team', roles: ['manager'] },

@@ -47,6 +47,8 @@ export const correctionInput = z
     measurements: measurementsInput,
     changeNote: z.string().trim().min(1, 'is required: say why the assessment changes').max(500),
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
+    /** The version the correction was made from: a newer one saved meanwhile is not overwritten unseen. */
+    baseVersion: z.number().int().positive().optional(),
   })
   .strict();
 

@@ -1,3 +1,5 @@
+import { canonicalJson } from '@/modules/disclosure/core/disclosure';
+
 import type { Measurements } from './measurements';
 
 export interface FieldChange {
@@ -6,7 +8,8 @@ export interface FieldChange {
   to: unknown;
 }
 
-const same = (a: unknown, b: unknown) => JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
+// Compared as canonical JSON: a version read back from the database may order a crack's keys differently.
+const same = (a: unknown, b: unknown) => canonicalJson(a ?? null) === canonicalJson(b ?? null);
 
 /** The fields that differ between two versions of an assessment, in a stable order. */
 export function diffMeasurements(before: Measurements, after: Measurements): FieldChange[] {

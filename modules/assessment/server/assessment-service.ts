@@ -131,6 +131,9 @@ export async function correctAssessment(actor: Actor, raw: unknown): Promise<Sub
       if (!piano) throw notFound(`piano ${input.pianoId}`);
       const latest = await Assessment.query(trx).where('piano_id', piano.id).orderBy('version', 'desc').first();
       if (!latest) throw notFound(`an assessment of piano ${piano.stockNumber}`);
+      if (input.baseVersion != null && input.baseVersion !== latest.version) {
+        throw new AppError('CONFLICT', `Version ${latest.version} was saved after the version ${input.baseVersion} you corrected: reload it and correct again.`, 'baseVersion');
+      }
       const grade = gradeAssessment(input.measurements, await currentRules(trx));
       const version = latest.version + 1;
       const assessment = await insertAssessment(trx, actor, piano.id, version, input.measurements, grade, input.changeNote);

@@ -1,4 +1,4 @@
-import { STAGES, describeSize, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { STAGES, describeSize, describeYear, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
 
 /** A stage from the address bar, or null when it names none. */
 export function parseStage(value: unknown): Stage | null {
@@ -12,9 +12,10 @@ export function parseId(value: unknown): number | null {
   return id <= 2147483647 ? id : null;
 }
 
-export function formatYear(year: number | null, estimate: boolean): string {
-  if (year == null) return 'Not known';
-  return estimate ? `about ${year}` : String(year);
+/** "1986", "about 1986" or "about 1978-1984"; "Not known" when nothing was noted. */
+export function formatYear(p: { year: number | null; yearIsEstimate: boolean; yearFrom?: number | null; yearTo?: number | null }): string {
+  if (p.year == null && (p.yearFrom == null || p.yearTo == null)) return 'Not known';
+  return describeYear(p);
 }
 
 export function formatKindAndSize(kind: PianoKind, sizeCm: number | null): string {

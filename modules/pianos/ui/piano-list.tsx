@@ -19,15 +19,15 @@ interface PianoListProps {
 
 const COLUMNS = [
   { key: 'stock', label: 'Stock no.', flex: 1.1 },
-  { key: 'piano', label: 'Maker and model', flex: 2.6 },
-  { key: 'size', label: 'Kind and size', flex: 2 },
-  { key: 'year', label: 'Year', flex: 1.1 },
+  { key: 'piano', label: 'Maker and model', flex: 2.4 },
+  { key: 'size', label: 'Kind and size', flex: 1.9 },
+  { key: 'year', label: 'Year', flex: 1.6 },
   { key: 'stage', label: 'Stage', flex: 1.6 },
   { key: 'date', label: '', flex: 1.3 },
 ] as const;
 
 function rowLabel(p: PianoRecord): string {
-  return [p.stockNumber, makerAndModel(p.maker, p.model), formatKindAndSize(p.kind, p.sizeCm), `year ${formatYear(p.year, p.yearIsEstimate)}`, STAGE_LABELS[p.stage]].join(', ');
+  return [p.stockNumber, makerAndModel(p.maker, p.model), formatKindAndSize(p.kind, p.sizeCm), `year ${formatYear(p)}`, STAGE_LABELS[p.stage]].join(', ');
 }
 
 /** Pianos as a list of links: a table-like grid on a wide window, stacked cards on a phone. */
@@ -78,7 +78,7 @@ function WideRow({ piano: p, date }: { piano: PianoRecord; date: string }) {
         {formatKindAndSize(p.kind, p.sizeCm)}
       </Body>
       <Body tone="secondary" style={{ flex: COLUMNS[3].flex }}>
-        {formatYear(p.year, p.yearIsEstimate)}
+        {formatYear(p)}
       </Body>
       <View style={{ flex: COLUMNS[4].flex }}>
         <StageBadge stage={p.stage} />
@@ -99,7 +99,7 @@ function PhoneCard({ piano: p, date }: { piano: PianoRecord; date: string }) {
       </View>
       <Body variant="subheading">{makerAndModel(p.maker, p.model)}</Body>
       <Body variant="small" tone="secondary">
-        {formatKindAndSize(p.kind, p.sizeCm)} · {formatYear(p.year, p.yearIsEstimate)} · {date}
+        {formatKindAndSize(p.kind, p.sizeCm)} · {formatYear(p)} · {date}
       </Body>
     </>
   );

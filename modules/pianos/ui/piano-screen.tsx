@@ -1,6 +1,19 @@
+import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { useSession } from '@/modules/accounts/ui/use-session';
+import { AssessmentHistory, IntakeFacts, LatestAssessment } from '@/modules/assessment/ui/components/assessment-record';
+import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { CASE_CONDITION_LABELS } from '@/modules/assessment/ui/measure-labels';
+import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
+import { useIntakeRecord } from '@/modules/assessment/ui/use-intake-record';
+import { PhotoGallery } from '@/modules/photos/ui/components/photo-gallery';
+import { usePianoPhotos } from '@/modules/photos/ui/use-photos';
+import { StageActions } from '@/modules/shop/ui/stage-actions';
+import { StageTimeline } from '@/modules/shop/ui/stage-timeline';
+import { WorkshopSummary } from '@/modules/shop/ui/workshop-summary';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -11,14 +24,18 @@ import { Screen } from '@/modules/theme/ui/screen';
 import { Section } from '@/modules/theme/ui/section';
 import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
+import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { formatDay, formatDayTime, formatKindAndSize, formatYear, makerAndModel } from './piano-format';
+import { takePianoFlash } from './piano-flash';
 import { usePiano } from './use-piano';
 import type { PianoRecord } from './use-pianos';
 
-/** One piano's page; `created` greets a piano that was just taken in. */
-export function PianoScreen({ id, created }: { id: number | null; created?: boolean }) {
+/** One piano's page: what it is, its condition and photos, where it came from, and every change to its assessment. */
+export function PianoScreen({ id }: { id: number | null }) {
   const { piano, loaded, error } = usePiano(id);
+  const { user } = useSession();
+  const [flash] = useState(() => takePianoFlash(id));
   const problem = graphProblem(error);
 
   if (id == null || (loaded && !piano)) {
@@ -38,37 +55,152 @@ export function PianoScreen({ id, created }: { id: number | null; created?: bool
       </Screen>
     );
   }
+  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
   return (
-    <Screen title={piano.stockNumber} eyebrow="Piano" headingTestID="piano-heading" actions={<Button label="All pianos" variant="secondary" href="/pianos" />}>
-      {created ? <Notice tone="success">Trade-in recorded as {piano.stockNumber}.</Notice> : null}
+    <Screen
+      title={piano.stockNumber}
+      eyebrow="Piano"
+      headingTestID="piano-heading"
+      actions={
+        <View style={styles.actions}>
+          {onFloorSide ? <Button label="Show to a buyer" href={`/present/${piano.id}`} testID="show-to-buyer" /> : null}
+          <Button label="All pianos" variant="secondary" href="/pianos" />
+        </View>
+      }
+    >
+      {flash ? (
+        <Notice tone="success" testID="piano-flash">
+          {flash}
+        </Notice>
+      ) : null}
       <PianoSummary piano={piano} />
-      <Section title="Details">
-        <Card>
-          <FactList
-            facts={[
-              { label: 'Maker', value: piano.maker },
-              { label: 'Model', value: piano.model || 'Not known' },
-              { label: 'Serial number', value: piano.serialNumber || 'Not known' },
-              { label: 'Year', value: formatYear(piano.year, piano.yearIsEstimate) },
-              { label: 'Kind and size', value: formatKindAndSize(piano.kind, piano.sizeCm) },
-              { label: 'Finish', value: piano.finish || 'Not noted' },
-            ]}
-          />
-        </Card>
-      </Section>
-      <Section title="Dates">
-        <Card>
-          <FactList
-            facts={[
-              { label: 'Taken in', value: formatDayTime(piano.createdAt) },
-              { label: 'In this stage since', value: formatDayTime(piano.stageChangedAt) },
-              { label: 'Record last changed', value: formatDayTime(piano.updatedAt ?? piano.createdAt) },
-            ]}
-          />
-        </Card>
-      </Section>
+      <StageActions pianoId={piano.id} stage={piano.stage} />
+      <PianoRecordParts piano={piano} />
     </Screen>
   );
+}
+
+function PianoRecordParts({ piano }: { piano: PianoRecord }) {
+  const wide = useWide();
+  const { user } = useSession();
+  const { history, error: historyError } = useAssessmentHistory(piano.id);
+  const { intake } = useIntakeRecord(piano.id);
+  const { photos } = usePianoPhotos(piano.id);
+  const latest = history?.length ? history[history.length - 1] : null;
+  const mayCorrect = !!user && can(user.role, 'assess');
+  const historyProblem = graphProblem(historyError);
+
+  const condition = (
+    <Section title="Condition">
+      {latest ? (
+        <LatestAssessment latest={latest} correctHref={mayCorrect ? `/pianos/${piano.id}/correct` : null} />
+      ) : history ? (
+        <EmptyState title="Not assessed yet">The grade from the inspection shows here once it is submitted.</EmptyState>
+      ) : historyProblem ? (
+        <Notice tone="error">{historyProblem.message}</Notice>
+      ) : (
+        <Loading label="Loading the assessment…" />
+      )}
+    </Section>
+  );
+  const photoSection = (
+    <Section title="Photos">
+      {photos == null ? <Loading label="Loading photos…" /> : photos.length ? <PhotoGallery photos={photos} /> : <Body tone="secondary">No photos yet.</Body>}
+    </Section>
+  );
+  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  const workshop = <WorkshopSummary pianoId={piano.id} />;
+  const sale = onFloorSide ? (
+    <Section title="Deposit and sale">
+      <DepositsPanel pianoId={piano.id} />
+    </Section>
+  ) : null;
+  const stages = (
+    <Section title="Stage history" description="Every move between stages: who, when, from where to where, and why; and the days spent in each.">
+      <StageTimeline pianoId={piano.id} />
+    </Section>
+  );
+  const historySection =
+    history && history.length ? (
+      <Section title="History" description="Every version of the assessment, newest first: who changed what, when and why.">
+        <AssessmentHistory history={history} />
+      </Section>
+    ) : null;
+  const details = (
+    <Section title="Details">
+      <Card>
+        <FactList
+          dense
+          facts={[
+            { label: 'Maker', value: piano.maker },
+            { label: 'Model', value: piano.model || 'Not known' },
+            { label: 'Serial number', value: piano.serialNumber || 'Not known' },
+            { label: 'Year', value: formatYear(piano) },
+            { label: 'Kind and size', value: formatKindAndSize(piano.kind, piano.sizeCm) },
+            { label: 'Finish', value: piano.finish || 'Not noted' },
+            { label: 'Case condition', value: piano.caseCondition ? CASE_CONDITION_LABELS[piano.caseCondition] : 'Not noted' },
+            { label: 'Case notes', value: piano.caseNotes || 'None' },
+          ]}
+        />
+      </Card>
+    </Section>
+  );
+  const intakeSection = intake ? (
+    <Section title="Intake">
+      <IntakeFacts intake={intake} />
+    </Section>
+  ) : null;
+  const dates = (
+    <Section title="Dates">
+      <Card>
+        <FactList
+          dense
+          facts={[
+            { label: 'Taken in', value: formatDayTime(piano.createdAt) },
+            { label: 'In this stage since', value: formatDayTime(piano.stageChangedAt) },
+            { label: 'Record last changed', value: formatDayTime(piano.updatedAt ?? piano.createdAt) },
+          ]}
+        />
+      </Card>
+    </Section>
+  );
+
+  if (!wide) {
+    return (
+      <Column>
+        {condition}
+        {sale}
+        {workshop}
+        {photoSection}
+        {details}
+        {intakeSection}
+        {historySection}
+        {stages}
+        {dates}
+      </Column>
+    );
+  }
+  return (
+    <View style={styles.columns}>
+      <View style={styles.main}>
+        {condition}
+        {sale}
+        {workshop}
+        {photoSection}
+      </View>
+      <View style={styles.aside}>
+        {details}
+        {intakeSection}
+        {historySection}
+        {stages}
+        {dates}
+      </View>
+    </View>
+  );
+}
+
+function Column({ children }: { children: ReactNode }) {
+  return <View style={styles.column}>{children}</View>;
 }
 
 function PianoSummary({ piano }: { piano: PianoRecord }) {
@@ -89,6 +221,11 @@ function PianoSummary({ piano }: { piano: PianoRecord }) {
 
 const styles = StyleSheet.create({
   back: { alignItems: 'flex-start' },
+  actions: { flexDirection: 'row', gap: SPACE.sm, flexWrap: 'wrap' },
   summary: { gap: SPACE.sm },
   stageLine: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm, flexWrap: 'wrap' },
+  column: { gap: SPACE.xl },
+  columns: { flexDirection: 'row', gap: SPACE.xxl, alignItems: 'flex-start' },
+  main: { flex: 3, minWidth: 0, gap: SPACE.xl },
+  aside: { flex: 2, minWidth: 0, gap: SPACE.xl },
 });

@@ -12,7 +12,7 @@ import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { PianoListSection } from './piano-list-section';
-import { COUNT_CAP, useStageCounts } from './use-pianos';
+import { useStageCounts } from './use-pianos';
 
 /** The manager's home: how many pianos stand in each stage, then the whole stock. */
 export function StockScreen() {
@@ -21,7 +21,7 @@ export function StockScreen() {
       title="Stock"
       eyebrow="Manager"
       headingTestID="home-heading"
-      actions={<Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" />}
+      actions={<Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" testID="start-trade-in" />}
     >
       <Section title="By stage" description="Pick a stage to see its pianos.">
         <StageCounts />
@@ -59,7 +59,7 @@ function StageCounts() {
 }
 
 function StageTile({ stage, count }: { stage: Stage; count: number }) {
-  const shown = count >= COUNT_CAP ? `${COUNT_CAP}+` : String(count);
+  const shown = String(count);
   const tone = STAGE_TONES[stage];
   return (
     <LinkPressable

@@ -1,10 +1,10 @@
 import { useQuery } from 'urql';
 
-import { STAGES, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { STAGES, type CaseCondition, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
 
 export const PAGE_SIZE = 50;
 
-export const PIANO_FIELDS = 'id stockNumber maker model serialNumber year yearIsEstimate kind sizeCm finish stage stageChangedAt createdAt updatedAt';
+export const PIANO_FIELDS = 'id stockNumber maker model serialNumber year yearIsEstimate yearFrom yearTo kind sizeCm finish caseCondition caseNotes stage stageChangedAt createdAt updatedAt';
 
 export interface PianoRecord {
   id: number;
@@ -14,9 +14,13 @@ export interface PianoRecord {
   serialNumber: string | null;
   year: number | null;
   yearIsEstimate: boolean;
+  yearFrom: number | null;
+  yearTo: number | null;
   kind: PianoKind;
   sizeCm: number | null;
   finish: string | null;
+  caseCondition: CaseCondition | null;
+  caseNotes: string | null;
   stage: Stage;
   stageChangedAt: string;
   createdAt: string;
@@ -38,15 +42,10 @@ function stageArg(stage: Stage | null | undefined): string {
   return `, stageEq: ${stage}`;
 }
 
-// The generated limit and offset arguments are typed [Int]; a literal number fits that and a plain Int alike.
-function pageArg(name: 'limit' | 'offset', value: number): string {
-  if (!Number.isInteger(value) || value < 0) throw new Error(`bad ${name} ${value}`);
-  return `${name}: ${value}`;
-}
-
-export function pianoListQuery(stage: Stage | null | undefined, order: PianoOrder, limit = PAGE_SIZE, offset = 0): string {
-  return `query Pianos($maker: String) {
-    pianos(${pageArg('limit', limit)}, ${pageArg('offset', offset)}, makerLikeNoCase: $maker, ${ORDER_ARGS[order]}${stageArg(stage)}) { ${PIANO_FIELDS} }
+/** The list for a stage and an order; the page (limit, offset) and the maker go as variables. */
+export function pianoListQuery(stage: Stage | null | undefined, order: PianoOrder): string {
+  return `query Pianos($maker: String, $limit: Int, $offset: Int) {
+    pianos(limit: $limit, offset: $offset, makerLikeNoCase: $maker, ${ORDER_ARGS[order]}${stageArg(stage)}) { ${PIANO_FIELDS} }
   }`;
 }
 
@@ -66,22 +65,23 @@ export interface PianoListFilter {
 export function usePianos({ stage, maker, order = 'newest', limit = PAGE_SIZE, offset = 0 }: PianoListFilter) {
   const makerTerm = maker?.trim();
   const [result, reexecute] = useQuery<{ pianos: PianoRecord[] }>({
-    query: pianoListQuery(stage, order, limit, offset),
-    variables: { maker: makerTerm ? `%${makerTerm}%` : undefined },
+    query: pianoListQuery(stage, order),
+    variables: { maker: makerTerm ? `%${makerTerm}%` : undefined, limit, offset },
     context: LIST_CONTEXT,
     requestPolicy: 'cache-and-network',
   });
   return { pianos: result.data?.pianos ?? null, fetching: result.fetching, error: result.error, reexecute };
 }
 
-// One aliased list per stage; ids only. The server's page cap (200) bounds each count.
+// The server counts every stage in one go, in stage order, with no cap.
+export const COUNTS_QUERY = `query StageCounts { stageCounts { stage count } }`;
+
+/** The list cap of PianoListSection: the generated list takes no more than this in one page. */
 export const COUNT_CAP = 200;
-export const COUNTS_QUERY = `query StageCounts {
-  ${STAGES.map((stage) => `${stage}: pianos(stageEq: ${stage}, limit: ${COUNT_CAP}) { id }`).join('\n  ')}
-}`;
 
 export function useStageCounts() {
-  const [result] = useQuery<Record<Stage, { id: number }[]>>({ query: COUNTS_QUERY, context: LIST_CONTEXT, requestPolicy: 'cache-and-network' });
-  const counts = result.data ? (Object.fromEntries(STAGES.map((s) => [s, result.data![s]?.length ?? 0])) as Record<Stage, number>) : null;
+  const [result] = useQuery<{ stageCounts: { stage: Stage; count: number }[] }>({ query: COUNTS_QUERY, context: LIST_CONTEXT, requestPolicy: 'cache-and-network' });
+  const rows = result.data?.stageCounts;
+  const counts = rows ? (Object.fromEntries(STAGES.map((s) => [s, rows.find((r) => r.stage === s)?.count ?? 0])) as Record<Stage, number>) : null;
   return { counts, fetching: result.fetching, error: result.error };
 }

@@ -6,18 +6,30 @@ import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Body } from './text';
 
 interface NoticeProps {
-  tone: 'error' | 'success';
+  /** error: something failed; success: it worked; caution: a safety or money warning; info: how things stand */
+  tone: 'error' | 'success' | 'caution' | 'info';
   children: ReactNode;
+  /** a bold first line */
+  title?: string;
+  /** commands under the message (retry, discard) */
+  actions?: ReactNode;
   testID?: string;
 }
 
 /** A message at the top of a form or a page; errors are announced at once. */
-export function Notice({ tone, children, testID }: NoticeProps) {
+export function Notice({ tone, children, title, actions, testID }: NoticeProps) {
+  const textTone = tone === 'error' ? 'danger' : 'default';
   return (
-    <View role={tone === 'error' ? 'alert' : 'status'} style={[styles.notice, tone === 'error' ? styles.error : styles.success]} testID={testID}>
-      <Body tone={tone === 'error' ? 'danger' : 'default'} style={tone === 'success' ? styles.successText : null}>
+    <View role={tone === 'error' ? 'alert' : 'status'} style={[styles.notice, styles[tone]]} testID={testID}>
+      {title ? (
+        <Body variant="bodyStrong" tone={textTone} style={tone === 'success' ? styles.successText : null}>
+          {title}
+        </Body>
+      ) : null}
+      <Body tone={textTone} style={tone === 'success' ? styles.successText : null}>
         {children}
       </Body>
+      {actions ? <View style={styles.actions}>{actions}</View> : null}
     </View>
   );
 }
@@ -33,9 +45,12 @@ export function Loading({ label = 'Loading…' }: { label?: string }) {
 }
 
 const styles = StyleSheet.create({
-  notice: { borderRadius: RADIUS.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, borderLeftWidth: 4 },
+  notice: { borderRadius: RADIUS.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, borderLeftWidth: 4, gap: SPACE.xs },
   error: { backgroundColor: PALETTE.rosewoodBlush, borderLeftColor: PALETTE.rosewood },
   success: { backgroundColor: PALETTE.mossMist, borderLeftColor: PALETTE.moss },
+  caution: { backgroundColor: PALETTE.vellum, borderLeftColor: PALETTE.brass, borderWidth: 1, borderColor: PALETTE.linen, borderLeftWidth: 4 },
+  info: { backgroundColor: PALETTE.feltMist, borderLeftColor: PALETTE.felt },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.sm, paddingTop: SPACE.xs },
   successText: { color: PALETTE.felt },
   loading: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm, paddingVertical: SPACE.lg },
 });

@@ -1,0 +1,5 @@
+import { ClimateScreen } from '@/modules/shop/ui/climate-screen';
+
+export default function WorkshopClimateRoute() {
+  return <ClimateScreen />;
+}

@@ -1,0 +1,41 @@
+import { useRouter } from 'expo-router';
+
+import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { useSession } from '@/modules/accounts/ui/use-session';
+import { Button } from '@/modules/theme/ui/button';
+import { Card } from '@/modules/theme/ui/card';
+import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { Screen } from '@/modules/theme/ui/screen';
+
+import { DepositRulesForm } from './deposit-rules-form';
+import { useDepositRules } from './use-deposits';
+
+/** A manager's page for the deposit rules: share of the price, least deposit, hold, sales tax. */
+export function DepositRulesScreen() {
+  const { user } = useSession();
+  const router = useRouter();
+  const { rules, error } = useDepositRules();
+  // Back to the piano the manager came from; a page opened directly goes to the manager's home.
+  const back = () => (router.canGoBack() ? router.back() : router.replace('/stock'));
+  const problem = graphProblem(error);
+  if (user?.role !== 'manager') {
+    return (
+      <Screen title="Deposit rules" eyebrow="Deposits" width="form">
+        <Notice tone="info">Only a manager sets the deposit rules.</Notice>
+      </Screen>
+    );
+  }
+  return (
+    <Screen title="Deposit rules" eyebrow="Deposits" width="form" headingTestID="rules-heading" actions={<Button label="Back" variant="secondary" onPress={back} testID="rules-back" />}>
+      {rules ? (
+        <Card>
+          <DepositRulesForm rules={rules} />
+        </Card>
+      ) : problem ? (
+        <Notice tone="error">{problem.message}</Notice>
+      ) : (
+        <Loading label="Loading the rules…" />
+      )}
+    </Screen>
+  );
+}

@@ -1,0 +1,220 @@
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { BAND_LABELS, gradeAssessment, type Area, type Grade } from '@/modules/assessment/core/grade';
+import type { GradeRules } from '@/modules/assessment/core/grade-rules';
+import { measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
+import type { WorkTask } from '@/modules/assessment/core/work-tasks';
+import { GradeSummary } from '@/modules/assessment/ui/components/grade-summary';
+import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
+import { Button } from '@/modules/theme/ui/button';
+import { Card } from '@/modules/theme/ui/card';
+import { ChoiceGroup } from '@/modules/theme/ui/choice-group';
+import { Body, Heading } from '@/modules/theme/ui/text';
+import { TextField } from '@/modules/theme/ui/text-field';
+
+import { parseNumber } from '../work-format';
+import { Feedback, type FeedbackState } from './feedback';
+import { FieldRow } from './field-row';
+
+type NumberKey = 'keySidePlayMm' | 'keyLevelDeviationMm' | 'hammerGrooveDepthMm' | 'brokenStrings' | 'a4Hz';
+type RatingKey = 'bassEvenness' | 'middleEvenness' | 'trebleEvenness' | 'dynamicRange' | 'overallImpression';
+
+const NUMBER_FIELDS: { key: NumberKey; area: Area; label: string; unit: string; hint: string; whole?: boolean }[] = [
+  { key: 'keySidePlayMm', area: 'keys', label: 'Key side play', unit: 'mm', hint: 'Sideways at the key front; 1-2 mm is normal.' },
+  { key: 'keyLevelDeviationMm', area: 'keys', label: 'Key level deviation', unit: 'mm', hint: 'The largest step between resting keys.' },
+  { key: 'hammerGrooveDepthMm', area: 'hammers', label: 'Hammer groove depth', unit: 'mm', hint: 'The deepest string groove.' },
+  { key: 'brokenStrings', area: 'strings', label: 'Broken strings', unit: 'strings', hint: 'Still broken or missing.', whole: true },
+  { key: 'a4Hz', area: 'tuning', label: 'Measured A4', unit: 'Hz', hint: 'Standard pitch is 440 Hz.' },
+];
+
+const RATING_FIELDS: { key: RatingKey; label: string }[] = [
+  { key: 'bassEvenness', label: 'Bass evenness' },
+  { key: 'middleEvenness', label: 'Middle evenness' },
+  { key: 'trebleEvenness', label: 'Treble evenness' },
+  { key: 'dynamicRange', label: 'Dynamic range' },
+  { key: 'overallImpression', label: 'Overall impression' },
+];
+
+const RATINGS = ['1', '2', '3', '4', '5'] as const;
+const RATING_LABELS = { 1: '1', 2: '2', 3: '3', 4: '4', 5: '5' } as Record<(typeof RATINGS)[number], string>;
+const YES_NO = ['yes', 'no'] as const;
+const YES_NO_LABELS: Record<(typeof YES_NO)[number], string> = { yes: 'Yes', no: 'No' };
+
+// The areas each kind of work touches: their measurements are the ones worth taking again.
+const TASK_AREA: Record<WorkTask, Area> = {
+  regulation: 'keys',
+  rebush_keys: 'keys',
+  ease_front_rail_pins: 'keys',
+  ease_sticking_keys: 'keys',
+  replace_keytops: 'keys',
+  reshape_voice_hammers: 'hammers',
+  replace_hammers: 'hammers',
+  voicing: 'play',
+  replace_broken_strings: 'strings',
+  restring_section: 'strings',
+  soundboard_repair: 'soundboard',
+  reglue_ribs: 'soundboard',
+  pitch_raise: 'tuning',
+  fine_tuning: 'tuning',
+  tuning_pin_repair: 'tuning',
+  cabinet_touch_up: 'play',
+};
+
+interface RemeasurePanelProps {
+  tasks: readonly string[];
+  latest: { version: number; measurements: Measurements; grade: Grade } | null;
+  rules: GradeRules;
+  busy: boolean;
+  onSubmit: (measurements: Partial<Measurements>, changeNote: string | null) => Promise<{ ok: true; version: number; grade: Grade } | { ok: false; message: string }>;
+}
+
+const shown = (v: unknown, unit: string) => (v == null ? 'not measured' : `${v}${unit === 'strings' ? '' : ` ${unit}`}`);
+
+/** Re-measure what the workshop worked on; only filled fields are sent, the rest carry over from the last assessment. */
+export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: RemeasurePanelProps) {
+  const worked = useMemo(() => new Set<Area>(['play', ...tasks.map((t) => TASK_AREA[t as WorkTask]).filter(Boolean)]), [tasks]);
+  const [everything, setEverything] = useState(false);
+  const [numbers, setNumbers] = useState<Partial<Record<NumberKey, string>>>({});
+  const [ratings, setRatings] = useState<Partial<Record<RatingKey, (typeof RATINGS)[number]>>>({});
+  const [touches, setTouches] = useState<'yes' | 'no' | null>(null);
+  const [note, setNote] = useState('');
+  const [feedback, setFeedback] = useState<FeedbackState>(null);
+  const [result, setResult] = useState<{ version: number; grade: Grade } | null>(null);
+
+  const filled: Partial<Measurements> = {};
+  const typeErrors: Record<string, string> = {};
+  for (const f of NUMBER_FIELDS) {
+    const v = parseNumber(numbers[f.key] ?? '');
+    if (v == null) continue;
+    if (Number.isNaN(v) || (f.whole && !Number.isInteger(v))) typeErrors[f.key] = f.whole ? 'A whole number.' : 'A number, e.g. 1.5.';
+    else filled[f.key] = v;
+  }
+  for (const f of RATING_FIELDS) if (ratings[f.key]) filled[f.key] = Number(ratings[f.key]);
+  if (touches) filled.keyTouchesNeighbour = touches === 'yes';
+
+  const parsed = measurementsInput.safeParse(filled);
+  const errors: Record<string, string> = { ...typeErrors };
+  if (!parsed.success) for (const issue of parsed.error.issues) errors[String(issue.path[0])] ??= issue.message.replace(/^./, (c) => c.toUpperCase());
+  const valid = Object.keys(errors).length === 0;
+  const count = Object.keys(filled).length;
+  const preview = latest && valid && count ? gradeAssessment({ ...latest.measurements, ...filled }, rules) : null;
+
+  const visible = (area: Area) => everything || worked.has(area);
+  const submit = async () => {
+    setFeedback(null);
+    if (!count) {
+      setFeedback({ tone: 'error', text: 'Fill in at least one re-measured value.' });
+      return;
+    }
+    if (!valid) {
+      setFeedback({ tone: 'error', text: 'Some values are out of range: see the fields marked in red.' });
+      return;
+    }
+    const outcome = await onSubmit(filled, note.trim() || null);
+    if (!outcome.ok) {
+      setFeedback({ tone: 'error', text: outcome.message });
+      return;
+    }
+    setResult({ version: outcome.version, grade: outcome.grade });
+    setNumbers({});
+    setRatings({});
+    setTouches(null);
+    setNote('');
+    setFeedback({ tone: 'success', text: `Re-measurement saved as assessment version ${outcome.version}.` });
+  };
+
+  const m = latest?.measurements ?? {};
+  return (
+    <Card role="form" accessibilityLabel="Re-measure">
+      <Heading level={3}>Re-measure after the work</Heading>
+      <Body tone="secondary">
+        {everything ? 'Every measurement is open.' : 'The areas this plan worked on, and the play test.'} Leave a field empty to keep its last value
+        {latest ? ` (from version ${latest.version})` : ''}.
+      </Body>
+      {NUMBER_FIELDS.some((f) => visible(f.area)) ? (
+        <FieldRow>
+          {NUMBER_FIELDS.filter((f) => visible(f.area)).map((f) => (
+            <View key={f.key} style={styles.field}>
+              <TextField
+                label={f.label}
+                hint={`${f.hint} Last: ${shown(m[f.key], f.unit)}.`}
+                value={numbers[f.key] ?? ''}
+                onChangeText={(t) => setNumbers((prev) => ({ ...prev, [f.key]: t }))}
+                unit={f.unit}
+                inputMode={f.whole ? 'numeric' : 'decimal'}
+                keyboardType={f.whole ? 'number-pad' : 'decimal-pad'}
+                error={errors[f.key]}
+                testID={`remeasure-${f.key}`}
+              />
+            </View>
+          ))}
+        </FieldRow>
+      ) : null}
+      {visible('keys') ? (
+        <ChoiceGroup
+          label="Can a key still be pushed sideways until it touches its neighbour?"
+          hint={`Last: ${m.keyTouchesNeighbour == null ? 'not checked' : m.keyTouchesNeighbour ? 'yes' : 'no'}. Tap again to leave it as it was.`}
+          options={YES_NO}
+          labels={YES_NO_LABELS}
+          value={touches}
+          onChange={setTouches}
+          onClear={() => setTouches(null)}
+          testID="remeasure-keyTouchesNeighbour"
+        />
+      ) : null}
+      <View style={styles.play}>
+        <Body variant="subheading">Play test, 1 (poor) to 5 (fine)</Body>
+        {RATING_FIELDS.map((f) => (
+          <ChoiceGroup
+            key={f.key}
+            label={f.label}
+            hint={`Last: ${m[f.key] ?? 'not rated'}. Tap again to clear.`}
+            options={RATINGS}
+            labels={RATING_LABELS}
+            value={ratings[f.key] ?? null}
+            onChange={(v) => setRatings((prev) => ({ ...prev, [f.key]: v }))}
+            onClear={() => setRatings((prev) => ({ ...prev, [f.key]: undefined }))}
+            compact
+            error={errors[f.key]}
+            testID={`remeasure-${f.key}`}
+          />
+        ))}
+      </View>
+      <View style={styles.start}>
+        <Button label={everything ? 'Show only the areas worked on' : 'Show every measurement'} variant="quiet" onPress={() => setEverything(!everything)} testID="remeasure-all" />
+      </View>
+      <TextField label="What changed" hint="Optional: kept with the new assessment version." value={note} onChangeText={setNote} multiline maxLength={500} testID="remeasure-note" />
+      {latest ? (
+        <View style={styles.preview} testID="remeasure-preview" role="status">
+          <Body variant="label" tone="secondary">
+            Grade now: {latest.grade.score} of 100, {BAND_LABELS[latest.grade.band]}
+          </Body>
+          <Body variant="bodyStrong">
+            {preview
+              ? `With these values: ${preview.score} of 100, ${BAND_LABELS[preview.band]} (${preview.findings.filter((f) => f.severity !== 'sound').length} findings to disclose)`
+              : count
+                ? 'Fix the marked values to see the new grade.'
+                : 'Fill in a value to see the new grade.'}
+          </Body>
+        </View>
+      ) : null}
+      <Button label={`Save the re-measurement${count ? ` (${count} ${count === 1 ? 'value' : 'values'})` : ''}`} onPress={submit} busy={busy} stretch testID="remeasure-submit" />
+      <Feedback state={feedback} testID="remeasure-feedback" />
+      {result ? (
+        <View style={styles.result} testID="remeasure-result">
+          <Heading level={3}>New grade, version {result.version}</Heading>
+          <GradeSummary grade={result.grade} scoreTestID="remeasure-score" />
+        </View>
+      ) : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  field: { minWidth: 220, flexGrow: 1, flexBasis: 220 },
+  play: { gap: SPACE.md },
+  start: { alignItems: 'flex-start' },
+  preview: { padding: SPACE.md, borderRadius: RADIUS.md, backgroundColor: PALETTE.feltMist, gap: SPACE.xxs },
+  result: { gap: SPACE.md, borderTopWidth: 2, borderTopColor: PALETTE.brass, paddingTop: SPACE.lg },
+});

@@ -1,0 +1,146 @@
+import { StyleSheet, Text, View } from 'react-native';
+
+import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { STAGE_LABELS } from '@/modules/pianos/core/piano';
+import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { Button } from '@/modules/theme/ui/button';
+import { EmptyState } from '@/modules/theme/ui/empty-state';
+import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { Screen } from '@/modules/theme/ui/screen';
+import { StageBadge } from '@/modules/theme/ui/stage-badge';
+import { Body } from '@/modules/theme/ui/text';
+import { useWide } from '@/modules/theme/ui/use-wide';
+
+import { RoleGate } from './components/role-gate';
+import { VarianceTag } from './components/variance-tag';
+import { useOverruns, type Overrun } from './use-overruns';
+import { money } from './work-format';
+
+const COLS = [
+  { key: 'piano', label: 'Piano', flex: 1.4 },
+  { key: 'over', label: 'Over by', flex: 1.6 },
+  { key: 'items', label: 'Items over their estimate', flex: 3 },
+  { key: 'cost', label: 'Estimate / cost so far', flex: 2 },
+] as const;
+
+function rowLabel(o: Overrun): string {
+  return `${o.stockNumber}, ${STAGE_LABELS[o.stage]}, over by ${money(o.overrunMinor, o.currency)} on ${o.itemsOver.join(', ')}; estimate ${money(o.estimatedCostMinor, o.currency)}, cost so far ${money(o.actualCostMinor, o.currency)}`;
+}
+
+/** Pianos whose workshop items have cost more than their estimates, worst first. */
+export function OverrunsScreen() {
+  return (
+    <RoleGate roles={['manager']} title="Workshop overruns">
+      <Overruns />
+    </RoleGate>
+  );
+}
+
+function Overruns() {
+  const wide = useWide();
+  const { overruns, error } = useOverruns();
+  const problem = graphProblem(error);
+  return (
+    <Screen
+      title="Workshop overruns"
+      eyebrow="Workshop"
+      headingTestID="overruns-heading"
+      actions={
+        <>
+          <Button label="Rate card" variant="secondary" href="/workshop/rates" />
+          <Button label="Workshop" variant="secondary" href="/workshop" />
+        </>
+      }
+    >
+      <Body tone="secondary">
+        An overrun is what items have cost beyond their own estimates, labour at the plan’s rate plus parts. Items not started do not offset it. Worst first.
+      </Body>
+      {!overruns ? (
+        problem ? (
+          <Notice tone="error">{problem.message}</Notice>
+        ) : (
+          <Loading label="Loading the overruns…" />
+        )
+      ) : !overruns.length ? (
+        <EmptyState title="No overruns" testID="overruns-empty">
+          Every item so far has cost no more than its estimate.
+        </EmptyState>
+      ) : (
+        <View style={wide ? styles.table : undefined} testID="overruns-list">
+          {wide ? (
+            <View aria-hidden style={[styles.row, styles.headRow]}>
+              {COLS.map((c) => (
+                <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
+                  {c.label}
+                </Text>
+              ))}
+            </View>
+          ) : null}
+          <View role="list" style={wide ? undefined : styles.cards}>
+            {overruns.map((o, i) => (
+              <View role="listitem" key={o.pianoId}>
+                <LinkPressable
+                  href={`/workshop/pianos/${o.pianoId}`}
+                  accessibilityLabel={rowLabel(o)}
+                  testID={`overrun-${o.pianoId}`}
+                  insetFocus={wide}
+                  style={({ hovered }) => [wide ? styles.row : styles.card, wide && i > 0 && styles.rule, hovered && styles.hover]}
+                >
+                  {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
+                </LinkPressable>
+              </View>
+            ))}
+          </View>
+        </View>
+      )}
+    </Screen>
+  );
+}
+
+function WideRow({ o }: { o: Overrun }) {
+  return (
+    <>
+      <View style={{ flex: COLS[0].flex, gap: SPACE.xs }}>
+        <Body variant="bodyStrong">{o.stockNumber}</Body>
+        <StageBadge stage={o.stage} />
+      </View>
+      <View style={{ flex: COLS[1].flex }}>
+        <VarianceTag varianceMinor={o.overrunMinor} currency={o.currency} />
+      </View>
+      <Body style={{ flex: COLS[2].flex }}>{o.itemsOver.join(', ')}</Body>
+      <View style={{ flex: COLS[3].flex }}>
+        <Body>{money(o.estimatedCostMinor, o.currency)}</Body>
+        <Body tone="secondary">{money(o.actualCostMinor, o.currency)}</Body>
+      </View>
+    </>
+  );
+}
+
+function PhoneCard({ o }: { o: Overrun }) {
+  return (
+    <>
+      <View style={styles.cardTop}>
+        <Body variant="bodyStrong">{o.stockNumber}</Body>
+        <StageBadge stage={o.stage} />
+      </View>
+      <VarianceTag varianceMinor={o.overrunMinor} currency={o.currency} />
+      <Body>{o.itemsOver.join(', ')}</Body>
+      <Body variant="small" tone="secondary">
+        Estimate {money(o.estimatedCostMinor, o.currency)} · cost so far {money(o.actualCostMinor, o.currency)}
+      </Body>
+    </>
+  );
+}
+
+const styles = StyleSheet.create({
+  table: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, overflow: 'hidden' },
+  row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, minHeight: 64 },
+  headRow: { backgroundColor: PALETTE.ivory, borderBottomWidth: 2, borderBottomColor: PALETTE.linen, minHeight: 44, paddingVertical: SPACE.sm },
+  head: { color: PALETTE.walnut },
+  rule: { borderTopWidth: 1, borderTopColor: PALETTE.linen },
+  hover: { backgroundColor: PALETTE.feltMist },
+  cards: { gap: SPACE.sm },
+  card: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, padding: SPACE.lg, gap: SPACE.sm },
+  cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
+});

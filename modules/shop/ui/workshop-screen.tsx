@@ -1,0 +1,98 @@
+import { StyleSheet, View } from 'react-native';
+
+import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { useSession } from '@/modules/accounts/ui/use-session';
+import type { Stage } from '@/modules/pianos/core/piano';
+import { makerAndModel } from '@/modules/pianos/ui/piano-format';
+import { usePianos } from '@/modules/pianos/ui/use-pianos';
+import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
+import { Button } from '@/modules/theme/ui/button';
+import { EmptyState } from '@/modules/theme/ui/empty-state';
+import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { Screen } from '@/modules/theme/ui/screen';
+import { Section } from '@/modules/theme/ui/section';
+import { StageBadge } from '@/modules/theme/ui/stage-badge';
+import { Body } from '@/modules/theme/ui/text';
+import { useWide } from '@/modules/theme/ui/use-wide';
+
+import { RoleGate } from './components/role-gate';
+import { formatDate } from './work-format';
+
+/** The workshop at a glance: pianos waiting for a decision, pianos in the workshop, and the way to rates, overruns and climate. */
+export function WorkshopScreen() {
+  return (
+    <RoleGate roles={['technician', 'manager']} title="Workshop">
+      <Workshop />
+    </RoleGate>
+  );
+}
+
+function Workshop() {
+  const { user } = useSession();
+  const manager = user?.role === 'manager';
+  return (
+    <Screen
+      title="Workshop"
+      eyebrow="Workshop"
+      headingTestID="workshop-home-heading"
+      actions={
+        <>
+          <Button label="Bench" variant="secondary" href="/bench" />
+          {manager ? <Button label="Overruns" variant="secondary" href="/workshop/overruns" testID="workshop-overruns" /> : null}
+          {manager ? <Button label="Rate card" variant="secondary" href="/workshop/rates" testID="workshop-rates" /> : null}
+          <Button label="Climate" variant="secondary" href="/workshop/climate" testID="workshop-climate" />
+        </>
+      }
+    >
+      {manager ? (
+        <Section title="Waiting for a decision" description="Assessed pianos: recondition, sell as they stand, wholesale or decline. Longest waiting first.">
+          <StageList stage="assessed" empty="No assessed piano is waiting." testID="workshop-assessed" />
+        </Section>
+      ) : null}
+      <Section title="In the workshop" description="Longest in the workshop first.">
+        <StageList stage="in_workshop" empty="No piano is in the workshop." testID="workshop-in" />
+      </Section>
+    </Screen>
+  );
+}
+
+function StageList({ stage, empty, testID }: { stage: Stage; empty: string; testID: string }) {
+  const wide = useWide();
+  const { pianos, error } = usePianos({ stage, order: 'longestInStage' });
+  const problem = graphProblem(error);
+  if (!pianos) return problem ? <Notice tone="error">{problem.message}</Notice> : <Loading />;
+  if (!pianos.length) return <EmptyState title={empty} />;
+  return (
+    <View role="list" style={[styles.list, wide && styles.listWide]} testID={testID}>
+      {pianos.map((p) => (
+        <View role="listitem" key={p.id} style={wide ? styles.cellWide : undefined}>
+          <LinkPressable
+            href={`/workshop/pianos/${p.id}`}
+            accessibilityLabel={`${p.stockNumber}, ${makerAndModel(p.maker, p.model)}, in this stage since ${formatDate(p.stageChangedAt)}`}
+            testID={`${testID}-${p.id}`}
+            style={({ hovered }) => [styles.card, hovered && styles.hover]}
+          >
+            <View style={styles.top}>
+              <Body variant="bodyStrong">{p.stockNumber}</Body>
+              <StageBadge stage={p.stage} />
+            </View>
+            <Body>{makerAndModel(p.maker, p.model)}</Body>
+            <Body variant="small" tone="quiet">
+              Since {formatDate(p.stageChangedAt)}
+            </Body>
+          </LinkPressable>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: SPACE.sm },
+  listWide: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.md },
+  cellWide: { flexBasis: '31%', flexGrow: 1, maxWidth: '33%' },
+  card: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, padding: SPACE.lg, gap: SPACE.xs },
+  hover: { backgroundColor: PALETTE.feltMist },
+  top: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
+});

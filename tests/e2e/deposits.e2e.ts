@@ -1,0 +1,117 @@
+// A deposit end to end: the buyer acknowledges on their phone, pays on the payment provider's page,
+// comes back to a confirmed hold; floor staff see the piano held; the receipt is in the inbox.
+import type { BrowserContext } from 'playwright-core';
+
+import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
+
+const TABLET = { width: 1024, height: 768 };
+
+let staff: { context: BrowserContext; close: () => Promise<void> };
+let buyer: { context: BrowserContext; close: () => Promise<void> };
+beforeAll(async () => {
+  staff = await openBrowser();
+  buyer = await openBrowser();
+});
+afterAll(async () => {
+  await staff?.close();
+  await buyer?.close();
+});
+
+function payUrl(): string {
+  const url = process.env.E2E_PAY_URL;
+  if (!url) throw new Error('E2E_PAY_URL is not set: the address of the payment stand-in');
+  return url;
+}
+
+async function login(email: string): Promise<string> {
+  const res = await fetch(`${baseUrl()}/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: 'feltwire-demo' }) });
+  return ((await res.json()) as { token: string }).token;
+}
+
+async function gql<T>(token: string, query: string): Promise<T> {
+  const res = await fetch(`${baseUrl()}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query }) });
+  const body = (await res.json()) as { data: T; errors?: { message: string }[] };
+  if (body.errors?.length) throw new Error(body.errors[0].message);
+  return body.data;
+}
+
+async function waitForMail(match: (m: { to: string[]; subject: string }) => boolean, timeoutMs = 20_000) {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const messages = (await (await fetch(`${baseUrl()}/dev/inbox.json`)).json()) as { to: string[]; subject: string }[];
+    const found = messages.find(match);
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error('no matching e-mail reached the demo inbox');
+}
+
+it('holds a piano for a buyer who acknowledged the disclosure and paid the deposit', async () => {
+  const floorToken = await login('floor@feltwire.test');
+  const { pianos } = await gql<{ pianos: { id: number; stockNumber: string }[] }>(floorToken, '{ pianos(stageEq: on_floor) { id stockNumber } }');
+  // The second piano on the floor: the disclosure journey uses the first.
+  const piano = [...pianos].sort((a, b) => a.id - b.id)[1];
+  expect(piano).toBeTruthy();
+  const { disclosures } = await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`);
+
+  const phone = await buyer.context.newPage();
+  await phone.setViewportSize(PHONE);
+  await phone.goto(`${baseUrl()}/d/${disclosures.token}`);
+  await phone.getByTestId('disclosure-digest').waitFor();
+  // No deposit before the buyer acknowledged the current version.
+  expect(await phone.getByTestId('deposit-start').count()).toBe(0);
+  const email = `e2e-deposit-${Date.now()}@buyers.test`;
+  await phone.getByTestId('ack-name').fill('Tamsin Okonkwo-Reyes');
+  await phone.getByTestId('ack-email').fill(email);
+  await phone.getByTestId('ack-read').click();
+  await phone.getByTestId('ack-submit').click();
+  await phone.getByTestId('ack-done').waitFor();
+  await phone.getByTestId('deposit-start').scrollIntoViewIfNeeded();
+  const amount = (await phone.getByTestId('deposit-amount').textContent())!.trim();
+  expect(amount).toMatch(/^USD [\d,]+\.\d\d$/);
+  await phone.getByText('not legal advice', { exact: false }).last().waitFor();
+  await shot(phone, 'disc-e2e-deposit-offer');
+
+  // Off to the payment provider's page; it pays with the test card that succeeds.
+  await phone.getByTestId('deposit-start').click();
+  await phone.waitForURL((u) => u.origin === new URL(payUrl()).origin);
+  await phone.getByTestId('checkout-card').fill('4242 4242 4242 4242');
+  await phone.getByTestId('checkout-exp').fill('12/30');
+  await phone.getByTestId('checkout-cvc').fill('123');
+  await phone.getByTestId('checkout-pay').click();
+
+  // Back on Feltwire: the page waits for the payment's webhook, then shows the hold.
+  await phone.waitForURL(`**/d/${disclosures.token}/deposit?session=*`);
+  await phone.getByTestId('deposit-held').waitFor({ timeout: 30_000 });
+  expect(await phone.getByTestId('deposit-held').textContent()).toContain('Held for you until');
+  expect(await phone.getByTestId('deposit-held').textContent()).toContain(amount);
+  expect((await phone.getByTestId('deposit-balance-due').textContent())?.trim()).toMatch(/^USD [\d,]+\.\d\d$/);
+  await shot(phone, 'disc-e2e-deposit-held');
+
+  // The disclosure no longer offers a deposit to anyone, and leads this buyer back to the hold.
+  await phone.goto(`${baseUrl()}/d/${disclosures.token}`);
+  await phone.getByTestId('disclosure-availability').waitFor();
+  expect(await phone.getByTestId('disclosure-availability').textContent()).toContain('Not available');
+  await phone.getByTestId('deposit-see-hold').waitFor();
+  expect(await phone.getByTestId('deposit-start').count()).toBe(0);
+
+  // Floor staff see the piano held, on its page and on the tablet view with the buyer's name.
+  const tablet = await newPage(staff.context, TABLET);
+  await signIn(tablet, 'floor@feltwire.test');
+  await tablet.waitForURL('**/showroom');
+  await tablet.goto(`${baseUrl()}/pianos/${piano.id}`);
+  await tablet.getByTestId('piano-stage').waitFor();
+  expect(await tablet.getByTestId('piano-stage').textContent()).toBe('Held');
+  await tablet.goto(`${baseUrl()}/present/${piano.id}`);
+  await tablet.getByTestId('deposits-holding').waitFor();
+  expect(await tablet.getByTestId('present-stage').textContent()).toBe('Held');
+  expect(await tablet.getByTestId('deposits-holding').textContent()).toContain('Tamsin Okonkwo-Reyes');
+  await tablet.getByTestId('deposits-holding').scrollIntoViewIfNeeded();
+  await shot(tablet, 'disc-e2e-deposit-staff');
+
+  // The receipt is in the inbox.
+  const receipt = await waitForMail((m) => m.to.includes(email) && m.subject.startsWith('Receipt'));
+  expect(receipt.subject).toContain(piano.stockNumber);
+  await tablet.close();
+  await phone.close();
+});

@@ -1,0 +1,138 @@
+// The condition disclosure end to end: the floor tablet walks a buyer through it, the buyer
+// acknowledges it on their phone, floor staff countersign, and the signed copy reaches the inbox.
+import type { BrowserContext } from 'playwright-core';
+
+import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
+
+const TABLET = { width: 1024, height: 768 };
+
+let staff: { context: BrowserContext; close: () => Promise<void> };
+let buyer: { context: BrowserContext; close: () => Promise<void> };
+beforeAll(async () => {
+  // Two browsers: the shop's tablet and the buyer's own phone share no storage.
+  staff = await openBrowser();
+  buyer = await openBrowser();
+});
+afterAll(async () => {
+  await staff?.close();
+  await buyer?.close();
+});
+
+async function login(email: string): Promise<string> {
+  const res = await fetch(`${baseUrl()}/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: 'feltwire-demo' }) });
+  return ((await res.json()) as { token: string }).token;
+}
+
+async function gql<T>(token: string, query: string): Promise<T> {
+  const res = await fetch(`${baseUrl()}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query }) });
+  const body = (await res.json()) as { data: T; errors?: { message: string }[] };
+  if (body.errors?.length) throw new Error(body.errors[0].message);
+  return body.data;
+}
+
+interface InboxMessage {
+  to: string[];
+  subject: string;
+  attachments: { filename: string; contentType: string; size: number }[];
+}
+
+async function waitForMail(match: (m: InboxMessage) => boolean, timeoutMs = 20_000): Promise<InboxMessage> {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    const messages = (await (await fetch(`${baseUrl()}/dev/inbox.json`)).json()) as InboxMessage[];
+    const found = messages.find(match);
+    if (found) return found;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+  throw new Error('no matching e-mail reached the demo inbox');
+}
+
+it('walks a buyer through the disclosure on the tablet, takes their acknowledgement, and e-mails the countersigned copy', async () => {
+  const floorToken = await login('floor@feltwire.test');
+  const { pianos } = await gql<{ pianos: { id: number; stockNumber: string }[] }>(floorToken, '{ pianos(stageEq: on_floor) { id stockNumber } }');
+  // The first piano on the floor; the deposit journey takes another, as both run against one server.
+  const piano = [...pianos].sort((a, b) => a.id - b.id)[0];
+  const { disclosures } = await gql<{ disclosures: { token: string; versions: { version: number; digest: string }[] } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`);
+  const newest = disclosures.versions[disclosures.versions.length - 1];
+
+  // Floor staff open the tablet view and step through the areas.
+  const tablet = await newPage(staff.context, TABLET);
+  await signIn(tablet, 'floor@feltwire.test');
+  await tablet.waitForURL('**/showroom');
+  await tablet.goto(`${baseUrl()}/present/${piano.id}`);
+  await tablet.getByTestId('present-heading').waitFor();
+  await tablet.getByTestId('present-next').waitFor();
+  const position = async () => (await tablet.getByTestId('present-position').textContent())?.trim();
+  expect(await position()).toMatch(/^1 \/ \d+$/);
+  const steps = Number((await position())!.split('/')[1]);
+  expect(await tablet.getByTestId('present-prev').isDisabled()).toBe(true);
+  await tablet.getByTestId('present-next').click();
+  expect(await position()).toBe(`2 / ${steps}`);
+  const firstArea = await tablet.getByTestId('present-step-title').textContent();
+  await tablet.getByTestId('present-next').click();
+  expect(await position()).toBe(`3 / ${steps}`);
+  expect(await tablet.getByTestId('present-step-title').textContent()).not.toBe(firstArea);
+  await shot(tablet, 'disc-e2e-tablet-area');
+  await tablet.getByTestId('present-prev').click();
+  expect(await tablet.getByTestId('present-step-title').textContent()).toBe(firstArea);
+  // The buttons are big enough to hand over: well past the 44 px touch target.
+  const next = (await tablet.getByTestId('present-next').boundingBox())!;
+  expect(next.height).toBeGreaterThanOrEqual(64);
+  // All the way to the warranty and notices; Next then stops.
+  while (await tablet.getByTestId('present-next').isEnabled()) await tablet.getByTestId('present-next').click();
+  expect(await tablet.getByTestId('present-step-title').textContent()).toBe('Warranty and notices');
+  await tablet.getByText('not legal advice', { exact: false }).first().waitFor();
+
+  // The buyer opens the link on their phone: no sign-in, the full fingerprint, then acknowledges.
+  const phone = await buyer.context.newPage();
+  await phone.setViewportSize(PHONE);
+  await phone.goto(`${baseUrl()}/d/${disclosures.token}`);
+  await phone.getByTestId('disclosure-digest').waitFor();
+  expect(new URL(phone.url()).pathname).toBe(`/d/${disclosures.token}`);
+  expect((await phone.getByTestId('disclosure-digest').textContent())?.trim()).toBe(newest.digest);
+  expect(await phone.getByTestId('disclosure-title').textContent()).toBeTruthy();
+  await shot(phone, 'disc-e2e-buyer-top');
+  const email = `e2e-buyer-${Date.now()}@buyers.test`;
+  await phone.getByTestId('ack-submit').click();
+  // Nothing typed: the form says what is missing, beside each field.
+  await phone.getByText('Tick the box to say you have read the disclosure.').waitFor();
+  await phone.getByTestId('ack-name').fill('Wren Castellane');
+  await phone.getByTestId('ack-email').fill(email);
+  await phone.getByTestId('ack-read').click();
+  await phone.getByTestId('ack-submit').click();
+  await phone.getByTestId('ack-done').waitFor();
+  expect(await phone.getByTestId('ack-done').textContent()).toContain(email);
+  await phone.getByTestId('ack-done').scrollIntoViewIfNeeded();
+  await shot(phone, 'disc-e2e-buyer-acknowledged');
+  // A reload remembers the acknowledgement on this phone.
+  await phone.reload();
+  await phone.getByTestId('ack-done').waitFor();
+
+  // Floor staff see it on the tablet and countersign.
+  const acks = await gql<{ acknowledgements: { id: number; buyerEmail: string }[] }>(floorToken, `{ acknowledgements(pianoId: ${piano.id}) }`);
+  const ack = acks.acknowledgements.find((a) => a.buyerEmail === email)!;
+  expect(ack).toBeTruthy();
+  await tablet.getByTestId('present-acks-refresh').click();
+  await tablet.getByTestId(`countersign-${ack.id}`).click();
+  await tablet.getByTestId(`ack-signed-${ack.id}`).waitFor();
+  await tablet.getByTestId(`signed-pdf-${ack.id}`).waitFor();
+  await tablet.getByTestId(`ack-row-${ack.id}`).scrollIntoViewIfNeeded();
+  await shot(tablet, 'disc-e2e-tablet-countersigned');
+
+  // The signed copy reaches the buyer's inbox as a PDF.
+  const mail = await waitForMail((m) => m.to.includes(email) && m.attachments.some((a) => a.filename.endsWith('.pdf')));
+  expect(mail.subject).toContain(piano.stockNumber);
+  await tablet.close();
+  await phone.close();
+});
+
+it('answers an unknown link with a plain page, without asking anyone to sign in', async () => {
+  const phone = await buyer.context.newPage();
+  await phone.setViewportSize(PHONE);
+  const token = 'x'.repeat(32);
+  await phone.goto(`${baseUrl()}/d/${token}`);
+  await phone.getByTestId('disclosure-missing').waitFor();
+  await phone.getByText('This link does not lead to a disclosure').waitFor();
+  expect(new URL(phone.url()).pathname).toBe(`/d/${token}`);
+  await phone.close();
+});

@@ -1,0 +1,301 @@
+import path from 'node:path';
+
+import type { BrowserContext, Page } from 'playwright-core';
+
+import { gradeAssessment } from '@/modules/assessment/core/grade';
+
+import { baseUrl, newPage, openBrowser, PHONE, shot, signIn, WIDE } from './support/browser';
+
+let context: BrowserContext;
+let close: () => Promise<void>;
+beforeAll(async () => {
+  ({ context, close } = await openBrowser());
+});
+afterAll(() => close());
+
+const JPEG = path.join(__dirname, '../fixtures/keys-photo.jpg');
+
+const fill = (page: Page, id: string, value: string) => page.getByTestId(id).fill(value);
+const pick = (page: Page, id: string) => page.getByTestId(id).click();
+async function next(page: Page, title: string) {
+  await page.getByTestId('step-next').click();
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe(title);
+}
+
+it('intake staff log a whole trade-in on a phone, with a photo, keep the draft over a reload, and see the grade', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Piano and seller');
+
+  await fill(page, 'field-seller-name', 'Odile Ferncastle');
+  await fill(page, 'field-seller-phone', '+1 555 0142');
+  await pick(page, 'choice-acquisition-trade_in');
+  await pick(page, 'choice-inspectedAt-customer_home');
+  await fill(page, 'field-maker', 'Marrowfield');
+  await fill(page, 'field-model', 'Console 112');
+  await pick(page, 'choice-kind-upright');
+  await fill(page, 'field-sizeCm', '112');
+  await fill(page, 'field-year', '1986');
+
+  await next(page, 'Keys');
+  await fill(page, 'field-keySidePlayMm', '2.4');
+  await fill(page, 'field-keyLevelDeviationMm', '1.2');
+
+  // A reload mid-way keeps the draft: same step, same values.
+  await page.waitForTimeout(600);
+  await page.reload();
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  await expect(page.getByTestId('field-keySidePlayMm').inputValue()).resolves.toBe('2.4');
+
+  await next(page, 'Hammers');
+  await fill(page, 'field-hammerGrooveDepthMm', '2');
+  await next(page, 'Strings');
+  await pick(page, 'choice-steelCorrosion-light');
+  await pick(page, 'choice-bassWinding-dull');
+  await next(page, 'Soundboard');
+  await pick(page, 'add-crack');
+  await fill(page, 'crack-0-lengthCm', '30');
+  await fill(page, 'crack-0-widestGapMm', '0.8');
+  await next(page, 'Play and pitch');
+  await fill(page, 'field-a4Hz', '436.5');
+  await pick(page, 'choice-tuningPins-firm');
+  for (const [field, value] of [['bassEvenness', 4], ['middleEvenness', 4], ['trebleEvenness', 4], ['dynamicRange', 4], ['overallImpression', 4]]) {
+    await pick(page, `choice-${field}-${value}`);
+  }
+  await next(page, 'Photos');
+  const chooser = page.waitForEvent('filechooser');
+  await pick(page, 'photo-add');
+  await (await chooser).setFiles(JPEG);
+  await page.getByTestId('photo-thumb').first().waitFor({ timeout: 20000 });
+
+  await next(page, 'Review');
+  // The same pure grade the server stores, computed here from the values typed above.
+  const expected = gradeAssessment({
+    keySidePlayMm: 2.4,
+    keyLevelDeviationMm: 1.2,
+    hammerGrooveDepthMm: 2,
+    steelCorrosion: 'light',
+    bassWinding: 'dull',
+    soundboardCracks: [{ lengthCm: 30, widestGapMm: 0.8, crossesRib: false, buzzes: false, hurtsTuning: false }],
+    a4Hz: 436.5,
+    tuningPins: 'firm',
+    bassEvenness: 4,
+    middleEvenness: 4,
+    trebleEvenness: 4,
+    dynamicRange: 4,
+    overallImpression: 4,
+  });
+  await expect(page.getByTestId('grade-score').first().textContent()).resolves.toContain(String(expected.score));
+  await page.getByText('a wide crack (a payment card fits in it)').first().waitFor();
+  await shot(page, 'intake-review-phone');
+
+  await pick(page, 'submit-intake');
+  await page.waitForURL(/\/pianos\/\d+$/);
+  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(expected.score));
+  await page.getByText('Marrowfield').first().waitFor();
+  await page.getByTestId('photo-thumb').first().waitFor();
+  await shot(page, 'intake-piano-phone');
+  await page.close();
+});
+
+it('shows the form beside the live findings on a wide screen', async () => {
+  const page = await newPage(context, WIDE);
+  await signIn(page, 'manager@feltwire.test');
+  await page.waitForURL('**/stock');
+  await page.goto(page.url().replace('/stock', '/trade-ins/new'));
+  await page.getByTestId('step-title').waitFor();
+  const form = (await page.getByTestId('intake-form').boundingBox())!;
+  const live = (await page.getByTestId('live-grade').boundingBox())!;
+  expect(live.x).toBeGreaterThan(form.x + form.width - 1);
+  await shot(page, 'intake-wide');
+  await page.close();
+});
+
+// A piano with a submitted intake, made through the API as the given user: the starting point of a correction.
+async function intakeThroughApi(page: Page, email: string, measurements: Record<string, unknown>): Promise<number> {
+  const login = await page.request.post(`${baseUrl()}/auth/login`, { data: { email, password: 'feltwire-demo' } });
+  const { token } = (await login.json()) as { token: string };
+  const input = {
+    seller: { name: 'Wenna Clodfelter' },
+    acquisition: 'purchase',
+    receivedOn: '2026-11-30',
+    inspectedAt: 'showroom',
+    piano: { maker: 'Quillby', model: 'Studio 118', kind: 'upright', sizeCm: 118 },
+    measurements,
+    photoIds: [],
+  };
+  const res = await page.request.post(`${baseUrl()}/graphql`, {
+    headers: { Authorization: `Bearer ${token}` },
+    data: { query: 'mutation($input: JSON!) { submitIntake(input: $input) }', variables: { input } },
+  });
+  const body = (await res.json()) as { data?: { submitIntake: { pianoId: number } }; errors?: unknown };
+  expect(body.errors).toBeUndefined();
+  return body.data!.submitIntake.pianoId;
+}
+
+it('lets a manager correct an assessment with a reason, and the history shows version 2 with the changed field', async () => {
+  const page = await newPage(context, WIDE);
+  const before = { keySidePlayMm: 2.4, keyLevelDeviationMm: 0.4, tuningPins: 'firm' } as const;
+  const pianoId = await intakeThroughApi(page, 'intake@feltwire.test', before);
+  await signIn(page, 'manager@feltwire.test');
+  await page.waitForURL('**/stock');
+  await page.goto(`${baseUrl()}/pianos/${pianoId}`);
+  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(gradeAssessment(before).score));
+
+  await pick(page, 'correct-assessment');
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  // The steps open with the latest version's values.
+  await expect(page.getByTestId('field-keySidePlayMm').inputValue()).resolves.toBe('2.4');
+  await fill(page, 'field-keySidePlayMm', '3.1');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+  await page.getByTestId('correction-changes').getByText('Key side play: 2.4 mm → 3.1 mm').waitFor();
+
+  // A correction needs a reason: without one nothing is sent.
+  await pick(page, 'submit-correction');
+  await page.getByText('Reason for the correction is required').first().waitFor();
+  expect(new URL(page.url()).pathname).toBe(`/pianos/${pianoId}/correct`);
+
+  await fill(page, 'field-changeNote', 'Re-measured key side play in daylight.');
+  await pick(page, 'submit-correction');
+  await page.waitForURL(new RegExp(`/pianos/${pianoId}$`));
+  const after = { ...before, keySidePlayMm: 3.1 };
+  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(gradeAssessment(after).score));
+  const v2 = page.getByTestId('history-version-2');
+  await v2.waitFor();
+  const text = await v2.textContent();
+  expect(text).toContain('Key side play: 2.4 mm → 3.1 mm');
+  expect(text).toContain('Re-measured key side play in daylight.');
+  expect(text).toContain('Mara Quillfeather');
+  await page.getByTestId('history-version-1').waitFor();
+  await shot(page, 'correction-history-wide');
+  await page.close();
+});
+
+it('refuses a wrong value on the phone: the field is named, the step does not advance, nothing is submitted', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  await fill(page, 'field-seller-name', 'Odile Ferncastle');
+  await pick(page, 'choice-acquisition-consignment');
+  await pick(page, 'choice-inspectedAt-showroom');
+  await fill(page, 'field-maker', 'Marrowfield');
+  await pick(page, 'choice-kind-upright');
+  await next(page, 'Keys');
+
+  await fill(page, 'field-keySidePlayMm', '12');
+  await page.getByTestId('step-next').click();
+  await page.getByText('Key side play must be at most 10 mm').first().waitFor();
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+
+  // Fixed, the form moves on; broken again from the review, it cannot jump back to the review or submit.
+  await fill(page, 'field-keySidePlayMm', '1.5');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+  await pick(page, 'review-change-keys');
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  await fill(page, 'field-keySidePlayMm', '12');
+  await pick(page, 'step-jump-review');
+  await page.getByText('Key side play must be at most 10 mm').first().waitFor();
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  await expect(page.getByTestId('submit-intake').count()).resolves.toBe(0);
+  expect(new URL(page.url()).pathname).toBe('/trade-ins/new');
+  await shot(page, 'intake-refused-phone');
+
+  // Throwing the draft away asks first, then starts afresh.
+  await pick(page, 'discard-draft');
+  await pick(page, 'confirm-discard');
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Piano and seller');
+  await expect(page.getByTestId('field-seller-name').inputValue()).resolves.toBe('');
+  await page.close();
+});
+
+it('keeps an intake submitted without a connection and sends it when the connection is back', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  await fill(page, 'field-seller-name', 'Tamsin Orrick');
+  await pick(page, 'choice-acquisition-purchase');
+  await pick(page, 'choice-inspectedAt-workshop');
+  await fill(page, 'field-maker', 'Hollowmere');
+  await pick(page, 'choice-kind-grand');
+  await fill(page, 'field-sizeCm', '170');
+  for (const title of ['Keys', 'Hammers', 'Strings', 'Soundboard', 'Play and pitch']) await next(page, title);
+  await fill(page, 'field-a4Hz', '440');
+  await next(page, 'Photos');
+  await next(page, 'Review');
+
+  await context.setOffline(true);
+  try {
+    await pick(page, 'submit-intake');
+    await page.getByTestId('offline-kept').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/trade-ins/new');
+    await shot(page, 'intake-offline-phone');
+  } finally {
+    await context.setOffline(false);
+  }
+  await page.waitForURL(/\/pianos\/\d+$/, { timeout: 40000 });
+  await page.getByText('Hollowmere').first().waitFor();
+  // Sent once, the draft is gone: a new trade-in starts empty.
+  await page.goto(`${baseUrl()}/trade-ins/new`);
+  await expect(page.getByTestId('field-maker').inputValue()).resolves.toBe('');
+  await page.close();
+});
+
+// The server is the judge: its refusals (a field it names, a correction that collides) are shown where they belong.
+async function refuseOnce(page: Page, mutation: string, error: { message: string; extensions: Record<string, string> }) {
+  let refused = false;
+  await page.route('**/graphql', async (route) => {
+    const body = route.request().postDataJSON() as { query?: string } | null;
+    if (!refused && body?.query?.includes(mutation)) {
+      refused = true;
+      await route.fulfill({ status: 200, contentType: 'application/json', body: JSON.stringify({ data: null, errors: [error] }) });
+      return;
+    }
+    await route.continue();
+  });
+}
+
+it('shows the server’s refusal beside the field it names, and a colliding correction as such', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  await fill(page, 'field-seller-name', 'Odile Ferncastle');
+  await pick(page, 'choice-acquisition-trade_in');
+  await pick(page, 'choice-inspectedAt-customer_home');
+  await fill(page, 'field-maker', 'Marrowfield');
+  await pick(page, 'choice-kind-upright');
+  await next(page, 'Keys');
+  await fill(page, 'field-keySidePlayMm', '4');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+
+  await refuseOnce(page, 'submitIntake', { message: 'measurements.keySidePlayMm: must be at most 3 mm', extensions: { code: 'BAD_INPUT', field: 'measurements.keySidePlayMm' } });
+  await pick(page, 'submit-intake');
+  await page.getByTestId('field-keySidePlayMm').waitFor();
+  await page.getByText('Key side play must be at most 3 mm').first().waitFor();
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  expect(new URL(page.url()).pathname).toBe('/trade-ins/new');
+  await shot(page, 'intake-server-refusal-phone');
+  await page.unrouteAll();
+
+  // The draft stays whole: the same intake goes through once the server takes it.
+  await fill(page, 'field-keySidePlayMm', '2');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+  await pick(page, 'submit-intake');
+  await page.waitForURL(/\/pianos\/\d+$/);
+  const pianoPath = new URL(page.url()).pathname;
+
+  await pick(page, 'correct-assessment');
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+  await fill(page, 'field-changeNote', 'Hammer grooves measured again.');
+  await refuseOnce(page, 'correctAssessment', { message: 'Someone else corrected this assessment at the same moment: reload and try again.', extensions: { code: 'CONFLICT' } });
+  await pick(page, 'submit-correction');
+  await page.getByText('Someone else corrected this assessment at the same moment').first().waitFor();
+  expect(new URL(page.url()).pathname).toBe(`${pianoPath}/correct`);
+  await page.unrouteAll();
+  await page.close();
+});
