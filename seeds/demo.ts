@@ -181,7 +181,22 @@ async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: num
   }
   if (!done) return;
   // The workshop's re-measurements of what it worked on.
-  const after: Measurements = { ...measurements, keyTouchesNeighbour: false, keySidePlayMm: 1.3, keyLevelDeviationMm: 0.3, hammerGrooveDepthMm: 0.6, brokenStrings: 0, a4Hz: 440, trebleEvenness: 4 };
+  const after: Measurements = {
+    ...measurements,
+    keyTouchesNeighbour: false,
+    keySidePlayMm: 1.3,
+    keyLevelDeviationMm: 0.3,
+    hammerGrooveDepthMm: 0.6,
+    // new or reshaped and voiced hammers
+    hammerFelt: 'firm',
+    hammerFeltLeft: 'ample',
+    brokenStrings: 0,
+    a4Hz: 440,
+    tuningPins: measurements.tuningPins === 'loose' ? 'firm' : measurements.tuningPins,
+    bassEvenness: Math.max(4, measurements.bassEvenness ?? 4),
+    middleEvenness: Math.max(4, measurements.middleEvenness ?? 4),
+    trebleEvenness: Math.max(4, measurements.trebleEvenness ?? 4),
+  };
   const regrade = gradeAssessment(after, defaultRules);
   await knex('assessments').insert({
     piano_id: pianoId, version: 2, kind: 'post_workshop', measurements: JSON.stringify(after), grade: JSON.stringify(regrade), score: regrade.score, band: regrade.band,

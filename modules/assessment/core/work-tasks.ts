@@ -38,6 +38,27 @@ export const WORK_TASK_LABELS: Record<WorkTask, string> = {
   cabinet_touch_up: 'Cabinet touch-up',
 };
 
+/** The part of the piano each task works on: where its photos are taken and where a buyer reads of it. */
+export type WorkArea = 'keys' | 'hammers' | 'strings' | 'soundboard' | 'tuning' | 'case';
+export const WORK_TASK_AREAS: Record<WorkTask, WorkArea> = {
+  regulation: 'keys',
+  rebush_keys: 'keys',
+  ease_front_rail_pins: 'keys',
+  ease_sticking_keys: 'keys',
+  replace_keytops: 'keys',
+  reshape_voice_hammers: 'hammers',
+  replace_hammers: 'hammers',
+  voicing: 'hammers',
+  replace_broken_strings: 'strings',
+  restring_section: 'strings',
+  soundboard_repair: 'soundboard',
+  reglue_ribs: 'soundboard',
+  pitch_raise: 'tuning',
+  fine_tuning: 'tuning',
+  tuning_pin_repair: 'tuning',
+  cabinet_touch_up: 'case',
+};
+
 /** One recommended piece of work; `hours` only where the finding itself sizes the job. */
 export interface WorkItem {
   task: WorkTask;

@@ -2,7 +2,7 @@ import { z } from 'zod';
 
 import { AREAS, AREA_LABELS, type Area, type Finding, type Grade, type Severity } from '@/modules/assessment/core/grade';
 import type { Measurements } from '@/modules/assessment/core/measurements';
-import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
+import { WORK_TASK_AREAS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { describeSize, describeYear, type CaseCondition, type PianoKind } from '@/modules/pianos/core/piano';
 import { cents } from '@/modules/tone/core/pitch';
 
@@ -20,24 +20,6 @@ export const CONDITION_WORDS: Record<Severity, string> = {
 };
 const RANK: Record<Severity, number> = { sound: 0, watch: 1, needs_work: 2, serious: 3 };
 
-const TASK_AREAS: Record<WorkTask, DisclosureArea> = {
-  regulation: 'keys',
-  rebush_keys: 'keys',
-  ease_front_rail_pins: 'keys',
-  ease_sticking_keys: 'keys',
-  replace_keytops: 'keys',
-  reshape_voice_hammers: 'hammers',
-  replace_hammers: 'hammers',
-  voicing: 'hammers',
-  replace_broken_strings: 'strings',
-  restring_section: 'strings',
-  soundboard_repair: 'soundboard',
-  reglue_ribs: 'soundboard',
-  pitch_raise: 'tuning',
-  fine_tuning: 'tuning',
-  tuning_pin_repair: 'tuning',
-  cabinet_touch_up: 'case',
-};
 
 const CASE_WORDS: Record<CaseCondition, [Severity, string]> = {
   excellent: ['sound', 'The case and finish are in excellent condition.'],
@@ -129,7 +111,7 @@ export function buildDisclosure(input: DisclosureInput): DisclosureContent {
       const [severity, text] = CASE_WORDS[piano.caseCondition];
       findings.push({ severity, text: piano.caseNotes ? `${text} ${piano.caseNotes}` : text });
     }
-    const workDone = input.workDone.filter((w) => TASK_AREAS[w.task as WorkTask] === area).map((w) => w.title || WORK_TASK_LABELS[w.task as WorkTask]);
+    const workDone = input.workDone.filter((w) => WORK_TASK_AREAS[w.task as WorkTask] === area).map((w) => w.title || WORK_TASK_LABELS[w.task as WorkTask]);
     const photoIds = input.photos.filter((p) => p.area === area).map((p) => p.id);
     if (!findings.length && !workDone.length && !photoIds.length) continue;
     const severity = worst(findings);

@@ -29,7 +29,11 @@ export interface UploadRequest {
   photo: PickedPhoto;
   area: PhotoArea;
   caption: string;
-  draftKey: string;
+  /** Whose photo: a draft not yet submitted, or a piano (and, in the workshop, a work item before or after the work). */
+  draftKey?: string;
+  pianoId?: number;
+  workItemId?: number;
+  phase?: 'before' | 'after';
   token: string;
   onProgress: (fraction: number) => void;
 }
@@ -64,7 +68,10 @@ export function uploadPhoto(req: UploadRequest): { done: Promise<UploadOutcome>;
     const form = new FormData();
     form.append('area', req.area);
     if (req.caption.trim()) form.append('caption', req.caption.trim());
-    form.append('draftKey', req.draftKey);
+    if (req.draftKey) form.append('draftKey', req.draftKey);
+    if (req.pianoId != null) form.append('pianoId', String(req.pianoId));
+    if (req.workItemId != null) form.append('workItemId', String(req.workItemId));
+    if (req.phase) form.append('phase', req.phase);
     if (req.photo.file) {
       form.append('photo', req.photo.file, req.photo.fileName ?? 'photo');
     } else {

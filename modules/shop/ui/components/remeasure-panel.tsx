@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { BAND_LABELS, gradeAssessment, type Area, type Grade } from '@/modules/assessment/core/grade';
 import type { GradeRules } from '@/modules/assessment/core/grade-rules';
 import { measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
-import type { WorkTask } from '@/modules/assessment/core/work-tasks';
+import { WORK_TASK_AREAS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { GradeSummary } from '@/modules/assessment/ui/components/grade-summary';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -41,25 +41,6 @@ const RATING_LABELS = { 1: '1', 2: '2', 3: '3', 4: '4', 5: '5' } as Record<(type
 const YES_NO = ['yes', 'no'] as const;
 const YES_NO_LABELS: Record<(typeof YES_NO)[number], string> = { yes: 'Yes', no: 'No' };
 
-// The areas each kind of work touches: their measurements are the ones worth taking again.
-const TASK_AREA: Record<WorkTask, Area> = {
-  regulation: 'keys',
-  rebush_keys: 'keys',
-  ease_front_rail_pins: 'keys',
-  ease_sticking_keys: 'keys',
-  replace_keytops: 'keys',
-  reshape_voice_hammers: 'hammers',
-  replace_hammers: 'hammers',
-  voicing: 'play',
-  replace_broken_strings: 'strings',
-  restring_section: 'strings',
-  soundboard_repair: 'soundboard',
-  reglue_ribs: 'soundboard',
-  pitch_raise: 'tuning',
-  fine_tuning: 'tuning',
-  tuning_pin_repair: 'tuning',
-  cabinet_touch_up: 'play',
-};
 
 interface RemeasurePanelProps {
   tasks: readonly string[];
@@ -73,7 +54,7 @@ const shown = (v: unknown, unit: string) => (v == null ? 'not measured' : `${v}$
 
 /** Re-measure what the workshop worked on; only filled fields are sent, the rest carry over from the last assessment. */
 export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: RemeasurePanelProps) {
-  const worked = useMemo(() => new Set<Area>(['play', ...tasks.map((t) => TASK_AREA[t as WorkTask]).filter(Boolean)]), [tasks]);
+  const worked = useMemo(() => new Set<Area>(['play', ...tasks.map((t) => WORK_TASK_AREAS[t as WorkTask]).filter((a): a is Exclude<typeof a, 'case'> => a != null && a !== 'case')]), [tasks]);
   const [everything, setEverything] = useState(false);
   const [numbers, setNumbers] = useState<Partial<Record<NumberKey, string>>>({});
   const [ratings, setRatings] = useState<Partial<Record<RatingKey, (typeof RATINGS)[number]>>>({});

@@ -2,7 +2,7 @@ import * as ImagePicker from 'expo-image-picker';
 import { useState } from 'react';
 import { Image, Modal, Platform, Pressable, StyleSheet, View, useWindowDimensions } from 'react-native';
 
-import type { WorkTask } from '@/modules/assessment/core/work-tasks';
+import { WORK_TASK_AREAS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import type { PhotoView } from '@/modules/photos/ui/photo-upload';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { PHOTO_AREAS, type PhotoArea } from '@/modules/photos/core/photo-rules';
@@ -20,25 +20,6 @@ import { readWorkCaption, uploadWorkPhoto, workCaption, WORK_PHASE_LABELS, WORK_
 import { Feedback, type FeedbackState } from './feedback';
 import { Buttons } from './field-row';
 
-// Where the photos of a task are usually taken; the technician can pick another area.
-const TASK_AREA: Partial<Record<WorkTask, PhotoArea>> = {
-  regulation: 'keys',
-  rebush_keys: 'keys',
-  ease_front_rail_pins: 'keys',
-  ease_sticking_keys: 'keys',
-  replace_keytops: 'keys',
-  reshape_voice_hammers: 'hammers',
-  replace_hammers: 'hammers',
-  voicing: 'hammers',
-  replace_broken_strings: 'strings',
-  restring_section: 'strings',
-  soundboard_repair: 'soundboard',
-  reglue_ribs: 'soundboard',
-  pitch_raise: 'tuning',
-  fine_tuning: 'tuning',
-  tuning_pin_repair: 'tuning',
-  cabinet_touch_up: 'case',
-};
 
 interface WorkPhotosProps {
   itemId: number;
@@ -53,7 +34,7 @@ export function WorkPhotos({ itemId, pianoId, title, task, blocked }: WorkPhotos
   const { token } = useSession();
   const { photos, reexecute } = usePianoPhotos(pianoId);
   const [phase, setPhase] = useState<WorkPhase>('before');
-  const [area, setArea] = useState<PhotoArea>(TASK_AREA[task as WorkTask] ?? 'general');
+  const [area, setArea] = useState<PhotoArea>(WORK_TASK_AREAS[task as WorkTask] ?? 'general');
   const [caption, setCaption] = useState('');
   const [progress, setProgress] = useState<number | null>(null);
   const [feedback, setFeedback] = useState<FeedbackState>(null);
