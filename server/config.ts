@@ -33,6 +33,8 @@ function paymentsConfig(env: NodeJS.ProcessEnv): Config['payments'] {
 
 export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
   const jwtSecret = need(env, 'JWT_SECRET');
+  // The local inbox shows every e-mail to anyone who opens it: never in production.
+  if (env.NODE_ENV === 'production' && !env.SMTP_HOST) throw new Error('Set SMTP_HOST in production: the local mail fake and its inbox are for development only.');
   if (jwtSecret.length < 32) throw new Error('JWT_SECRET must be at least 32 characters.');
   return {
     host: env.HOST ?? '127.0.0.1',
