@@ -1,6 +1,8 @@
-import { readConfig } from '@/server/config';
+import { readConfig as read } from '@/server/config';
 
 const base = { JWT_SECRET: 'x'.repeat(40), DATABASE_URL: 'postgres://localhost/x' };
+// The environment as the process would hand it over: plain strings, NODE_ENV only where set.
+const readConfig = (env: Record<string, string>) => read(env as unknown as NodeJS.ProcessEnv);
 
 describe('readConfig', () => {
   it('runs the local fakes by default', () => {

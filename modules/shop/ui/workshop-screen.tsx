@@ -41,6 +41,8 @@ function Workshop() {
           <Button label="Bench" variant="secondary" href="/bench" />
           {manager ? <Button label="Overruns" variant="secondary" href="/workshop/overruns" testID="workshop-overruns" /> : null}
           {manager ? <Button label="Rate card" variant="secondary" href="/workshop/rates" testID="workshop-rates" /> : null}
+          {manager ? <Button label="Grading rules" variant="secondary" href="/workshop/grading" testID="workshop-grading" /> : null}
+          {manager ? <Button label="Disclosure texts" variant="secondary" href="/present/texts" testID="workshop-texts" /> : null}
           <Button label="Climate" variant="secondary" href="/workshop/climate" testID="workshop-climate" />
         </>
       }

@@ -1,0 +1,375 @@
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { graphProblem, problemWithoutField } from '@/modules/accounts/ui/graph-error';
+import { BAND_LABELS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
+import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
+import type { Measurements } from '@/modules/assessment/core/measurements';
+import { gradeRulesInput, type GradeRulesInput } from '@/modules/assessment/core/rules-input';
+import { CellInput } from '@/modules/shop/ui/components/cell-input';
+import { Feedback, type FeedbackState } from '@/modules/shop/ui/components/feedback';
+import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { PALETTE, SPACE } from '@/modules/theme/core/palette';
+import { Button } from '@/modules/theme/ui/button';
+import { Card } from '@/modules/theme/ui/card';
+import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { Screen } from '@/modules/theme/ui/screen';
+import { Section } from '@/modules/theme/ui/section';
+import { Body, Heading } from '@/modules/theme/ui/text';
+import { TextField } from '@/modules/theme/ui/text-field';
+import { useWide } from '@/modules/theme/ui/use-wide';
+
+import { GradeSummary } from './components/grade-summary';
+import { useGradeRulesInForce, useSaveGradeRules } from './use-grade-rules-editor';
+
+/** A field of the rules by its path in `GradeRules` ("bands.good"), as the schema and the server name it. */
+type RuleKey =
+  | Exclude<keyof GradeRulesInput, 'scorePenalty' | 'bands'>
+  | `scorePenalty.${keyof GradeRules['scorePenalty']}`
+  | `bands.${keyof GradeRules['bands']}`;
+
+interface RuleField {
+  key: RuleKey;
+  label: string;
+  unit: string;
+  min: number;
+  max: number;
+  whole?: boolean;
+  hint?: string;
+}
+
+interface RuleGroup {
+  title: string;
+  description: string;
+  fields: readonly RuleField[];
+}
+
+const MM = { unit: 'mm', min: 0, max: 15 } as const;
+const HOURS = { unit: 'h', min: 0, max: 200 } as const;
+const RATING = { unit: 'of 5', min: 1, max: 5, whole: true } as const;
+const POINTS = { unit: 'points', min: 0, max: 100, whole: true } as const;
+
+const GROUPS: readonly RuleGroup[] = [
+  {
+    title: 'Keys',
+    description: 'Sideways play at the key front, and how far the keys rest out of level.',
+    fields: [
+      { key: 'keySidePlayNormalMm', label: 'Side play is normal up to', ...MM },
+      { key: 'keyLevelSoundMm', label: 'Key level is sound up to', ...MM },
+      { key: 'keyLevelLightRegulationMm', label: 'Light regulation up to', ...MM },
+      { key: 'keyLevelFullRegulationMm', label: 'Full regulation at', ...MM, hint: 'Between the two, the hours rise step by step.' },
+      { key: 'lightRegulationHours', label: 'Hours for a light regulation', ...HOURS },
+      { key: 'fullRegulationHours', label: 'Hours for a full regulation', ...HOURS },
+    ],
+  },
+  {
+    title: 'Hammers',
+    description: 'The depth of the string grooves worn into the hammer felt.',
+    fields: [
+      { key: 'hammerGrooveNormalMm', label: 'Grooves are normal up to', ...MM },
+      { key: 'hammerGrooveReplaceMm', label: 'Replace the hammers at', ...MM },
+    ],
+  },
+  {
+    title: 'Soundboard',
+    description: 'When a crack counts as wide.',
+    fields: [
+      {
+        key: 'wideCrackGapMm',
+        label: 'A crack is wide from a gap of',
+        unit: 'mm',
+        min: 0.1,
+        max: 10,
+        // ISO/IEC 7810 ID-1: a payment card is 0.76 mm thick.
+        hint: '0.76 mm is the thickness of a payment card (ISO/IEC 7810): a card that slides in marks a wide crack.',
+      },
+    ],
+  },
+  {
+    title: 'Pitch',
+    description: 'Measured A4 against the standard 440 Hz.',
+    fields: [
+      { key: 'pitchSoundCents', label: 'Pitch is sound within', unit: 'cents', min: 0, max: 100 },
+      { key: 'pitchRaiseCents', label: 'Pitch raise when flatter than', unit: 'cents', min: 1, max: 300 },
+    ],
+  },
+  {
+    title: 'Play test',
+    description: 'The tester’s overall impression, from 1 to 5.',
+    fields: [
+      { key: 'playPoorAtOrBelow', label: 'Poor at or below', ...RATING, hint: 'A poor play test marks the piano “not for retail as it stands”.' },
+      { key: 'playGoodAtOrAbove', label: 'Good at or above', ...RATING },
+    ],
+  },
+  {
+    title: 'Score',
+    description: 'Every piano starts at 100; each finding takes points off by its severity.',
+    fields: [
+      { key: 'scorePenalty.watch', label: 'Points off per “watch” finding', ...POINTS },
+      { key: 'scorePenalty.needsWork', label: 'Points off per “needs work” finding', ...POINTS },
+      { key: 'scorePenalty.serious', label: 'Points off per “serious” finding', ...POINTS },
+    ],
+  },
+  {
+    title: 'Bands',
+    description: 'The lowest score of each band; below “fair” a piano is poor.',
+    fields: [
+      { key: 'bands.excellent', label: 'Excellent from a score of', ...POINTS },
+      { key: 'bands.good', label: 'Good from a score of', ...POINTS },
+      { key: 'bands.fair', label: 'Fair from a score of', ...POINTS },
+    ],
+  },
+];
+
+const FIELDS: readonly RuleField[] = GROUPS.flatMap((g) => g.fields);
+const LABELS = Object.fromEntries(FIELDS.map((f) => [f.key, f.label])) as Record<RuleKey, string>;
+
+type Draft = Record<RuleKey, string>;
+
+function valueAt(rules: GradeRules, key: RuleKey): number {
+  const [head, tail] = key.split('.') as [keyof GradeRules, string | undefined];
+  const value = rules[head];
+  return tail ? (value as Record<string, number>)[tail] : (value as number);
+}
+
+function draftOf(rules: GradeRules): Draft {
+  return Object.fromEntries(FIELDS.map((f) => [f.key, String(valueAt(rules, f.key))])) as Draft;
+}
+
+const toNumber = (text: string): number | null => {
+  const t = text.trim().replace(',', '.');
+  if (!t || !/^-?\d*\.?\d+$/.test(t)) return null;
+  return Number(t);
+};
+
+/** The draft as the schema's input, or null while a value is not a number. */
+function numbersOf(d: Draft): GradeRulesInput | null {
+  const n = {} as Record<RuleKey, number>;
+  for (const f of FIELDS) {
+    const v = toNumber(d[f.key]);
+    if (v == null) return null;
+    n[f.key] = v;
+  }
+  const { 'scorePenalty.watch': watch, 'scorePenalty.needsWork': needsWork, 'scorePenalty.serious': serious, 'bands.excellent': excellent, 'bands.good': good, 'bands.fair': fair, ...flat } = n;
+  return { ...flat, scorePenalty: { watch, needsWork, serious }, bands: { excellent, good, fair } };
+}
+
+/** "must not be below keyLevelSoundMm" reads "must not be below “Key level is sound up to”". */
+function inWords(message: string): string {
+  return FIELDS.reduce((text, f) => text.split(f.key).join(`“${f.label}”`), message);
+}
+
+function rangeText(f: RuleField): string {
+  return `${f.whole ? 'A whole number' : 'A number'} from ${f.min} to ${f.max}${f.unit === 'of 5' ? '' : ` ${f.unit}`}.`;
+}
+
+/** Each field's problem in words, from the same schema the server checks with. */
+function problemsOf(d: Draft): Partial<Record<RuleKey, string>> {
+  const out: Partial<Record<RuleKey, string>> = {};
+  for (const f of FIELDS) if (toNumber(d[f.key]) == null) out[f.key] = rangeText(f);
+  const input = numbersOf(d);
+  if (!input) return out;
+  const parsed = gradeRulesInput.safeParse(input);
+  if (parsed.success) return out;
+  for (const issue of parsed.error.issues) {
+    const key = issue.path.join('.') as RuleKey;
+    const field = FIELDS.find((f) => f.key === key);
+    if (!field || out[key]) continue;
+    out[key] = issue.code === 'custom' ? `This ${inWords(issue.message)}.` : rangeText(field);
+  }
+  return out;
+}
+
+/** An inspection of our own making that touches most rules, so a change shows in the preview. */
+export function buildSample(): Measurements {
+  return {
+    keySidePlayMm: 1.8,
+    keyLevelDeviationMm: 1.8,
+    hammerGrooveDepthMm: 2.0,
+    soundboardCracks: [{ lengthCm: 25, widestGapMm: 0.8, crossesRib: false, buzzes: false, hurtsTuning: false, note: 'cosmetic, between ribs' }],
+    a4Hz: 436,
+    overallImpression: 4,
+  };
+}
+
+const SAMPLE = buildSample();
+const SAMPLE_WORDS = 'Side play 1.8 mm, keys 1.8 mm out of level, hammer grooves 2.0 mm, one cosmetic soundboard crack 0.8 mm wide, A4 at 436 Hz, play test 4 of 5.';
+
+/** The manager's page for the grading rules: the shop defaults that turn measurements into a grade. Saving makes a new version. */
+export function GradeRulesScreen() {
+  return (
+    <RoleGate roles={['manager']} title="Grading rules">
+      <GradeRulesLoader />
+    </RoleGate>
+  );
+}
+
+function GradeRulesLoader() {
+  const { rules, error, refresh } = useGradeRulesInForce();
+  const problem = graphProblem(error);
+  if (!rules) {
+    return (
+      <Screen title="Grading rules" eyebrow="Workshop">
+        {problem ? <Notice tone="error">{problem.message}</Notice> : <Loading label="Loading the grading rules…" />}
+      </Screen>
+    );
+  }
+  return <GradeRulesEditor rules={rules} onSaved={refresh} />;
+}
+
+function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () => void }) {
+  const wide = useWide();
+  const save = useSaveGradeRules();
+  const [d, setD] = useState<Draft>(() => draftOf(rules));
+  const [errors, setErrors] = useState<Partial<Record<RuleKey, string>>>({});
+  const [feedback, setFeedback] = useState<FeedbackState>(null);
+  const inForce = useMemo(() => gradeAssessment(SAMPLE, rules), [rules]);
+  const draftInput = useMemo(() => numbersOf(d), [d]);
+  const preview = useMemo(() => (draftInput ? gradeAssessment(SAMPLE, { ...draftInput, version: 'your unsaved changes' }) : null), [draftInput]);
+  const changed = FIELDS.some((f) => toNumber(d[f.key]) !== valueAt(rules, f.key));
+
+  const setField = (key: RuleKey, text: string) => {
+    setD((prev) => ({ ...prev, [key]: text }));
+    setErrors((prev) => ({ ...prev, [key]: undefined }));
+  };
+
+  const submit = async () => {
+    setFeedback(null);
+    const problems = problemsOf(d);
+    setErrors(problems);
+    if (!draftInput || Object.keys(problems).length) {
+      setFeedback({ tone: 'error', text: 'Some values need fixing: see the fields marked in red.' });
+      return;
+    }
+    const outcome = await save.run({ r: draftInput });
+    if (!outcome.ok) {
+      const field = outcome.problem.field as RuleKey | undefined;
+      if (field && LABELS[field]) setErrors({ [field]: `This ${inWords(problemWithoutField(outcome.problem))}.` });
+      setFeedback({ tone: 'error', text: inWords(outcome.problem.message) });
+      return;
+    }
+    setD(draftOf(outcome.data));
+    setFeedback({ tone: 'success', text: `Saved as version ${outcome.data.version}. Intakes graded from now on use it; intakes already graded keep the version they were graded with.` });
+    onSaved();
+  };
+
+  const fillDefaults = () => {
+    setD(draftOf(defaultRules));
+    setErrors({});
+    setFeedback(null);
+  };
+
+  const previewPanel = (
+    <Card role="region" accessibilityLabel="Preview on a sample inspection" testID="grading-preview">
+      <Heading level={2}>Preview</Heading>
+      <Body tone="secondary">{SAMPLE_WORDS}</Body>
+      <InForceLine grade={inForce} preview={preview} />
+      {preview ? <GradeSummary grade={preview} scoreTestID="grading-preview-score" /> : <Notice tone="info">Fill in every value with a number to see the preview.</Notice>}
+    </Card>
+  );
+
+  const fields = GROUPS.map((g) => (
+    <Card key={g.title} role="group" accessibilityLabel={g.title} testID={`grading-group-${g.title.toLowerCase().replace(/\s+/g, '-')}`}>
+      <View style={styles.groupHead}>
+        <Heading level={3}>{g.title}</Heading>
+        <Body variant="small" tone="secondary">
+          {g.description}
+        </Body>
+      </View>
+      {g.fields.map((f, i) =>
+        wide ? (
+          <View key={f.key} style={[styles.row, i > 0 && styles.rule]}>
+            <View style={styles.rowLabel}>
+              <Body variant="bodyStrong">{f.label}</Body>
+              {f.hint ? (
+                <Body variant="small" tone="quiet">
+                  {f.hint}
+                </Body>
+              ) : null}
+            </View>
+            <View style={styles.rowInput}>
+              <CellInput accessibilityLabel={`${g.title}: ${f.label}`} value={d[f.key]} onChangeText={(v) => setField(f.key, v)} unit={f.unit} error={errors[f.key]} testID={`grading-${f.key.replace('.', '-')}`} />
+            </View>
+          </View>
+        ) : (
+          <TextField
+            key={f.key}
+            label={f.label}
+            hint={f.hint}
+            value={d[f.key]}
+            onChangeText={(v) => setField(f.key, v)}
+            unit={f.unit}
+            inputMode="decimal"
+            error={errors[f.key]}
+            testID={`grading-${f.key.replace('.', '-')}`}
+          />
+        ),
+      )}
+    </Card>
+  ));
+
+  return (
+    <Screen
+      title="Grading rules"
+      eyebrow="Workshop"
+      headingTestID="grading-heading"
+      actions={<Button label="Rate card" variant="secondary" href="/workshop/rates" />}
+    >
+      <Body tone="secondary">
+        In force: version{' '}
+        <Body variant="bodyStrong" testID="grading-version">
+          {rules.version}
+        </Body>
+        . These are the shop’s own starting values, not facts of the trade: set them to how your workshop judges a piano. Intakes already graded keep the rules version they were graded with.
+      </Body>
+      {wide ? (
+        <View style={styles.columns}>
+          <View style={styles.fieldsColumn}>{fields}</View>
+          <View style={styles.previewColumn}>{previewPanel}</View>
+        </View>
+      ) : (
+        <>
+          <Section title="Rules" description="Every value with its unit. The preview below follows your changes as you type.">
+            <View style={styles.stack}>{fields}</View>
+          </Section>
+          {previewPanel}
+        </>
+      )}
+      <View style={styles.save}>
+        <Button label="Save as a new version" onPress={submit} busy={save.busy} testID="grading-save" />
+        <Button label="Undo my changes" variant="quiet" onPress={() => setD(draftOf(rules))} disabled={!changed} testID="grading-undo" />
+        <Button label="Fill in the shop defaults" variant="quiet" onPress={fillDefaults} testID="grading-defaults" />
+      </View>
+      <Feedback state={feedback} testID="grading-feedback" />
+    </Screen>
+  );
+}
+
+/** What the sample scores under the rules in force, beside what it scores with the draft. */
+function InForceLine({ grade, preview }: { grade: Grade; preview: Grade | null }) {
+  const same = preview != null && preview.score === grade.score && preview.band === grade.band && preview.findings.length === grade.findings.length;
+  return (
+    <View style={styles.inForce} testID="grading-preview-compare">
+      <Body variant="small" tone="secondary">
+        Under the rules in force: {grade.score} of 100, {BAND_LABELS[grade.band]}, {grade.findings.length} findings.
+      </Body>
+      <Body variant="small" tone={same ? 'quiet' : 'accent'}>
+        {preview == null ? 'With your changes: not yet a number in every field.' : same ? 'Your changes do not move this sample.' : `With your changes: ${preview.score} of 100, ${BAND_LABELS[preview.band]}.`}
+      </Body>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: SPACE.xl },
+  fieldsColumn: { flex: 3, minWidth: 0, gap: SPACE.lg },
+  previewColumn: { flex: 2, minWidth: 0 },
+  stack: { gap: SPACE.md },
+  groupHead: { gap: SPACE.xs },
+  row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingTop: SPACE.sm },
+  rule: { borderTopWidth: 1, borderTopColor: PALETTE.linen },
+  rowLabel: { flex: 1, minWidth: 0, gap: 2 },
+  rowInput: { width: 190 },
+  inForce: { gap: 2, paddingVertical: SPACE.xs, borderTopWidth: 1, borderBottomWidth: 1, borderColor: PALETTE.linen },
+  save: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.sm, alignItems: 'center' },
+});
