@@ -68,6 +68,23 @@ describe('submitIntake', () => {
   });
 });
 
+describe('a piano logged before its inspection', () => {
+  it('gets its intake and assessment on the same record, once', async () => {
+    const created = (await api.gql(await api.tokenFor('intake'), 'mutation { createPiano(maker: "Almsbury", kind: "upright") { id stockNumber } }')).body.data.createPiano;
+    const res = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ pianoId: created.id }) });
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.submitIntake).toMatchObject({ pianoId: created.id, stockNumber: created.stockNumber, version: 1 });
+    const piano = await api.knex('pianos').where({ id: created.id }).first();
+    expect(piano).toMatchObject({ stage: 'assessed', model: 'Parlour 118', size_cm: 118 });
+    const moves = await api.knex('stage_moves').where({ piano_id: created.id }).orderBy('id');
+    expect(moves.map((m) => m.action)).toEqual(['receive', 'submit_assessment']);
+    const before = await counts();
+    const again = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ pianoId: created.id }) });
+    expect(again.body.errors[0].extensions).toMatchObject({ code: 'CONFLICT', field: 'pianoId' });
+    expect(await counts()).toEqual(before);
+  });
+});
+
 describe('seller details', () => {
   let pianoId: number;
   beforeAll(async () => {

@@ -37,6 +37,8 @@ export const intakeInput = z
     notes: z.string().trim().max(2000).nullish(),
     measurements: measurementsInput,
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
+    /** A piano already in stock in stage received (logged before its inspection): assess it instead of adding one. */
+    pianoId: z.number().int().positive().optional(),
   })
   .strict();
 export type IntakeInput = z.infer<typeof intakeInput>;

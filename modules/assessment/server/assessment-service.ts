@@ -59,7 +59,7 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
     const rules = await currentRules(trx);
     const grade = gradeAssessment(input.measurements, rules);
     const p = input.piano;
-    const piano = await Piano.query(trx).insertAndFetch({
+    const details = {
       maker: p.maker,
       model: p.model ?? null,
       serialNumber: p.serialNumber ?? null,
@@ -72,9 +72,20 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       finish: p.finish ?? null,
       caseCondition: p.caseCondition ?? null,
       caseNotes: p.caseNotes ?? null,
-      createdById: actor.id,
-    });
-    await recordArrival(trx, piano, actor.id, actor.role);
+    };
+    let piano: Piano;
+    if (input.pianoId != null) {
+      // A piano logged before its inspection: the intake completes its record.
+      const existing = await Piano.query(trx).findById(input.pianoId).forUpdate();
+      if (!existing) throw notFound(`piano ${input.pianoId}`);
+      if (existing.stage !== 'received' || (await Intake.query(trx).findOne({ piano_id: existing.id }))) {
+        throw new AppError('CONFLICT', `${existing.stockNumber} already has its intake: correct its assessment instead.`, 'pianoId');
+      }
+      piano = await existing.$query(trx).patchAndFetch(details);
+    } else {
+      piano = await Piano.query(trx).insertAndFetch({ ...details, createdById: actor.id });
+      await recordArrival(trx, piano, actor.id, actor.role);
+    }
     await Intake.query(trx).insert({
       pianoId: piano.id,
       sellerName: input.seller.name,
