@@ -299,3 +299,58 @@ it('shows the server’s refusal beside the field it names, and a colliding corr
   await page.unrouteAll();
   await page.close();
 });
+
+// The id of a seeded piano by its stock number, asked through the API as the given user.
+async function pianoIdOf(page: Page, email: string, stockNumber: string): Promise<number> {
+  const login = await page.request.post(`${baseUrl()}/auth/login`, { data: { email, password: 'feltwire-demo' } });
+  const { token } = (await login.json()) as { token: string };
+  const res = await page.request.post(`${baseUrl()}/graphql`, {
+    headers: { Authorization: `Bearer ${token}` },
+    data: { query: 'query($stockNumber: String) { piano(stockNumberEq: $stockNumber) { id } }', variables: { stockNumber } },
+  });
+  const body = (await res.json()) as { data?: { piano: { id: number } | null }; errors?: unknown };
+  expect(body.errors).toBeUndefined();
+  return body.data!.piano!.id;
+}
+
+// Only this journey touches FW-0001 (the journeys share one seeded server): a piano logged before its inspection.
+it('intake staff assess a piano logged before its inspection from its page, its details filled in, without losing another draft unasked', async () => {
+  const page = await newPage(context, PHONE);
+  const pianoId = await pianoIdOf(page, 'intake@feltwire.test', 'FW-0001');
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+
+  // A new trade-in already begun on this device is not overwritten by the assessment.
+  await pick(page, 'start-trade-in');
+  await fill(page, 'field-seller-name', 'Odile Ferncastle');
+  await page.waitForTimeout(600);
+
+  await page.goto(`${baseUrl()}/pianos/${pianoId}`);
+  await pick(page, 'assess-piano');
+  await page.getByTestId('other-draft').waitFor();
+  expect(new URL(page.url()).pathname).toBe('/trade-ins/new');
+  await pick(page, 'confirm-discard');
+
+  await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Piano and seller');
+  await expect(page.getByTestId('field-maker').inputValue()).resolves.toBe('Almsbury');
+  await expect(page.getByTestId('field-model').inputValue()).resolves.toBe('Parlour 118');
+  await expect(page.getByTestId('field-seller-name').inputValue()).resolves.toBe('');
+  await page.getByText('Assessing FW-0001').first().waitFor();
+  await shot(page, 'intake-assess-piano-phone');
+
+  await fill(page, 'field-seller-name', 'Bertram Hollins');
+  await pick(page, 'choice-acquisition-purchase');
+  await pick(page, 'choice-inspectedAt-showroom');
+  await next(page, 'Keys');
+  await fill(page, 'field-keySidePlayMm', '1.8');
+  for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+  const expected = gradeAssessment({ keySidePlayMm: 1.8 });
+  await expect(page.getByTestId('grade-score').first().textContent()).resolves.toContain(String(expected.score));
+
+  await pick(page, 'submit-intake');
+  await page.waitForURL(new RegExp(`/pianos/${pianoId}$`));
+  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(expected.score));
+  await expect(page.getByTestId('piano-flash').textContent()).resolves.toContain('FW-0001');
+  await expect(page.getByTestId('assess-piano').count()).resolves.toBe(0);
+  await page.close();
+});

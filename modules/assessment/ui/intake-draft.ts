@@ -121,8 +121,9 @@ export interface AssessmentDraft {
   notes: string;
   measurements: MeasureDraft;
   photos: DraftPhoto[];
-  /** correction only: which piano, and the version the form started from */
+  /** which piano: the one corrected, or one logged before its inspection that this intake assesses; null for a new trade-in */
   pianoId: number | null;
+  /** correction only: the version the form started from */
   baseVersion: number | null;
   changeNote: string;
   /** submit was pressed while offline: send as soon as the connection is back */
@@ -207,6 +208,49 @@ export function newIntakeDraft(now: Date): AssessmentDraft {
     pendingSubmit: false,
     changedAt: null,
   };
+}
+
+/** A piano as the stock record holds it: what an intake of a piano already in stock starts from. */
+export interface PianoOnRecord {
+  id: number;
+  maker: string;
+  model: string | null;
+  serialNumber: string | null;
+  year: number | null;
+  yearIsEstimate: boolean;
+  yearFrom: number | null;
+  yearTo: number | null;
+  kind: PianoKind;
+  sizeCm: number | null;
+  finish: string | null;
+  caseCondition: CaseCondition | null;
+  caseNotes: string | null;
+  createdAt: string;
+}
+
+/** The piano fields filled from the record: the inspection checks them rather than typing them again. */
+export function pianoDraftFrom(p: PianoOnRecord): PianoDraft {
+  const range = p.yearFrom != null && p.yearTo != null;
+  return {
+    maker: p.maker,
+    model: p.model ?? '',
+    serialNumber: p.serialNumber ?? '',
+    kind: p.kind,
+    sizeCm: p.sizeCm == null ? '' : String(p.sizeCm),
+    yearMode: range ? 'range' : 'year',
+    year: range || p.year == null ? '' : String(p.year),
+    yearIsEstimate: !range && p.yearIsEstimate,
+    yearFrom: range ? String(p.yearFrom) : '',
+    yearTo: range ? String(p.yearTo) : '',
+    finish: p.finish ?? '',
+    caseCondition: p.caseCondition,
+    caseNotes: p.caseNotes ?? '',
+  };
+}
+
+/** An intake of a piano logged before its inspection: tied to it, its details filled in, received the day it was logged. */
+export function newPianoIntakeDraft(now: Date, piano: PianoOnRecord): AssessmentDraft {
+  return { ...newIntakeDraft(now), pianoId: piano.id, piano: pianoDraftFrom(piano), receivedOn: localDate(new Date(piano.createdAt)) };
 }
 
 let crackSeq = 0;
@@ -446,6 +490,7 @@ export function buildIntakeInput(d: AssessmentDraft): BuildResult {
     photoIds: d.photos.map((p) => p.id),
   };
   if (text(d.notes)) input.notes = text(d.notes);
+  if (d.pianoId != null) input.pianoId = d.pianoId;
   const parsed = intakeInput.safeParse(input);
   if (!parsed.success) addIssues(errors, parsed.error.issues);
   // A question left unanswered reads better than the schema's list of allowed values.

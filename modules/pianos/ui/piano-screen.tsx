@@ -87,6 +87,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
   const { intake } = useIntakeRecord(piano.id);
   const { photos } = usePianoPhotos(piano.id);
   const latest = history?.length ? history[history.length - 1] : null;
+  // Intake staff and managers correct an assessment, or make the first one of a piano logged before its inspection.
   const mayCorrect = !!user && can(user.role, 'assess');
   const historyProblem = graphProblem(historyError);
 
@@ -94,6 +95,15 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
     <Section title="Condition">
       {latest ? (
         <LatestAssessment latest={latest} correctHref={mayCorrect ? `/pianos/${piano.id}/correct` : null} />
+      ) : history && piano.stage === 'received' ? (
+        <View style={styles.awaiting}>
+          <EmptyState title="Not assessed yet">Logged before its inspection: the grade shows here once the intake is submitted.</EmptyState>
+          {mayCorrect ? (
+            <View style={styles.back}>
+              <Button label="Assess this piano" href={`/trade-ins/new?pianoId=${piano.id}`} testID="assess-piano" />
+            </View>
+          ) : null}
+        </View>
       ) : history ? (
         <EmptyState title="Not assessed yet">The grade from the inspection shows here once it is submitted.</EmptyState>
       ) : historyProblem ? (
@@ -221,6 +231,7 @@ function PianoSummary({ piano }: { piano: PianoRecord }) {
 
 const styles = StyleSheet.create({
   back: { alignItems: 'flex-start' },
+  awaiting: { gap: SPACE.md },
   actions: { flexDirection: 'row', gap: SPACE.sm, flexWrap: 'wrap' },
   summary: { gap: SPACE.sm },
   stageLine: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm, flexWrap: 'wrap' },

@@ -13,6 +13,7 @@ import { Notice } from '@/modules/theme/ui/notice';
 import { Body, Eyebrow, Heading } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
+import { DraftConfirm } from './draft-confirm';
 import { GradeSummary } from './grade-summary';
 import { HammersStep, KeysStep, PlayStep, SoundboardStep, StringsStep } from './measure-steps';
 import { PianoStep } from './piano-step';
@@ -326,29 +327,30 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
     </View>
   );
   const discardPanel = confirmDiscard ? (
-    <View style={styles.confirm} role="alert">
-      <Body variant="bodyStrong">Discard this draft?</Body>
-      <Body tone="secondary">
-        {draft.mode === 'intake'
-          ? 'Everything entered for this trade-in is removed from this device. Photos already sent stay on the server unattached.'
-          : 'The correction is dropped; the assessment stays as it is.'}
-      </Body>
-      <View style={styles.commands}>
-        <Button
-          label="Discard"
-          variant="danger"
-          onPress={() => {
-            setConfirmDiscard(false);
-            setAttempted(new Set());
-            setServerErrors({});
-            setFormProblem(null);
-            onDiscard();
-          }}
-          testID="confirm-discard"
-        />
-        <Button label="Keep the draft" variant="quiet" onPress={() => setConfirmDiscard(false)} />
-      </View>
-    </View>
+    <DraftConfirm
+      title="Discard this draft?"
+      commands={
+        <>
+          <Button
+            label="Discard"
+            variant="danger"
+            onPress={() => {
+              setConfirmDiscard(false);
+              setAttempted(new Set());
+              setServerErrors({});
+              setFormProblem(null);
+              onDiscard();
+            }}
+            testID="confirm-discard"
+          />
+          <Button label="Keep the draft" variant="quiet" onPress={() => setConfirmDiscard(false)} />
+        </>
+      }
+    >
+      {draft.mode === 'intake'
+        ? 'Everything entered for this trade-in is removed from this device. Photos already sent stay on the server unattached.'
+        : 'The correction is dropped; the assessment stays as it is.'}
+    </DraftConfirm>
   ) : null;
 
   const last = here === steps.length - 1;
@@ -428,8 +430,6 @@ const styles = StyleSheet.create({
   panelScroll: { width: 360, flexGrow: 0, flexShrink: 0, backgroundColor: PALETTE.vellum, borderLeftWidth: 1, borderLeftColor: PALETTE.linen },
   panelScrollContent: { padding: SPACE.xl },
   draftLine: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: SPACE.sm, paddingTop: SPACE.md, borderTopWidth: 1, borderTopColor: PALETTE.linen },
-  confirm: { gap: SPACE.sm, padding: SPACE.lg, backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderLeftWidth: 4, borderLeftColor: PALETTE.rosewood, borderRadius: RADIUS.md },
-  commands: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.sm },
   footer: { backgroundColor: PALETTE.vellum, borderTopWidth: 1, borderTopColor: PALETTE.linen, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.sm },
   footerWide: { paddingHorizontal: SPACE.xl },
   footerInner: { flexDirection: 'row', gap: SPACE.sm, width: '100%', minHeight: LAYOUT.touchTarget + 4 },
