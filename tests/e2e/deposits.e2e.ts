@@ -2,9 +2,8 @@
 // comes back to a confirmed hold; floor staff see the piano held; the receipt is in the inbox.
 import type { BrowserContext } from 'playwright-core';
 
+import { gql, login, TABLET, waitForMail } from './support/api';
 import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
-
-const TABLET = { width: 1024, height: 768 };
 
 let staff: { context: BrowserContext; close: () => Promise<void> };
 let buyer: { context: BrowserContext; close: () => Promise<void> };
@@ -21,29 +20,6 @@ function payUrl(): string {
   const url = process.env.E2E_PAY_URL;
   if (!url) throw new Error('E2E_PAY_URL is not set: the address of the payment stand-in');
   return url;
-}
-
-async function login(email: string): Promise<string> {
-  const res = await fetch(`${baseUrl()}/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: 'feltwire-demo' }) });
-  return ((await res.json()) as { token: string }).token;
-}
-
-async function gql<T>(token: string, query: string): Promise<T> {
-  const res = await fetch(`${baseUrl()}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query }) });
-  const body = (await res.json()) as { data: T; errors?: { message: string }[] };
-  if (body.errors?.length) throw new Error(body.errors[0].message);
-  return body.data;
-}
-
-async function waitForMail(match: (m: { to: string[]; subject: string }) => boolean, timeoutMs = 20_000) {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    const messages = (await (await fetch(`${baseUrl()}/dev/inbox.json`)).json()) as { to: string[]; subject: string }[];
-    const found = messages.find(match);
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error('no matching e-mail reached the demo inbox');
 }
 
 it('holds a piano for a buyer who acknowledged the disclosure and paid the deposit', async () => {

@@ -2,9 +2,8 @@
 // acknowledges it on their phone, floor staff countersign, and the signed copy reaches the inbox.
 import type { BrowserContext } from 'playwright-core';
 
+import { gql, login, TABLET, waitForMail } from './support/api';
 import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
-
-const TABLET = { width: 1024, height: 768 };
 
 let staff: { context: BrowserContext; close: () => Promise<void> };
 let buyer: { context: BrowserContext; close: () => Promise<void> };
@@ -17,35 +16,6 @@ afterAll(async () => {
   await staff?.close();
   await buyer?.close();
 });
-
-async function login(email: string): Promise<string> {
-  const res = await fetch(`${baseUrl()}/auth/login`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password: 'feltwire-demo' }) });
-  return ((await res.json()) as { token: string }).token;
-}
-
-async function gql<T>(token: string, query: string): Promise<T> {
-  const res = await fetch(`${baseUrl()}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query }) });
-  const body = (await res.json()) as { data: T; errors?: { message: string }[] };
-  if (body.errors?.length) throw new Error(body.errors[0].message);
-  return body.data;
-}
-
-interface InboxMessage {
-  to: string[];
-  subject: string;
-  attachments: { filename: string; contentType: string; size: number }[];
-}
-
-async function waitForMail(match: (m: InboxMessage) => boolean, timeoutMs = 20_000): Promise<InboxMessage> {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    const messages = (await (await fetch(`${baseUrl()}/dev/inbox.json`)).json()) as InboxMessage[];
-    const found = messages.find(match);
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 500));
-  }
-  throw new Error('no matching e-mail reached the demo inbox');
-}
 
 it('walks a buyer through the disclosure on the tablet, takes their acknowledgement, and e-mails the countersigned copy', async () => {
   const floorToken = await login('floor@feltwire.test');

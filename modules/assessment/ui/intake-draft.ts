@@ -13,7 +13,7 @@ import {
   type TUNING_PINS,
 } from '@/modules/assessment/core/measurements';
 import type { PhotoArea } from '@/modules/photos/core/photo-rules';
-import type { CaseCondition, PianoKind } from '@/modules/pianos/core/piano';
+import type { CaseCondition, PianoFacts, PianoKind } from '@/modules/pianos/core/piano';
 
 import { labelForPath } from './measure-labels';
 
@@ -211,20 +211,8 @@ export function newIntakeDraft(now: Date): AssessmentDraft {
 }
 
 /** A piano as the stock record holds it: what an intake of a piano already in stock starts from. */
-export interface PianoOnRecord {
+export interface PianoOnRecord extends Omit<PianoFacts, 'stockNumber'> {
   id: number;
-  maker: string;
-  model: string | null;
-  serialNumber: string | null;
-  year: number | null;
-  yearIsEstimate: boolean;
-  yearFrom: number | null;
-  yearTo: number | null;
-  kind: PianoKind;
-  sizeCm: number | null;
-  finish: string | null;
-  caseCondition: CaseCondition | null;
-  caseNotes: string | null;
   createdAt: string;
 }
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { AREAS, AREA_LABELS, type Area, type Finding, type Grade, type Severity } from '@/modules/assessment/core/grade';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
-import { describeSize, describeYear, type CaseCondition, type PianoKind } from '@/modules/pianos/core/piano';
+import { describeSize, describeYear, type CaseCondition, type PianoFacts, type PianoKind } from '@/modules/pianos/core/piano';
 import { cents } from '@/modules/tone/core/pitch';
 
 // What a buyer reads: built only from public facts, so nothing internal can leak into it.
@@ -29,21 +29,7 @@ const CASE_WORDS: Record<CaseCondition, [Severity, string]> = {
 };
 
 export interface DisclosureInput {
-  piano: {
-    stockNumber: string;
-    maker: string;
-    model: string | null;
-    serialNumber: string | null;
-    year: number | null;
-    yearIsEstimate: boolean;
-    yearFrom: number | null;
-    yearTo: number | null;
-    kind: PianoKind;
-    sizeCm: number | null;
-    finish: string | null;
-    caseCondition: CaseCondition | null;
-    caseNotes: string | null;
-  };
+  piano: PianoFacts;
   askingPriceMinor: number | null;
   currency: string;
   assessment: { kind: 'intake' | 'post_workshop'; measurements: Measurements; grade: Grade; submittedAt: string };

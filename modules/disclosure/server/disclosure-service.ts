@@ -72,11 +72,10 @@ async function contentFor(pianoId: number): Promise<DisclosureContent> {
   if (!assessment) throw new AppError('CONFLICT', `${piano.stockNumber} has no assessment to disclose yet.`);
   const work = await WorkItem.query().where({ piano_id: pianoId, status: 'done' }).orderBy('id');
   const photos = await Photo.query().where('piano_id', pianoId).where((q) => q.whereNull('phase').orWhere('phase', 'after')).orderBy('id');
-  const p = piano;
   return buildDisclosure({
-    piano: { ...piano, caseCondition: piano.caseCondition, caseNotes: piano.caseNotes },
-    askingPriceMinor: p.askingPriceMinor,
-    currency: p.priceCurrency ?? 'USD',
+    piano,
+    askingPriceMinor: piano.askingPriceMinor,
+    currency: piano.priceCurrency ?? 'USD',
     assessment: { kind: assessment.kind, measurements: assessment.measurements, grade: assessment.grade, submittedAt: assessment.submittedAt },
     workDone: work.map((w) => ({ task: w.task, title: w.title })),
     photos: photos.map((ph) => ({ id: ph.id, area: ph.area, caption: ph.caption })),
@@ -85,7 +84,7 @@ async function contentFor(pianoId: number): Promise<DisclosureContent> {
 }
 
 function renderHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
-  return DISCLOSURE_HTML({ content, version, digest, publishedOn: publishedAt.slice(0, 10), price: content.askingPrice ? formatMoney(content.askingPrice.minor, content.askingPrice.currency as Currency) : null });
+  return DISCLOSURE_HTML({ content, version, digest, publishedOn: publishedAt.slice(0, 10), price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null) });
 }
 
 export interface Published {
@@ -195,7 +194,7 @@ async function pdfFor(ack: Acknowledgement, countersignedBy: string): Promise<{ 
   const pdf = await signedCopyPdf(c, {
     version: disclosure.version,
     digest: disclosure.digest,
-    price: c.askingPrice ? formatMoney(c.askingPrice.minor, c.askingPrice.currency as Currency) : null,
+    price: priceText(c.askingPrice?.minor ?? null, c.askingPrice?.currency ?? null),
     buyerName: ack.buyerName,
     buyerEmail: ack.buyerEmail,
     acknowledgedAt: ack.acknowledgedAt,
@@ -258,11 +257,10 @@ export async function floorTag(deps: DisclosureDeps, actor: Actor, pianoId: numb
   if (!piano) throw notFound(`piano ${pianoId}`);
   const link = await DisclosureLink.query().findById(pianoId);
   if (!link) throw new AppError('CONFLICT', 'Publish the disclosure first: the tag carries its link.');
-  const p = piano;
   return floorTagPdf({
     stockNumber: piano.stockNumber,
     title: [piano.maker, piano.model].filter(Boolean).join(' '),
-    price: priceText(p.askingPriceMinor, p.priceCurrency),
+    price: priceText(piano.askingPriceMinor, piano.priceCurrency),
     url: `${deps.publicUrl}/d/${link.token}`,
     dealerName: (await shopTexts()).dealerName,
   });

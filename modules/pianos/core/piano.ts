@@ -75,6 +75,23 @@ export const intakePianoInput = pianoInput
   });
 export type IntakePianoInput = z.infer<typeof intakePianoInput>;
 
+/** What the stock record says a piano is: shared by the screens, the intake and the disclosure. */
+export interface PianoFacts {
+  stockNumber: string;
+  maker: string;
+  model: string | null;
+  serialNumber: string | null;
+  year: number | null;
+  yearIsEstimate: boolean;
+  yearFrom: number | null;
+  yearTo: number | null;
+  kind: PianoKind;
+  sizeCm: number | null;
+  finish: string | null;
+  caseCondition: CaseCondition | null;
+  caseNotes: string | null;
+}
+
 export function describeYear(p: { year?: number | null; yearIsEstimate?: boolean; yearFrom?: number | null; yearTo?: number | null }): string {
   if (p.yearFrom != null && p.yearTo != null) return `about ${p.yearFrom}-${p.yearTo}`;
   if (p.year == null) return 'year unknown';

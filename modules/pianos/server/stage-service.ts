@@ -1,5 +1,6 @@
 import type { Knex } from 'knex';
 
+import { can, isRole } from '@/modules/accounts/core/roles';
 import { decideMove, STAGE_ACTIONS, type GuardFacts, type Mover, type StageAction } from '@/modules/pianos/core/stage-machine';
 import type { Stage } from '@/modules/pianos/core/piano';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
@@ -63,7 +64,7 @@ export interface StageHistoryEntry {
 }
 
 export async function stageHistory(role: string, pianoId: number): Promise<StageHistoryEntry[]> {
-  if (!['intake', 'technician', 'floor', 'manager'].includes(role)) throw notAllowed('read stage history');
+  if (!isRole(role) || !can(role, 'readPianos')) throw notAllowed('read stage history');
   const rows = (await StageMove.query()
     .leftJoin('users', 'users.id', 'stage_moves.by_user_id')
     .where('stage_moves.piano_id', pianoId)

@@ -1,26 +1,13 @@
 import { useQuery } from 'urql';
 
-import { STAGES, type CaseCondition, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { STAGES, type PianoFacts, type Stage } from '@/modules/pianos/core/piano';
 
 export const PAGE_SIZE = 50;
 
 export const PIANO_FIELDS = 'id stockNumber maker model serialNumber year yearIsEstimate yearFrom yearTo kind sizeCm finish caseCondition caseNotes stage stageChangedAt createdAt updatedAt';
 
-export interface PianoRecord {
+export interface PianoRecord extends PianoFacts {
   id: number;
-  stockNumber: string;
-  maker: string;
-  model: string | null;
-  serialNumber: string | null;
-  year: number | null;
-  yearIsEstimate: boolean;
-  yearFrom: number | null;
-  yearTo: number | null;
-  kind: PianoKind;
-  sizeCm: number | null;
-  finish: string | null;
-  caseCondition: CaseCondition | null;
-  caseNotes: string | null;
   stage: Stage;
   stageChangedAt: string;
   createdAt: string;

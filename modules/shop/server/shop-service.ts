@@ -12,6 +12,7 @@ import { cautionsFor } from '@/modules/shop/core/cautions';
 import { readClimate } from '@/modules/shop/core/climate';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
+import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
 import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
@@ -259,26 +260,7 @@ function minutesOf(entries: TimeEntry[], now: number): number {
   return entries.reduce((sum, e) => sum + (e.minutes ?? Math.round(((e.endedAt ? Date.parse(e.endedAt) : now) - Date.parse(e.startedAt)) / 60000)), 0);
 }
 
-export interface ItemView {
-  id: number;
-  pianoId: number;
-  task: string;
-  title: string;
-  status: string;
-  priority: number;
-  dueOn: string | null;
-  assignedToId: number | null;
-  assignedTo: string | null;
-  because: string[];
-  quantity: number;
-  estimatedHours: number;
-  estimatedCostMinor: number;
-  loggedMinutes: number;
-  partsMinor: number;
-  actualCostMinor: number;
-  timerRunningFor: number[];
-  cautions: { kind: string; text: string }[];
-}
+export type ItemView = WorkItemView;
 
 async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) => number): Promise<ItemView[]> {
   if (!items.length) return [];
@@ -286,7 +268,7 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
   const [entries, parts, users] = await Promise.all([
     TimeEntry.query().whereIn('work_item_id', ids),
     PartUse.query().whereIn('work_item_id', ids),
-    WorkItem.knex()('users').select('id', 'name'),
+    WorkItem.knex()('users').whereIn('id', [...new Set(items.map((i) => i.assignedToId).filter((x): x is number => x != null))]).select('id', 'name'),
   ]);
   const names = new Map((users as { id: number; name: string }[]).map((u) => [u.id, u.name]));
   const now = Date.now();
@@ -319,7 +301,7 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
 }
 
 /** A technician's queue: their items and the unassigned ones on pianos in the workshop, by priority and due date. */
-export async function workQueue(actor: Actor): Promise<(ItemView & { stockNumber: string; piano: string })[]> {
+export async function workQueue(actor: Actor): Promise<QueueItem[]> {
   requireRole(actor, atBench, 'see the work queue');
   const q = WorkItem.query()
     .join('pianos', 'pianos.id', 'work_items.piano_id')

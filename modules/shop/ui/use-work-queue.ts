@@ -1,34 +1,11 @@
 import { useCallback } from 'react';
 import { useQuery } from 'urql';
 
+import type { QueueItem } from '@/modules/shop/core/work-views';
+
 import { SHOP_CONTEXT } from './use-shop-mutation';
 
-/** One workshop item as the server describes it (the bench, the item page and the plan share it). */
-export interface WorkItemView {
-  id: number;
-  pianoId: number;
-  task: string;
-  title: string;
-  status: 'planned' | 'in_progress' | 'done';
-  priority: number;
-  dueOn: string | null;
-  assignedToId: number | null;
-  assignedTo: string | null;
-  because: string[];
-  quantity: number;
-  estimatedHours: number;
-  estimatedCostMinor: number;
-  loggedMinutes: number;
-  partsMinor: number;
-  actualCostMinor: number;
-  timerRunningFor: number[];
-  cautions: { kind: string; text: string }[];
-}
-
-export interface QueueItem extends WorkItemView {
-  stockNumber: string;
-  piano: string;
-}
+export type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
 
 export const WORK_QUEUE_QUERY = 'query WorkQueue { workQueue }';
 
