@@ -1,6 +1,4 @@
-import express, { type NextFunction, type Request, type Response } from 'express';
-import depthLimit from 'graphql-depth-limit';
-import { createHandler } from 'graphql-http/lib/use/express';
+import express, { type Request } from 'express';
 import { GraphQLError } from 'graphql';
 import type { Knex } from 'knex';
 import fs from 'node:fs';
@@ -13,11 +11,12 @@ import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDe
 import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
-import { toAppError, toGraphQLError } from './errors';
+import { toGraphQLError } from './errors';
 import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
-import { MAX_QUERY_DEPTH } from './graphql/limits';
+import { graphqlRoute } from './graphql/http';
 import { buildSchema } from './graphql/schema';
+import { errorHandler, jsonBody, routeNotFound } from './requests';
 import { uploadsRouter } from './uploads';
 import type { Mailer } from './mail';
 import { inboxRouter, type MailFake } from './mail-fake';
@@ -61,7 +60,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));
   });
-  app.post('/api/public/disclosures/:token/deposit', express.json({ limit: '4kb' }), async (req, res) => {
+  app.post('/api/public/disclosures/:token/deposit', jsonBody('4kb'), async (req, res) => {
     res.status(201).json(await startDeposit(deposits, req.params.token, req.body));
   });
   app.get('/api/public/disclosures/:token/deposit', async (req, res) => {
@@ -73,35 +72,34 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api', documentsRouter(pp, disclosure));
   if (deps.mailFake) app.use('/dev', inboxRouter(deps.mailFake));
 
-  const schema = buildSchema(DOMAINS);
-  app.use(express.json({ limit: '100kb' }));
   app.all(
     '/graphql',
     requireUser(pp),
-    createHandler<GraphContext>({
-      schema,
-      context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos, disclosure, deposits }),
-      validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
-      formatError: (err) => {
-        if (err instanceof GraphQLError && err.originalError && !(err.originalError instanceof GraphQLError)) {
-          const mapped = toGraphQLError(err.originalError);
-          return new GraphQLError(mapped.message, { path: err.path, nodes: err.nodes, extensions: mapped.extensions });
-        }
-        return err;
-      },
+    express.json({ limit: '100kb' }),
+    graphqlRoute<GraphContext>({
+      schema: buildSchema(DOMAINS),
+      context: (req: Request) => ({ user: req.user as User, photos: deps.photos, disclosure, deposits }),
+      formatError,
     }),
   );
+  app.use(API_PREFIXES, routeNotFound);
 
   if (deps.webDir) mountWeb(app, deps.webDir);
-
-  app.use((err: unknown, _req: Request, res: Response, next: NextFunction) => {
-    if (res.headersSent) return next(err);
-    const status = (err as { status?: number; type?: string }).type === 'entity.parse.failed' ? 400 : undefined;
-    const app = toAppError(err);
-    if (app.code === 'INTERNAL' && !status) console.error(err);
-    res.status(status ?? app.status).json({ error: status ? 'The request body is not valid JSON.' : app.message });
-  });
+  app.use(errorHandler);
   return app;
+}
+
+// Resolver failures are mapped in one place; a document refused before it ran is the caller's to mend.
+function formatError(err: Readonly<GraphQLError | Error>): GraphQLError {
+  // graphql-http's own refusals of the request (no query, variables not an object) are plain errors.
+  if (!(err instanceof GraphQLError)) return new GraphQLError(err.message, { extensions: { code: 'BAD_INPUT' } });
+  const original = err.originalError;
+  if (original && !(original instanceof GraphQLError) && err.path) {
+    const mapped = toGraphQLError(original);
+    return new GraphQLError(mapped.message, { path: err.path, nodes: err.nodes, extensions: mapped.extensions });
+  }
+  if (!err.path && !err.extensions?.code) return new GraphQLError(err.message, { nodes: err.nodes, extensions: { ...err.extensions, code: 'BAD_INPUT' } });
+  return err;
 }
 
 // The exported web app; every other GET that wants a page gets index.html, so deep links load.

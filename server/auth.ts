@@ -7,6 +7,8 @@ import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import { publicUser, type User } from '@/modules/accounts/server/user-model';
 import { authenticate, findActiveUser } from '@/modules/accounts/server/user-service';
 
+import { jsonBody } from './requests';
+
 const ISSUER = 'feltwire';
 const AUDIENCE = 'feltwire-staff';
 export const LOGIN_FAILED = 'E-mail or password is not right.';
@@ -37,7 +39,9 @@ export function configurePassport(opts: AuthOptions): passport.PassportStatic {
         audience: AUDIENCE,
         algorithms: ['HS256'],
       },
-      (payload: { sub?: string }, done: (err: unknown, user?: User | false) => void) => {
+      (payload: { sub?: string; exp?: unknown }, done: (err: unknown, user?: User | false) => void) => {
+        // A token without an expiry would sign its holder in for ever.
+        if (typeof payload.exp !== 'number') return done(null, false);
         const id = Number(payload.sub);
         if (!Number.isInteger(id)) return done(null, false);
         // The user is read again on every request: a deactivated account or a new role counts at once.
@@ -68,7 +72,7 @@ export function requireUser(pp: passport.PassportStatic, shape: 'graphql' | 'res
 
 export function authRouter(opts: AuthOptions): Router {
   const router = express.Router();
-  router.post('/login', express.json({ limit: '10kb' }), async (req, res) => {
+  router.post('/login', jsonBody('10kb'), async (req, res) => {
     const user = await authenticate(req.body);
     if (!user) {
       res.status(401).json({ error: LOGIN_FAILED });

@@ -1,6 +1,7 @@
 import { GraphQLError } from 'graphql';
 import {
   CheckViolationError,
+  DataError,
   ForeignKeyViolationError,
   NotFoundError as ObjectionNotFoundError,
   NotNullViolationError,
@@ -68,6 +69,8 @@ export function toAppError(err: unknown): AppError {
     const field = constraintField(err as never) ?? 'input';
     return badInput(field, 'is not an accepted value');
   }
+  // A value PostgreSQL cannot take (out of range, malformed, a NUL byte) that no schema caught first.
+  if (err instanceof DataError) return badInput('input', 'a value is out of range or not in an accepted form');
   return new AppError('INTERNAL', 'Something went wrong on the server.');
 }
 

@@ -5,6 +5,8 @@ import Handlebars from 'handlebars';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 
+import { idParam } from './params';
+
 // A local inbox for the demo and the tests: an SMTP server on loopback that keeps what it receives.
 export interface CaughtMail {
   id: string;
@@ -83,7 +85,7 @@ export function inboxRouter(fake: MailFake): Router {
     res.json(fake.messages.map(({ attachments, ...m }) => ({ ...m, attachments: attachments.map(({ content: _c, ...a }) => a) })));
   });
   router.get('/inbox/:id/attachments/:n', (req, res) => {
-    const attachment = fake.messages.find((m) => m.id === req.params.id)?.attachments[Number(req.params.n)];
+    const attachment = fake.messages.find((m) => m.id === req.params.id)?.attachments[idParam(req.params.n, 'n', 0)];
     if (!attachment) {
       res.status(404).json({ error: 'Not found.' });
       return;

@@ -15,12 +15,8 @@ import {
 import { publicDepositTerms } from '@/modules/deposits/server/deposit-service';
 
 import { requireUser } from './auth';
-
-function version(raw: unknown): number | undefined {
-  if (raw == null) return undefined;
-  const n = Number(raw);
-  return Number.isInteger(n) && n > 0 ? n : -1;
-}
+import { idParam, optionalIntQuery } from './params';
+import { jsonBody } from './requests';
 
 function sendPdf(res: Response, pdf: Buffer, filename: string, inline = false): void {
   res.type('application/pdf').setHeader('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${filename}"`);
@@ -37,14 +33,14 @@ export function publicRouter(deps: DisclosureDeps): Router {
     next();
   });
   router.get('/disclosures/:token', async (req, res) => {
-    const shown = await publicDisclosure(deps, req.params.token, version(req.query.version));
+    const shown = await publicDisclosure(deps, req.params.token, optionalIntQuery(req.query.version, 'version'));
     const price = shown.content.askingPrice;
     res.json({ ...shown, depositTerms: price ? await publicDepositTerms(price) : null });
   });
   router.get('/disclosures/:token/html', async (req, res) => {
-    res.type('html').send(await publicDisclosureHtml(req.params.token, version(req.query.version)));
+    res.type('html').send(await publicDisclosureHtml(req.params.token, optionalIntQuery(req.query.version, 'version')));
   });
-  router.post('/disclosures/:token/acknowledge', express.json({ limit: '4kb' }), async (req, res) => {
+  router.post('/disclosures/:token/acknowledge', jsonBody('4kb'), async (req, res) => {
     res.status(201).json(await acknowledge(req.params.token, req.body));
   });
   router.get('/receipts/:token.pdf', async (req, res) => {
@@ -57,13 +53,14 @@ export function publicRouter(deps: DisclosureDeps): Router {
 /** Documents for signed-in staff: floor tags and signed copies. */
 export function documentsRouter(pp: passport.PassportStatic, deps: DisclosureDeps): Router {
   const router = express.Router();
-  router.use(requireUser(pp, 'rest'));
-  router.get('/pianos/:id/floor-tag.pdf', async (req, res) => {
-    const pdf = await floorTag(deps, req.user as User, Number(req.params.id));
-    sendPdf(res, pdf, `floor-tag-${req.params.id}.pdf`, true);
+  const staff = requireUser(pp, 'rest');
+  router.get('/pianos/:id/floor-tag.pdf', staff, async (req, res) => {
+    const id = idParam(req.params.id);
+    const pdf = await floorTag(deps, req.user as User, id);
+    sendPdf(res, pdf, `floor-tag-${id}.pdf`, true);
   });
-  router.get('/acknowledgements/:id/signed.pdf', async (req, res) => {
-    const { pdf, filename } = await signedPdfForStaff(deps, req.user as User, Number(req.params.id));
+  router.get('/acknowledgements/:id/signed.pdf', staff, async (req, res) => {
+    const { pdf, filename } = await signedPdfForStaff(deps, req.user as User, idParam(req.params.id));
     sendPdf(res, pdf, filename);
   });
   return router;

@@ -9,6 +9,7 @@ import { savePhoto } from '@/modules/photos/server/photo-service';
 
 import { requireUser } from './auth';
 import { AppError } from './errors';
+import { requireContentType } from './requests';
 
 // multer holds one photo in memory (at most 10 MB) so its bytes can be checked before anything is stored.
 const upload = multer({
@@ -23,13 +24,21 @@ function parseUpload(req: Request, res: Response, next: NextFunction): void {
       if (err.code === 'LIMIT_FILE_SIZE') return next(new AppError('TOO_LARGE', `photo: must be at most ${MAX_PHOTO_BYTES / 1024 / 1024} MB`, 'photo'));
       return next(new AppError('BAD_INPUT', `${err.field ?? 'upload'}: ${err.message}`, err.field));
     }
-    next(err);
+    next(malformedUpload(err));
   });
+}
+
+// The multipart parser's own failures all come from the bytes the client sent.
+function malformedUpload(err: unknown): AppError {
+  const message = err instanceof Error ? err.message : String(err);
+  if (/boundary not found/i.test(message)) return new AppError('BAD_INPUT', 'upload: the multipart Content-Type names no boundary', 'upload');
+  if (/unexpected end of form/i.test(message)) return new AppError('BAD_INPUT', 'upload: the multipart body ends before its end (truncated)', 'upload');
+  return new AppError('BAD_INPUT', `upload: the multipart body is malformed (${message})`, 'upload');
 }
 
 export function uploadsRouter(pp: passport.PassportStatic, store: PhotoStore): Router {
   const router = express.Router();
-  router.post('/photos', requireUser(pp, 'rest'), parseUpload, async (req, res) => {
+  router.post('/photos', requireUser(pp, 'rest'), requireContentType('multipart/form-data'), parseUpload, async (req, res) => {
     const photo = await savePhoto(store, req.user as User, req.body ?? {}, req.file);
     res.status(201).json(photo);
   });

@@ -1,4 +1,4 @@
-import { GraphQLScalarType, Kind, type ValueNode } from 'graphql';
+import { GraphQLError, GraphQLScalarType, Kind, type ValueNode } from 'graphql';
 
 function literal(node: ValueNode): unknown {
   switch (node.kind) {
@@ -15,7 +15,7 @@ function literal(node: ValueNode): unknown {
     case Kind.NULL:
       return null;
     default:
-      throw new TypeError('variables are not accepted inside a JSON literal');
+      throw new GraphQLError('A JSON value written in the query cannot hold a variable: pass the whole value as one variable instead.', { nodes: node, extensions: { code: 'BAD_INPUT' } });
   }
 }
 

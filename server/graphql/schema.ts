@@ -1,9 +1,10 @@
 import './objection-adapter';
 
-import { GraphQLInt, GraphQLObjectType, GraphQLSchema, type GraphQLFieldResolver } from 'graphql';
+import { getNamedType, GraphQLInt, GraphQLObjectType, GraphQLSchema, GraphQLString, type GraphQLFieldResolver } from 'graphql';
 import type { Model, ModelClass, QueryBuilder } from 'objection';
 import { builder as graphQlBuilder, type SchemaBuilder } from 'objection-graphql';
 
+import { hasControlCharacters, NO_CONTROL_CHARACTERS } from '@/modules/input/core/text';
 import { badInput } from '@/server/errors';
 
 import type { GraphContext } from './context';
@@ -12,6 +13,7 @@ import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from './limits';
 
 interface PageArgs {
   limit?: number;
+  offset?: number;
   range?: number[];
 }
 
@@ -19,6 +21,7 @@ function checkPage(args: PageArgs): void {
   if (args.limit != null && !(args.limit >= 1 && args.limit <= MAX_PAGE_SIZE)) {
     throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
   }
+  if (args.offset != null && args.offset < 0) throw badInput('offset', 'must be 0 or more');
   if (args.range != null) {
     const [from, to] = args.range;
     if (args.range.length !== 2 || from < 0 || to < from || to - from + 1 > MAX_PAGE_SIZE) {
@@ -42,6 +45,22 @@ function readMiddleware(policies: Map<ModelClass<Model>, ReadModel>) {
       };
       return resolver({ onQuery }, args, ctx, info);
     };
+}
+
+// Text arguments outside the domains' schemas (filters, reasons, notes) are refused with a control character in them.
+function guardTextArguments(type: GraphQLObjectType | null | undefined): void {
+  for (const field of Object.values(type?.getFields() ?? {})) {
+    const textArgs = field.args.filter((a) => getNamedType(a.type) === GraphQLString).map((a) => a.name);
+    const resolve = field.resolve;
+    if (!textArgs.length || !resolve) continue;
+    field.resolve = (root, args: Record<string, unknown>, ctx, info) => {
+      for (const name of textArgs) {
+        const values = ([] as unknown[]).concat(args[name] ?? []);
+        if (values.some((v) => typeof v === 'string' && hasControlCharacters(v, true))) throw badInput(name, NO_CONTROL_CHARACTERS);
+      }
+      return resolve(root, args, ctx, info);
+    };
+  }
 }
 
 export function buildSchema(domains: GraphDomain[]): GraphQLSchema {
@@ -72,9 +91,12 @@ export function buildSchema(domains: GraphDomain[]): GraphQLSchema {
 
   const queryConfig = generated.getQueryType()!.toConfig();
   const extraQueries: Fields = Object.assign({}, ...domains.map((d) => d.queries?.(typeOf) ?? {}));
-  return new GraphQLSchema({
+  const schema = new GraphQLSchema({
     ...generated.toConfig(),
     query: new GraphQLObjectType({ ...queryConfig, fields: { ...queryConfig.fields, ...(extraQueries as typeof queryConfig.fields) } }),
     types: [],
   });
+  guardTextArguments(schema.getQueryType());
+  guardTextArguments(schema.getMutationType());
+  return schema;
 }

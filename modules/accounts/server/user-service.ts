@@ -2,6 +2,7 @@ import bcrypt from 'bcrypt';
 
 import { can, type Role } from '@/modules/accounts/core/roles';
 import { loginInput, newUserInput, roleChangeInput } from '@/modules/accounts/core/user-input';
+import { NO_CONTROL_CHARACTERS } from '@/modules/input/core/text';
 import { AppError, notAllowed, notFound } from '@/server/errors';
 
 import { User } from './user-model';
@@ -19,7 +20,11 @@ export function hashPassword(password: string): Promise<string> {
 /** The user for this e-mail and password, or null: unknown e-mail, wrong password and deactivated look alike. */
 export async function authenticate(raw: unknown): Promise<User | null> {
   const parsed = loginInput.safeParse(raw);
-  if (!parsed.success) return null;
+  if (!parsed.success) {
+    // A control character is told as such; a missing or mistyped field looks like any wrong sign-in.
+    if (parsed.error.issues.some((i) => i.message === NO_CONTROL_CHARACTERS)) throw parsed.error;
+    return null;
+  }
   const email = parsed.data.email.trim().toLowerCase();
   const user = await User.query().findOne({ email });
   const ok = await bcrypt.compare(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { lineText, multiLineText } from '@/modules/input/core/text';
+
 import { intakePianoInput } from '@/modules/pianos/core/piano';
 
 import { measurementsInput } from './measurements';
@@ -18,10 +20,10 @@ export const INSPECTION_PLACE_LABELS: Record<(typeof INSPECTION_PLACES)[number],
 };
 
 export const sellerInput = z.object({
-  name: z.string().trim().min(1, 'is required').max(120),
+  name: lineText().trim().min(1, 'is required').max(120),
   phone: z.string().trim().max(40).regex(/^[+()0-9 .-]*$/, 'may hold only digits, spaces and + ( ) . -').nullish(),
-  email: z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'must be an e-mail address' })).nullish().or(z.literal('').transform(() => null)),
-  address: z.string().trim().max(300).nullish(),
+  email: lineText().trim().toLowerCase().max(254).pipe(z.email({ message: 'must be an e-mail address' })).nullish().or(z.literal('').transform(() => null)),
+  address: multiLineText().trim().max(300).nullish(),
 });
 
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date, YYYY-MM-DD').refine((d) => !Number.isNaN(Date.parse(`${d}T00:00:00Z`)), 'must be a real date');
@@ -34,7 +36,7 @@ export const intakeInput = z
     receivedOn: isoDate,
     inspectedAt: z.enum(INSPECTION_PLACES, { message: `must be one of ${INSPECTION_PLACES.join(', ')}` }),
     piano: intakePianoInput,
-    notes: z.string().trim().max(2000).nullish(),
+    notes: multiLineText().trim().max(2000).nullish(),
     measurements: measurementsInput,
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
     /** A piano already in stock in stage received (logged before its inspection): assess it instead of adding one. */
@@ -47,7 +49,7 @@ export const correctionInput = z
   .object({
     pianoId: z.number().int().positive(),
     measurements: measurementsInput,
-    changeNote: z.string().trim().min(1, 'is required: say why the assessment changes').max(500),
+    changeNote: multiLineText().trim().min(1, 'is required: say why the assessment changes').max(500),
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
     /** The version the correction was made from: a newer one saved meanwhile is not overwritten unseen. */
     baseVersion: z.number().int().positive().optional(),
@@ -59,6 +61,6 @@ export const remeasureInput = z
   .object({
     pianoId: z.number().int().positive(),
     measurements: measurementsInput,
-    changeNote: z.string().trim().max(500).nullish(),
+    changeNote: multiLineText().trim().max(500).nullish(),
   })
   .strict();

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { multiLineText } from '@/modules/input/core/text';
+
 // What an inspection measures. Metric units; every field optional, ranges refused with the field named.
 export const KEYTOP_DAMAGE = ['chipped', 'stained', 'yellowed', 'missing'] as const;
 export const FELT_STATES = ['soft', 'firm', 'hard', 'chemically_hardened'] as const;
@@ -29,7 +31,7 @@ export const crackInput = z.object({
   crossesRib: z.boolean().default(false),
   buzzes: z.boolean().default(false),
   hurtsTuning: z.boolean().default(false),
-  note: z.string().trim().max(200).nullish(),
+  note: multiLineText().trim().max(200).nullish(),
 });
 export type Crack = z.infer<typeof crackInput>;
 

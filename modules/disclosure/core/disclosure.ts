@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { lineText, multiLineText } from '@/modules/input/core/text';
+
 import { AREAS, AREA_LABELS, type Area, type Finding, type Grade, type Severity } from '@/modules/assessment/core/grade';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
@@ -155,8 +157,8 @@ export const DEFAULT_WARRANTY =
 /** A buyer's acknowledgement of the version they read. */
 export const acknowledgeInput = z
   .object({
-    fullName: z.string().trim().min(2, 'type your full name').max(120),
-    email: z.string().trim().toLowerCase().max(254).pipe(z.email({ message: 'must be an e-mail address' })),
+    fullName: lineText().trim().min(2, 'type your full name').max(120),
+    email: lineText().trim().toLowerCase().max(254).pipe(z.email({ message: 'must be an e-mail address' })),
     read: z.literal(true, { message: 'tick the box to say you have read the disclosure' }),
     digest: z.string().regex(/^[0-9a-f]{64}$/, 'must be the digest shown on the disclosure'),
   })
@@ -172,7 +174,7 @@ export const priceInput = z
 
 export const textsInput = z
   .object({
-    dealerName: z.string().trim().min(1).max(120),
-    warranty: z.string().trim().min(1).max(4000),
+    dealerName: lineText().trim().min(1).max(120),
+    warranty: multiLineText().trim().min(1).max(4000),
   })
   .strict();

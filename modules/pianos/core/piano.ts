@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { lineText, multiLineText } from '@/modules/input/core/text';
+
 export const PIANO_KINDS = ['upright', 'grand'] as const;
 export type PianoKind = (typeof PIANO_KINDS)[number];
 
@@ -36,15 +38,15 @@ export function stockNumber(sequence: number): string {
 }
 
 export const pianoInput = z.object({
-  maker: z.string().trim().min(1, 'is required').max(80),
-  model: z.string().trim().max(80).nullish(),
-  serialNumber: z.string().trim().max(40).nullish(),
+  maker: lineText().trim().min(1, 'is required').max(80),
+  model: lineText().trim().max(80).nullish(),
+  serialNumber: lineText().trim().max(40).nullish(),
   year: z.number().int().min(1700, 'must be 1700 or later').max(2100, 'must be 2100 or earlier').nullish(),
   yearIsEstimate: z.boolean().default(false),
   kind: z.enum(PIANO_KINDS, { message: 'must be upright or grand' }),
   // Height of an upright or length of a grand; the smallest spinets are about 90 cm, concert grands about 310 cm.
   sizeCm: z.number().int().min(50, 'must be at least 50 cm').max(400, 'must be at most 400 cm').nullish(),
-  finish: z.string().trim().max(80).nullish(),
+  finish: lineText().trim().max(80).nullish(),
 });
 export type PianoInput = z.infer<typeof pianoInput>;
 
@@ -59,7 +61,7 @@ export const intakePianoInput = pianoInput
     yearFrom: yearField.nullish(),
     yearTo: yearField.nullish(),
     caseCondition: z.enum(CASE_CONDITIONS, { message: `must be one of ${CASE_CONDITIONS.join(', ')}` }).nullish(),
-    caseNotes: z.string().trim().max(500).nullish(),
+    caseNotes: multiLineText().trim().max(500).nullish(),
   })
   .superRefine((p, ctx) => {
     if (p.yearFrom != null && p.yearTo != null && p.yearFrom > p.yearTo) {

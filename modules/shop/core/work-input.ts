@@ -1,5 +1,7 @@
 import { z } from 'zod';
 
+import { lineText, multiLineText } from '@/modules/input/core/text';
+
 import { WORK_TASKS } from '@/modules/assessment/core/work-tasks';
 
 // What managers and technicians send about workshop work.
@@ -13,7 +15,7 @@ const minor = z.number().int('must be whole minor units').min(0, 'cannot be nega
 export const workItemInput = z
   .object({
     task: z.enum([...WORK_TASKS, 'custom'] as [string, ...string[]], { message: 'must be a workshop task or custom' }),
-    title: z.string().trim().min(1, 'is required').max(120).optional(),
+    title: lineText().trim().min(1, 'is required').max(120).optional(),
     estimatedHours: hours,
     estimatedPartsMinor: minor.default(0),
     quantity: z.number().int().min(1).max(250).default(1),
@@ -29,14 +31,14 @@ export const timeEntryInput = z
   .object({
     workItemId: z.number().int().positive(),
     minutes: z.number().int('must be whole minutes').min(1, 'must be at least 1 minute').max(1440, 'must be at most 24 hours'),
-    note: z.string().trim().max(500).nullish(),
+    note: multiLineText().trim().max(500).nullish(),
   })
   .strict();
 
 export const partUseInput = z
   .object({
     workItemId: z.number().int().positive(),
-    description: z.string().trim().min(1, 'is required').max(200),
+    description: lineText().trim().min(1, 'is required').max(200),
     quantity: z.number().int().min(1).max(1000).default(1),
     costMinor: minor,
   })

@@ -1,0 +1,135 @@
+import { maxAliasesRule } from '@escape.tech/graphql-armor-max-aliases';
+import { maxDepthRule } from '@escape.tech/graphql-armor-max-depth';
+import { maxDirectivesRule } from '@escape.tech/graphql-armor-max-directives';
+import type { NextFunction, Request, Response } from 'express';
+import {
+  getNamedType,
+  getNullableType,
+  GraphQLError,
+  isCompositeType,
+  isListType,
+  parse,
+  specifiedRules,
+  validate,
+  type DocumentNode,
+  type GraphQLSchema,
+  type ValidationContext,
+  type ValidationRule,
+} from 'graphql';
+import { createHandler, type OperationContext } from 'graphql-http';
+import { createComplexityRule, type ComplexityEstimator } from 'graphql-query-complexity';
+
+import { DEFAULT_PAGE_SIZE, MAX_QUERY_DEPTH, NESTED_LIST_ROWS, QUERY_LIMITS, ROOT_FIELD_COST } from './limits';
+
+const limitError = (message: string) => new GraphQLError(message, { extensions: { code: 'BAD_INPUT' } });
+// graphql-armor words its refusals as syntax errors; they are limits, said as such.
+const report = (ctx: ValidationContext | null, err: GraphQLError) => ctx?.reportError(limitError(err.message.replace(/^Syntax Error: /, '')));
+const armor = { propagateOnRejection: false, onReject: [report] };
+const depthRefusal = (message: string) => ({ propagateOnRejection: false, onReject: [(ctx: ValidationContext | null) => ctx?.reportError(limitError(message))] });
+
+function rowsOf(args: Record<string, unknown>, root: boolean): number {
+  if (typeof args.limit === 'number') return Math.max(1, args.limit);
+  const range = args.range;
+  if (Array.isArray(range) && range.length === 2 && typeof range[0] === 'number' && typeof range[1] === 'number') return Math.max(1, range[1] - range[0] + 1);
+  return root ? DEFAULT_PAGE_SIZE : NESTED_LIST_ROWS;
+}
+
+// A field costs 1 (a top-level one 10); a list of records costs its rows times what each row asks for.
+const estimateCost: ComplexityEstimator = ({ type, field, args, childComplexity }) => {
+  const root = type.name === 'Query' || type.name === 'Mutation';
+  const base = root ? ROOT_FIELD_COST : 1;
+  const introspection = type.name.startsWith('__') || field.name.startsWith('__');
+  if (!introspection && isListType(getNullableType(field.type)) && isCompositeType(getNamedType(field.type))) return base + rowsOf(args, root) * Math.max(1, childComplexity);
+  return base + childComplexity;
+};
+
+function limitRules(variables: Record<string, unknown> | undefined): ValidationRule[] {
+  return [
+    maxAliasesRule({ n: QUERY_LIMITS.aliases, ...armor }),
+    maxDirectivesRule({ n: QUERY_LIMITS.directives, ...armor }),
+    // graphql-armor counts the top field as level 1; MAX_QUERY_DEPTH counts the levels below it.
+    maxDepthRule({ n: MAX_QUERY_DEPTH + 1, ignoreIntrospection: true, flattenFragments: true, ...depthRefusal(`The query nests deeper than ${MAX_QUERY_DEPTH} levels below its top field.`) }),
+    maxDepthRule({ n: QUERY_LIMITS.introspectionDepth + 1, ignoreIntrospection: false, flattenFragments: true, ...depthRefusal(`The query nests deeper than ${QUERY_LIMITS.introspectionDepth} levels below its top field (introspection included).`) }),
+    createComplexityRule({
+      maximumComplexity: QUERY_LIMITS.cost,
+      variables,
+      estimators: [estimateCost],
+      createError: (max, actual) => limitError(`The query asks for too much at once: its estimated cost is ${actual}, at most ${max} is served. Ask for fewer rows or fields.`),
+    }),
+  ];
+}
+
+/**
+ * graphql-js's own rules first, fragment cycles among them: the limit rules walk fragments and would
+ * recurse forever through a cycle, so they run only on a document that is otherwise valid.
+ */
+function validateInOrder(schema: GraphQLSchema, document: DocumentNode, rules: readonly ValidationRule[] = []): readonly GraphQLError[] {
+  const invalid = validate(schema, document, specifiedRules);
+  if (invalid.length) return invalid;
+  try {
+    return validate(schema, document, rules.filter((r) => !specifiedRules.includes(r)));
+  } catch (err) {
+    // graphql-query-complexity throws past its node budget.
+    if (err instanceof GraphQLError) return [limitError(err.message)];
+    throw err;
+  }
+}
+
+/** Every check a document meets before it runs: the one used by the route, for scripts and tests too. */
+export function validateDocument(schema: GraphQLSchema, document: DocumentNode, variables?: Record<string, unknown>): readonly GraphQLError[] {
+  return validateInOrder(schema, document, limitRules(variables));
+}
+
+export function parseDocument(source: string): DocumentNode {
+  try {
+    return parse(source, { maxTokens: QUERY_LIMITS.tokens });
+  } catch (err) {
+    if (err instanceof GraphQLError && /contains more tha[nt] \d+ tokens/.test(err.message)) {
+      throw limitError(`The query is too long: at most ${QUERY_LIMITS.tokens} tokens (names, values, punctuation) are read.`);
+    }
+    throw err;
+  }
+}
+
+interface GraphRouteOptions<Context extends OperationContext> {
+  schema: GraphQLSchema;
+  context: (req: Request) => Context;
+  formatError: (err: Readonly<GraphQLError | Error>) => GraphQLError;
+}
+
+const refusal = (message: string) => JSON.stringify({ errors: [{ message, extensions: { code: 'BAD_INPUT' } }] });
+const NO_BODY: Record<number, string> = {
+  405: 'GraphQL takes GET for queries and POST for everything.',
+  406: 'GraphQL answers application/json or application/graphql-response+json: accept one of them.',
+  415: 'Send GraphQL as JSON (Content-Type: application/json).',
+};
+
+/** POST /graphql (and GET for queries) through graphql-http, with every refusal a 4xx and a message. */
+export function graphqlRoute<Context extends OperationContext>(opts: GraphRouteOptions<Context>) {
+  const handle = createHandler<Request, undefined, Context>({
+    schema: opts.schema,
+    context: (req) => opts.context(req.raw),
+    parse: (source) => parseDocument(source as string),
+    // The rules are chosen here, with the variables the cost depends on; validate below orders them.
+    validationRules: (_req, args) => limitRules(args.variableValues as Record<string, unknown> | undefined),
+    validate: validateInOrder,
+    formatError: opts.formatError,
+  });
+  return async (req: Request, res: Response, next: NextFunction) => {
+    if (req.method === 'POST' && !req.is('application/json')) {
+      res.status(415).type('json').send(refusal(NO_BODY[415]));
+      return;
+    }
+    try {
+      const [body, init] = await handle({ url: req.url, method: req.method, headers: req.headers, body: () => (req.body as Record<string, unknown>) ?? null, raw: req, context: undefined });
+      let status = init.status;
+      let text = body ?? '';
+      if (!text && status >= 400) text = refusal(NO_BODY[status] ?? init.statusText ?? 'The GraphQL request was refused.');
+      // A document refused before it ran (syntax, validation, limits, variables) answers errors and no data.
+      if (status === 200 && text.startsWith('{"errors"') && !('data' in JSON.parse(text))) status = 400;
+      res.writeHead(status, { ...init.headers, 'content-type': init.headers?.['content-type'] ?? 'application/json; charset=utf-8' }).end(text);
+    } catch (err) {
+      next(err);
+    }
+  };
+}

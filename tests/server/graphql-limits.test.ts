@@ -1,0 +1,88 @@
+import { getIntrospectionQuery } from 'graphql';
+
+import { pianoListQuery } from '@/modules/pianos/ui/use-pianos';
+import { MAX_QUERY_DEPTH, QUERY_LIMITS } from '@/server/graphql/limits';
+
+import { startTestApi, type TestApi } from '../support/api';
+
+let api: TestApi;
+let token: string;
+beforeAll(async () => {
+  api = await startTestApi();
+  token = await api.tokenFor('manager');
+});
+afterAll(() => api.close());
+
+async function refused(query: string, message: RegExp, variables?: Record<string, unknown>) {
+  const res = await api.gql(token, query, variables);
+  expect(res.status).toBe(400);
+  expect(res.body.data).toBeUndefined();
+  expect(res.body.errors[0].extensions.code).toBe('BAD_INPUT');
+  expect(res.body.errors[0].message).toMatch(message);
+}
+
+const aliased = (n: number, field = 'pianos(limit:200){id}') => `{${Array.from({ length: n }, (_, i) => `a${i}:${field}`).join(' ')}}`;
+
+describe('what one GraphQL document may ask for', () => {
+  it('refuses the 97 KB document of 3,500 aliased pianos(limit:200) before it runs', async () => {
+    const doc = aliased(3500);
+    expect(JSON.stringify({ query: doc }).length).toBeLessThan(100 * 1024);
+    await refused(doc, new RegExp(`at most ${QUERY_LIMITS.tokens} tokens`));
+  });
+
+  it('refuses more aliases than the limit in a short document', async () => {
+    await refused(aliased(QUERY_LIMITS.aliases + 1, 'me{id}'), new RegExp(`Aliases limit of ${QUERY_LIMITS.aliases} exceeded, found ${QUERY_LIMITS.aliases + 1}`));
+    const ok = await api.gql(token, aliased(QUERY_LIMITS.aliases, 'me{id}'));
+    expect(ok.status).toBe(200);
+    expect(ok.body.data.a0.id).toEqual(expect.any(Number));
+  });
+
+  it('refuses a document whose lists multiply past the cost limit', async () => {
+    // 200 users, each with up to 200 pianos: 40,000 rows asked for in 12 tokens' worth of selection.
+    await refused('{ users(limit: 200) { id pianosLogged(limit: 200) { id stockNumber } } }', /estimated cost is \d+, at most 10000/);
+  });
+
+  it('counts the rows a variable asks for', async () => {
+    const query = 'query($n: Int) { users(limit: 200) { id pianosLogged(limit: $n) { id } } }';
+    await refused(query, /estimated cost/, { n: 200 });
+    const ok = await api.gql(token, query, { n: 2 });
+    expect(ok.status).toBe(200);
+  });
+
+  it('refuses a fragment cycle with a message, before any limit walks it', async () => {
+    await refused('{ me { ...A } } fragment A on Users { id ...B } fragment B on Users { name ...A }', /Cannot spread fragment "A" within itself/);
+  });
+
+  it('refuses fragments that spread each other into an exponential document', async () => {
+    const levels = 16;
+    const fragments = Array.from({ length: levels }, (_, i) => `fragment F${i} on Users { ${i + 1 < levels ? `...F${i + 1} ...F${i + 1}` : 'id'} }`).join(' ');
+    await refused(`{ me { ...F0 } } ${fragments}`, /maximum allowed number of nodes|estimated cost/);
+  });
+
+  it('refuses too many directives', async () => {
+    const fields = Array.from({ length: QUERY_LIMITS.directives + 1 }, () => 'id @include(if: true)').join(' ');
+    await refused(`{ me { ${fields} } }`, new RegExp(`Directives limit of ${QUERY_LIMITS.directives} exceeded`));
+  });
+
+  it('answers the standard introspection query, and refuses one nested deeper than its bound', async () => {
+    const standard = await api.gql(token, getIntrospectionQuery());
+    expect(standard.status).toBe(200);
+    expect(standard.body.data.__schema.queryType.name).toBe('Query');
+    let deep = 'name';
+    for (let i = 0; i < 40; i++) deep = `ofType { ${deep} }`;
+    await refused(`{ __schema { types { fields { type { ${deep} } } } } }`, new RegExp(`deeper than ${QUERY_LIMITS.introspectionDepth} levels`));
+    await refused(`{ __type(name: "Pianos") { fields { type { ofType { ofType { ofType { ofType { ofType { name } } } } } } } } }`, new RegExp(`deeper than ${MAX_QUERY_DEPTH} levels`));
+  });
+
+  it('refuses variables of the wrong type before running, with 400', async () => {
+    await refused('query($id: Int) { piano(idEq: $id) { id } }', /\$id/, { id: 'abc' });
+  });
+
+  it('answers the largest list the web app asks for, as urql sends it', async () => {
+    const query = pianoListQuery(null, 'newest').replace(/\{ (id stockNumber[^}]*)\}/, '{ $1 __typename }');
+    const res = await api.gql(token, query, { limit: 200, offset: 0 });
+    expect(res.status).toBe(200);
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.pianos.length).toBeGreaterThan(10);
+  });
+});
