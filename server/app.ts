@@ -11,11 +11,13 @@ import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDe
 import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
+import { DEFAULT_LIMITS, type Limits } from './config';
 import { toGraphQLError } from './errors';
 import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
 import { graphqlRoute } from './graphql/http';
 import { buildSchema } from './graphql/schema';
+import { publicWriteLimit } from './rate-limits';
 import { errorHandler, jsonBody, routeNotFound } from './requests';
 import { uploadsRouter } from './uploads';
 import type { Mailer } from './mail';
@@ -33,6 +35,8 @@ export interface AppDeps {
   /** The local inbox, when the mail fake runs (development and tests). */
   mailFake?: MailFake;
   webDir?: string;
+  /** Rate limits; the defaults when not given. */
+  limits?: Limits;
 }
 
 const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api', '/dev'];
@@ -53,21 +57,23 @@ export function createApp(deps: AppDeps): express.Express {
     }
   });
 
-  app.use('/auth', authRouter(deps.auth));
+  const limits = deps.limits ?? DEFAULT_LIMITS;
+  const publicWrites = publicWriteLimit(limits.publicWrites);
+  app.use('/auth', authRouter(deps.auth, limits.signIn));
   const disclosure: DisclosureDeps = { photos: deps.photos, mailer: deps.mailer, publicUrl: deps.publicUrl };
   const deposits: DepositDeps = { ...deps.payments, mailer: deps.mailer, publicUrl: deps.publicUrl };
   // The signature is checked over the exact bytes received, so this route reads the raw body.
   app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));
   });
-  app.post('/api/public/disclosures/:token/deposit', jsonBody('4kb'), async (req, res) => {
+  app.post('/api/public/disclosures/:token/deposit', publicWrites, jsonBody('4kb'), async (req, res) => {
     res.status(201).json(await startDeposit(deposits, req.params.token, req.body));
   });
   app.get('/api/public/disclosures/:token/deposit', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
     res.json(await publicDepositStatus(req.params.token, String(req.query.session ?? '')));
   });
-  app.use('/api/public', publicRouter(disclosure));
+  app.use('/api/public', publicRouter(disclosure, publicWrites));
   app.use('/api', uploadsRouter(pp, deps.photos));
   app.use('/api', documentsRouter(pp, disclosure));
   if (deps.mailFake) app.use('/dev', inboxRouter(deps.mailFake));

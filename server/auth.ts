@@ -7,6 +7,8 @@ import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 import { publicUser, type User } from '@/modules/accounts/server/user-model';
 import { authenticate, findActiveUser } from '@/modules/accounts/server/user-service';
 
+import type { Limits } from './config';
+import { signInLimits } from './rate-limits';
 import { jsonBody } from './requests';
 
 const ISSUER = 'feltwire';
@@ -70,9 +72,10 @@ export function requireUser(pp: passport.PassportStatic, shape: 'graphql' | 'res
   };
 }
 
-export function authRouter(opts: AuthOptions): Router {
+export function authRouter(opts: AuthOptions, limits: Limits['signIn']): Router {
   const router = express.Router();
-  router.post('/login', jsonBody('10kb'), async (req, res) => {
+  const limit = signInLimits(limits);
+  router.post('/login', limit.perAddress, jsonBody('10kb'), limit.perAccount, async (req, res) => {
     const user = await authenticate(req.body);
     if (!user) {
       res.status(401).json({ error: LOGIN_FAILED });

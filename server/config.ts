@@ -1,5 +1,17 @@
 import path from 'node:path';
 
+/** How many requests an address or an account may make in a window before it is answered 429. */
+export interface Limits {
+  signIn: { failuresPerAddress: number; failuresPerAccount: number; windowMinutes: number };
+  publicWrites: { perAddress: number; windowMinutes: number };
+}
+
+// A person who mistypes a password a few times never reaches these; a guessing script soon does.
+export const DEFAULT_LIMITS: Limits = {
+  signIn: { failuresPerAddress: 20, failuresPerAccount: 10, windowMinutes: 15 },
+  publicWrites: { perAddress: 30, windowMinutes: 10 },
+};
+
 export interface Config {
   host: string;
   port: number;
@@ -12,12 +24,35 @@ export interface Config {
   publicUrl: string;
   payments: { secretKey: string; apiUrl: string | null; webhookSecret: string };
   mail: { from: string; smtpHost: string | null; smtpPort: number; smtpUser?: string; smtpPass?: string; fakePort: number };
+  limits: Limits;
 }
 
 function need(env: NodeJS.ProcessEnv, name: string): string {
   const value = env[name];
   if (!value) throw new Error(`Set ${name} (see README.md, Configuration).`);
   return value;
+}
+
+function count(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
+  const raw = env[name];
+  if (raw === undefined) return fallback;
+  if (!/^[0-9]+$/.test(raw) || Number(raw) < 1) throw new Error(`${name} must be a whole number of at least 1 (see README.md, Operating).`);
+  return Number(raw);
+}
+
+function limitsConfig(env: NodeJS.ProcessEnv): Limits {
+  const d = DEFAULT_LIMITS;
+  return {
+    signIn: {
+      failuresPerAddress: count(env, 'SIGN_IN_FAILURES_PER_ADDRESS', d.signIn.failuresPerAddress),
+      failuresPerAccount: count(env, 'SIGN_IN_FAILURES_PER_ACCOUNT', d.signIn.failuresPerAccount),
+      windowMinutes: count(env, 'SIGN_IN_WINDOW_MINUTES', d.signIn.windowMinutes),
+    },
+    publicWrites: {
+      perAddress: count(env, 'PUBLIC_WRITES_PER_ADDRESS', d.publicWrites.perAddress),
+      windowMinutes: count(env, 'PUBLIC_WRITE_WINDOW_MINUTES', d.publicWrites.windowMinutes),
+    },
+  };
 }
 
 function paymentsConfig(env: NodeJS.ProcessEnv): Config['payments'] {
@@ -62,5 +97,6 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
       smtpPass: env.SMTP_PASS,
       fakePort: Number(env.MAIL_FAKE_PORT ?? 2525),
     },
+    limits: limitsConfig(env),
   };
 }

@@ -42,6 +42,7 @@ async function main(): Promise<void> {
     mailFake,
     publicUrl: config.publicUrl,
     webDir: config.webDir,
+    limits: config.limits,
   });
   const server = app.listen(config.port, config.host, () => {
     const url = `http://${config.host}:${config.port}`;

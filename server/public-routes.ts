@@ -16,7 +16,7 @@ import { publicDepositTerms } from '@/modules/deposits/server/deposit-service';
 
 import { requireUser } from './auth';
 import { idParam, optionalIntQuery } from './params';
-import { jsonBody } from './requests';
+import { jsonBody, type Middleware } from './requests';
 
 function sendPdf(res: Response, pdf: Buffer, filename: string, inline = false): void {
   res.type('application/pdf').setHeader('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${filename}"`);
@@ -25,7 +25,7 @@ function sendPdf(res: Response, pdf: Buffer, filename: string, inline = false): 
 }
 
 /** What a buyer reaches without signing in: a disclosure by its unguessable link, and their own signed copy. */
-export function publicRouter(deps: DisclosureDeps): Router {
+export function publicRouter(deps: DisclosureDeps, writeLimit: Middleware): Router {
   const router = express.Router();
   router.use((_req, res, next) => {
     res.setHeader('Cache-Control', 'no-store');
@@ -40,7 +40,7 @@ export function publicRouter(deps: DisclosureDeps): Router {
   router.get('/disclosures/:token/html', async (req, res) => {
     res.type('html').send(await publicDisclosureHtml(req.params.token, optionalIntQuery(req.query.version, 'version')));
   });
-  router.post('/disclosures/:token/acknowledge', jsonBody('4kb'), async (req, res) => {
+  router.post('/disclosures/:token/acknowledge', writeLimit, jsonBody('4kb'), async (req, res) => {
     res.status(201).json(await acknowledge(req.params.token, req.body));
   });
   router.get('/receipts/:token.pdf', async (req, res) => {

@@ -24,8 +24,10 @@ export function requireContentType(type: string, what = type): RequestHandler {
 }
 
 /** A JSON body of at most `limit`: anything else is refused with 415, too much with 413. */
-// Typed loosely on its route parameters so the route's own stay inferred.
-export function jsonBody(limit: string): RequestHandler<any> {
+/** Middleware typed loosely on route parameters, so a route that uses it keeps its own inferred. */
+export type Middleware = RequestHandler<any>;
+
+export function jsonBody(limit: string): Middleware {
   const check = requireContentType('application/json');
   const parse = express.json({ limit });
   return (req, res, next) => check(req, res, (err?: unknown) => (err ? next(err) : parse(req, res, next)));

@@ -22,3 +22,15 @@ describe('readConfig', () => {
     expect(() => readConfig({ ...base, JWT_SECRET: 'short' })).toThrow(/at least 32/);
   });
 });
+
+describe('the request limits', () => {
+  it('read their numbers from the environment', () => {
+    const c = readConfig({ ...base, SIGN_IN_FAILURES_PER_ADDRESS: '50', SIGN_IN_FAILURES_PER_ACCOUNT: '5', SIGN_IN_WINDOW_MINUTES: '30', PUBLIC_WRITES_PER_ADDRESS: '100', PUBLIC_WRITE_WINDOW_MINUTES: '1' });
+    expect(c.limits).toEqual({ signIn: { failuresPerAddress: 50, failuresPerAccount: 5, windowMinutes: 30 }, publicWrites: { perAddress: 100, windowMinutes: 1 } });
+    expect(readConfig({ ...base }).limits.signIn.failuresPerAddress).toBe(20);
+  });
+
+  it.each(['0', '-3', '2.5', 'many', ''])('refuses %j as a limit', (value) => {
+    expect(() => readConfig({ ...base, SIGN_IN_FAILURES_PER_ACCOUNT: value })).toThrow(/SIGN_IN_FAILURES_PER_ACCOUNT must be a whole number of at least 1/);
+  });
+});

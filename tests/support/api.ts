@@ -9,6 +9,7 @@ import { hashPassword } from '@/modules/accounts/server/user-service';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
 import { s3PhotoStore, type PhotoStore } from '@/modules/photos/server/photo-store';
 import { createApp } from '@/server/app';
+import type { Limits } from '@/server/config';
 import { createStripe } from '@/modules/deposits/server/payments';
 import { smtpMailer } from '@/server/mail';
 import { startStripeFake, type StripeFake } from '@/stripe-fake/stripe-fake';
@@ -39,7 +40,7 @@ export interface TestApi {
 }
 
 /** An app on a fresh database seeded with the demo scenario, and helpers to sign in and query. */
-export async function startTestApi(): Promise<TestApi> {
+export async function startTestApi(options: { limits?: Limits } = {}): Promise<TestApi> {
   const db = await createTestDatabase();
   await seedDemo(db.knex, hashPassword);
   // Each test file has a bucket of its own in the storage fake that scripts/test.sh started.
@@ -52,7 +53,7 @@ export async function startTestApi(): Promise<TestApi> {
   const stripeFake = await startStripeFake({ port: 0, retryDelaysMs: [50, 100, 200] });
   const webhookSecret = `whsec_test_${randomBytes(12).toString('hex')}`;
   const payments = { stripe: createStripe('sk_test_feltwire', stripeFake.url), webhookSecret };
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test' });
+  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test', limits: options.limits });
   let server: import('node:http').Server | undefined;
   const http = request(app);
   const tokens = new Map<Role, string>();
