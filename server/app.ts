@@ -10,9 +10,10 @@ import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-serv
 import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDeps } from '@/modules/deposits/server/deposit-service';
 import type Stripe from 'stripe';
 
-import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
+import { authRouter, configurePassport, inboxGuard, requireUser, type AuthOptions } from './auth';
 import { DEFAULT_LIMITS, type Limits } from './config';
 import { toGraphQLError } from './errors';
+import { securityHeaders } from './headers';
 import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
 import { graphqlRoute } from './graphql/http';
@@ -35,6 +36,8 @@ export interface AppDeps {
   /** The local inbox, when the mail fake runs (development and tests). */
   mailFake?: MailFake;
   webDir?: string;
+  /** The origin presigned photo links point at, allowed as an image source. */
+  photoOrigin?: string;
   /** Rate limits; the defaults when not given. */
   limits?: Limits;
 }
@@ -45,6 +48,7 @@ export function createApp(deps: AppDeps): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  app.use(securityHeaders(deps.photoOrigin));
   const pp = configurePassport(deps.auth);
   app.use(pp.initialize());
 
@@ -76,7 +80,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/public', publicRouter(disclosure, publicWrites));
   app.use('/api', uploadsRouter(pp, deps.photos));
   app.use('/api', documentsRouter(pp, disclosure));
-  if (deps.mailFake) app.use('/dev', inboxRouter(deps.mailFake));
+  if (deps.mailFake) app.use('/dev', inboxGuard(pp), inboxRouter(deps.mailFake));
 
   app.all(
     '/graphql',

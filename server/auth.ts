@@ -4,6 +4,7 @@ import jwt from 'jsonwebtoken';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 
+import { can } from '@/modules/accounts/core/roles';
 import { publicUser, type User } from '@/modules/accounts/server/user-model';
 import { authenticate, findActiveUser } from '@/modules/accounts/server/user-service';
 
@@ -67,6 +68,30 @@ export function requireUser(pp: passport.PassportStatic, shape: 'graphql' | 'res
         return;
       }
       req.user = user;
+      next();
+    })(req, res, next);
+  };
+}
+
+const LOOPBACK = new Set(['127.0.0.1', '::1', '::ffff:127.0.0.1']);
+
+/** A request from this machine itself: a loopback socket, and no proxy header saying it came from elsewhere. */
+export function fromThisMachine(req: Request): boolean {
+  return LOOPBACK.has(req.socket.remoteAddress ?? '') && req.headers['x-forwarded-for'] === undefined && req.headers.forwarded === undefined;
+}
+
+const INBOX_CLOSED = 'The demo inbox opens only on the machine that runs the server, or for a manager.';
+
+/** The demo inbox shows buyers' names and signed-copy links: this machine, or a manager's token. */
+export function inboxGuard(pp: passport.PassportStatic) {
+  return (req: Request, res: Response, next: NextFunction) => {
+    if (fromThisMachine(req)) return next();
+    pp.authenticate('jwt', { session: false }, (err: unknown, user: User | false) => {
+      if (err) return next(err);
+      if (!user || !can(user.role, 'readDemoInbox')) {
+        res.status(403).json({ error: INBOX_CLOSED });
+        return;
+      }
       next();
     })(req, res, next);
   };

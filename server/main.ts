@@ -43,6 +43,7 @@ async function main(): Promise<void> {
     publicUrl: config.publicUrl,
     webDir: config.webDir,
     limits: config.limits,
+    photoOrigin: new URL(config.s3.endpoint).origin,
   });
   const server = app.listen(config.port, config.host, () => {
     const url = `http://${config.host}:${config.port}`;

@@ -44,7 +44,8 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
   const db = await createTestDatabase();
   await seedDemo(db.knex, hashPassword);
   // Each test file has a bucket of its own in the storage fake that scripts/test.sh started.
-  const s3 = createS3({ endpoint: process.env.S3_ENDPOINT ?? 'http://127.0.0.1:4579', region: 'us-east-1', bucket: '', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' });
+  const s3Endpoint = process.env.S3_ENDPOINT ?? 'http://127.0.0.1:4579';
+  const s3 = createS3({ endpoint: s3Endpoint, region: 'us-east-1', bucket: '', accessKeyId: 'S3RVER', secretAccessKey: 'S3RVER' });
   const bucket = `fw-test-${randomBytes(4).toString('hex')}`;
   await ensureBucket(s3, bucket);
   const photos = s3PhotoStore(s3, bucket);
@@ -53,7 +54,7 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
   const stripeFake = await startStripeFake({ port: 0, retryDelaysMs: [50, 100, 200] });
   const webhookSecret = `whsec_test_${randomBytes(12).toString('hex')}`;
   const payments = { stripe: createStripe('sk_test_feltwire', stripeFake.url), webhookSecret };
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test', limits: options.limits });
+  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test', limits: options.limits, photoOrigin: new URL(s3Endpoint).origin });
   let server: import('node:http').Server | undefined;
   const http = request(app);
   const tokens = new Map<Role, string>();

@@ -9,13 +9,13 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure';
+export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure' | 'readDemoInbox';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure'],
   floor: ['readPianos'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'readDemoInbox'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

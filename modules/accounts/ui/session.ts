@@ -1,5 +1,5 @@
 // The signed-in session on this device: the token and the user, kept in localStorage on the web.
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 import { ROLES } from '@/modules/accounts/core/roles';
 

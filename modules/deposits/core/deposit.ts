@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 import { CURRENCY_DIGITS, roundMinor, toMinor, type Currency } from '@/modules/shop/core/money';
 

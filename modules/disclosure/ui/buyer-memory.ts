@@ -1,6 +1,6 @@
 // What the buyer's own device remembers about a disclosure link: the acknowledgement receipt,
 // the newest version it has seen, and a deposit checkout it started. localStorage on the web.
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 const receipt = z.object({
   acknowledgementId: z.number(),

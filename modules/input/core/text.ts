@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from './zod';
 
 // PostgreSQL text cannot hold NUL, and no name, note or address needs a control character.
 export const NO_CONTROL_CHARACTERS = 'must not contain control characters';

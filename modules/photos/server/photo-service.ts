@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 import { WORK_TASKS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 

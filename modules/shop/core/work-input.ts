@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from '@/modules/input/core/zod';
 
 import { lineText, multiLineText } from '@/modules/input/core/text';
 

@@ -15,7 +15,13 @@ export function baseUrl(): string {
 
 const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
-/** A fresh Chromium profile per test file; each journey opens its own page. */
+// Chromium reports a blocked load to the page as an event; the page says it on the console, where it is collected.
+const REPORT_CSP = `document.addEventListener('securitypolicyviolation', (e) => console.error('CSP violation: ' + e.effectiveDirective + ' blocked ' + (e.blockedURI || 'inline') + ' on ' + e.documentURI + ' from ' + e.sourceFile + ':' + e.lineNumber + ':' + e.columnNumber));`;
+
+/**
+ * A fresh Chromium profile per test file; each journey opens its own page. Closing it fails the file
+ * when any page broke the server's content security policy.
+ */
 export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(process.env.TMPDIR ?? os.tmpdir(), 'fw-chromium-'));
   const context = await chromium.launchPersistentContext(dir, {
@@ -24,11 +30,17 @@ export async function openBrowser(): Promise<{ context: BrowserContext; close: (
     headless: true,
     viewport: PHONE,
   });
+  const violations: string[] = [];
+  await context.addInitScript(REPORT_CSP);
+  context.on('console', (message) => {
+    if (message.text().startsWith('CSP violation:')) violations.push(message.text());
+  });
   return {
     context,
     close: async () => {
       await context.close();
       fs.rmSync(dir, { recursive: true, force: true });
+      if (violations.length) throw new Error(`pages broke the content security policy:\n${[...new Set(violations)].join('\n')}`);
     },
   };
 }
