@@ -11,7 +11,7 @@ function env(name: string): string {
   return value;
 }
 
-export async function createTestDatabase(): Promise<{ knex: Knex; drop: () => Promise<void> }> {
+export async function createTestDatabase(): Promise<{ knex: Knex; url: string; drop: () => Promise<void> }> {
   const base = env('TEST_PG_URL');
   const template = env('TEST_DB_TEMPLATE');
   const name = `fw_${env('TEST_RUN_ID')}_${randomBytes(4).toString('hex')}`;
@@ -21,6 +21,7 @@ export async function createTestDatabase(): Promise<{ knex: Knex; drop: () => Pr
   bindModels(knex);
   return {
     knex,
+    url: `${base}/${name}`,
     drop: async () => {
       await knex.destroy();
       await admin.raw('drop database if exists ?? with (force)', [name]);
