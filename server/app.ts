@@ -82,8 +82,8 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api', documentsRouter(pp, disclosure));
   if (deps.mailFake) app.use('/dev', inboxGuard(pp), inboxRouter(deps.mailFake));
 
-  app.all(
-    '/graphql',
+  // GraphQL over HTTP: GET for queries, POST for everything; other methods are no route.
+  const graphql = [
     requireUser(pp),
     express.json({ limit: '100kb' }),
     graphqlRoute<GraphContext>({
@@ -91,7 +91,9 @@ export function createApp(deps: AppDeps): express.Express {
       context: (req: Request) => ({ user: req.user as User, photos: deps.photos, disclosure, deposits }),
       formatError,
     }),
-  );
+  ];
+  app.get('/graphql', graphql);
+  app.post('/graphql', graphql);
   app.use(API_PREFIXES, routeNotFound);
 
   if (deps.webDir) mountWeb(app, deps.webDir);

@@ -44,7 +44,7 @@ export function sendError(req: Request, res: Response, err: AppError, status = e
 // Another library's client error (a malformed percent-encoding in the path, a bad range): its own status and words.
 function exposedClientError(err: unknown): { status: number; error: AppError } | null {
   const e = err as { status?: unknown; expose?: unknown; message?: unknown };
-  if (typeof e.status !== 'number' || e.status < 400 || e.status > 499 || e.expose !== true || typeof e.message !== 'string') return null;
+  if (err instanceof AppError || typeof e.status !== 'number' || e.status < 400 || e.status > 499 || e.expose === false || typeof e.message !== 'string') return null;
   return { status: e.status, error: new AppError(e.status === 404 ? 'NOT_FOUND' : 'BAD_INPUT', e.message) };
 }
 

@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 
 import { z } from '@/modules/input/core/zod';
 
+import { lineText } from '@/modules/input/core/text';
 import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { IMAGE_EXTENSIONS, MAX_PHOTO_BYTES, PHOTO_AREAS, sniffImageType } from '@/modules/photos/core/photo-rules';
@@ -14,7 +15,7 @@ import type { PhotoStore } from './photo-store';
 export const photoFields = z
   .object({
     area: z.enum(PHOTO_AREAS, { message: `must be one of ${PHOTO_AREAS.join(', ')}` }),
-    caption: z.string().trim().max(200).optional(),
+    caption: lineText().trim().max(200).optional(),
     pianoId: z.coerce.number().int().positive().optional(),
     // A draft key is made by the phone for an intake not yet submitted.
     draftKey: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, 'must be 16-64 letters, digits or dashes').optional(),

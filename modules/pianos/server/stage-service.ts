@@ -70,5 +70,7 @@ export async function stageHistory(role: string, pianoId: number): Promise<Stage
     .where('stage_moves.piano_id', pianoId)
     .orderBy([{ column: 'stage_moves.at' }, { column: 'stage_moves.id' }])
     .select('stage_moves.*', 'users.name as by_name')) as unknown as (StageMove & { byName: string | null })[];
+  // Every piano has its arrival in the history: none at all means no such piano.
+  if (!rows.length && !(await Piano.query().findById(pianoId))) throw notFound(`piano ${pianoId}`);
   return rows.map((r) => ({ action: r.action, fromStage: r.fromStage, toStage: r.toStage, why: r.why, by: r.byName ?? 'Feltwire', byRole: r.byRole, at: r.at }));
 }
