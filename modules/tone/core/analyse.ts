@@ -38,6 +38,8 @@ export const ANALYSIS_SETTINGS = {
   /** an onset: the level rises this much within `onsetWithinS` */
   onsetRiseDb: 6,
   onsetWithinS: 0.05,
+  /** a "new" note running on from the last at the same key, within this many cents and no louder, is the same note */
+  sameNoteCents: 5,
   /** two onsets closer than this are one note */
   minOnsetGapS: 0.08,
   /** the hammer's attack is skipped before the pitch is read */
@@ -92,6 +94,8 @@ function percentile(values: Float64Array, q: number): number {
 interface Segment {
   start: number;
   end: number;
+  /** the sound ran on into the next onset without falling under the end gate */
+  runsOn: boolean;
 }
 
 /** Where notes start and end, in samples: a quick rise in level starts one; falling under the gate or the next onset ends it. */
@@ -123,7 +127,8 @@ function findSegments(x: Float32Array, sampleRate: number): Segment[] {
     // The note ends once its level, past the attack, falls under the end gate.
     let i = Math.ceil(onsets[n] / hop) + within;
     while (i < db.length && i * hop + frame < next && db[i] >= endGate) i++;
-    segments.push({ start: onsets[n], end: Math.min(next, i * hop + frame, x.length) });
+    const end = Math.min(next, i * hop + frame, x.length);
+    segments.push({ start: onsets[n], end, runsOn: n + 1 < onsets.length && end >= next });
   }
   return segments;
 }
@@ -360,7 +365,10 @@ export function analyseRecording(samples: Float32Array, sampleRate: number): Ton
   const yinSize = yinBufferFor(sampleRate);
   const maxWindow = 2 ** Math.floor(Math.log2(s.maxWindowS * sampleRate));
   const notes: ToneNote[] = [];
+  let ranOn = false;
   for (const seg of findSegments(samples, sampleRate)) {
+    const continues = ranOn;
+    ranOn = seg.runsOn;
     if ((seg.end - seg.start) / sampleRate < s.minNoteS) continue;
     const levelEnd = Math.min(seg.end, seg.start + Math.round(s.levelWindowS * sampleRate));
     let power = 0;
@@ -378,7 +386,11 @@ export function analyseRecording(samples: Float32Array, sampleRate: number): Ton
     if (!reading) continue;
     const key = nearestKey(reading.hz);
     if (key == null) continue;
-    notes.push({ startS: seg.start / sampleRate, frequencyHz: reading.hz, key, cents: cents(reading.hz, keyFrequency(key)), levelDb });
+    const note = { startS: seg.start / sampleRate, frequencyHz: reading.hz, key, cents: cents(reading.hz, keyFrequency(key)), levelDb };
+    // The same key, no quieter gap before it and no louder: one note broken by a dropout in the capture, not a new one.
+    const last = notes[notes.length - 1];
+    if (continues && last && last.key === key && Math.abs(last.cents - note.cents) < s.sameNoteCents && levelDb <= last.levelDb) continue;
+    notes.push(note);
   }
   return { notes };
 }

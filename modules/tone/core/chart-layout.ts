@@ -51,7 +51,7 @@ export function keyboardChartLayout(keys: readonly ChartKey[], width: number, he
   const zeroY = (top + bottom) / 2;
   const yOf = (c: number) => zeroY - (Math.max(-rangeCents, Math.min(rangeCents, c)) / rangeCents) * (bottom - top) / 2;
   const step = rangeCents / 2;
-  const ticks = [-rangeCents, -step, 0, step, rangeCents].map((c) => ({ y: yOf(c), cents: c, label: c > 0 ? `+${c}` : String(c) }));
+  const ticks = [-rangeCents, -step, 0, step, rangeCents].map((c) => ({ y: yOf(c), cents: c, label: c > 0 ? `+${c}` : c < 0 ? `−${-c}` : '0' }));
   const octaves = [4, 16, 28, 40, 52, 64, 76, 88].map((key) => ({ x: xOf(key), key, label: keyName(key) }));
   const marks = keys.map((k) => ({
     key: k.key,

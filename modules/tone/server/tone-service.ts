@@ -9,8 +9,9 @@ import { Assessment } from '@/modules/assessment/server/assessment-models';
 import { currentRules } from '@/modules/assessment/server/assessment-service';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import { Piano } from '@/modules/pianos/server/piano-model';
-import { analyseRecording, type ToneNote } from '@/modules/tone/core/analyse';
-import { keyboardReport, type KeyboardReport } from '@/modules/tone/core/keyboard-report';
+import { analyseRecording } from '@/modules/tone/core/analyse';
+import { keyboardReport } from '@/modules/tone/core/keyboard-report';
+import type { RecordingView } from '@/modules/tone/core/recording';
 import { decodeWav, MAX_RECORDING_BYTES, readWavInfo, WAV_CONTENT_TYPE, type WavProblem } from '@/modules/tone/core/wav';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
@@ -24,22 +25,6 @@ export const recordingFields = z
     source: z.enum(['recorded', 'uploaded'], { message: 'must be recorded or uploaded' }).default('uploaded'),
   })
   .refine((f) => f.pianoId != null || f.draftKey != null, { message: 'give a pianoId or a draftKey', path: ['pianoId'] });
-
-export interface RecordingView {
-  id: number;
-  pianoId: number | null;
-  assessmentId: number | null;
-  source: string;
-  durationS: number;
-  sampleRate: number;
-  bytes: number;
-  recordedAt: string;
-  recordedBy: string;
-  /** a link to the WAV, valid for ten minutes */
-  url: string;
-  notes: ToneNote[];
-  report: KeyboardReport;
-}
 
 const iso = (t: string | Date) => new Date(t).toISOString();
 

@@ -15,14 +15,15 @@ export function baseUrl(): string {
 
 const ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 
-/** A fresh Chromium profile per test file; each journey opens its own page. */
-export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+/** A fresh Chromium profile per test file; each journey opens its own page. Extra flags and permissions for journeys that need them (a fake microphone). */
+export async function openBrowser(extra: { args?: string[]; permissions?: string[] } = {}): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(process.env.TMPDIR ?? os.tmpdir(), 'fw-chromium-'));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ARGS,
+    args: [...ARGS, ...(extra.args ?? [])],
     headless: true,
     viewport: PHONE,
+    permissions: extra.permissions,
   });
   return {
     context,

@@ -105,6 +105,12 @@ describe('one result per note', () => {
     });
   });
 
+  it('a note broken by a dropout in the capture (25 ms of nothing) is still one note', () => {
+    const note = tone({ f0: keyFrequency(37), partials: pianoPartials(8), durationS: 1.2, decayS: 1 });
+    note.fill(0, Math.round(0.6 * SAMPLE_RATE), Math.round(0.625 * SAMPLE_RATE));
+    expect(analyseRecording(padded(note), SAMPLE_RATE).notes.map((n) => n.key)).toEqual([37]);
+  });
+
   it('detuned notes keep their offsets: a piano 20 cents flat reads 20 cents flat on every key', () => {
     const keys = [25, 37, 49, 61];
     const { notes } = analyseRecording(run(keys, { noteS: 0.8, gapS: 0.3, centsOff: () => -20 }), SAMPLE_RATE);
