@@ -38,8 +38,11 @@ export const ANALYSIS_SETTINGS = {
   /** an onset: the level rises this much within `onsetWithinS` */
   onsetRiseDb: 6,
   onsetWithinS: 0.05,
-  /** a "new" note running on from the last at the same key, within this many cents and no louder, is the same note */
+  /** a "new" note running on from the last at the same key (or after a gap of up to maxDropoutS), within this many cents and quieter, is the same note */
   sameNoteCents: 5,
+  maxDropoutS: 0.15,
+  /** a string left ringing has decayed by then; a key struck again comes back as loud */
+  sameNoteQuieterDb: 1,
   /** two onsets closer than this are one note */
   minOnsetGapS: 0.08,
   /** the hammer's attack is skipped before the pitch is read */
@@ -365,10 +368,12 @@ export function analyseRecording(samples: Float32Array, sampleRate: number): Ton
   const yinSize = yinBufferFor(sampleRate);
   const maxWindow = 2 ** Math.floor(Math.log2(s.maxWindowS * sampleRate));
   const notes: ToneNote[] = [];
+  let previousEnd = -Infinity;
   let ranOn = false;
   for (const seg of findSegments(samples, sampleRate)) {
-    const continues = ranOn;
+    const continues = ranOn || seg.start - previousEnd <= s.maxDropoutS * sampleRate;
     ranOn = seg.runsOn;
+    previousEnd = seg.end;
     if ((seg.end - seg.start) / sampleRate < s.minNoteS) continue;
     const levelEnd = Math.min(seg.end, seg.start + Math.round(s.levelWindowS * sampleRate));
     let power = 0;
@@ -387,9 +392,10 @@ export function analyseRecording(samples: Float32Array, sampleRate: number): Ton
     const key = nearestKey(reading.hz);
     if (key == null) continue;
     const note = { startS: seg.start / sampleRate, frequencyHz: reading.hz, key, cents: cents(reading.hz, keyFrequency(key)), levelDb };
-    // The same key, no quieter gap before it and no louder: one note broken by a dropout in the capture, not a new one.
+    // The same key, straight after (or after a gap no longer than a dropout) and quieter: one note broken by a
+    // dropout in the capture, not a new one.
     const last = notes[notes.length - 1];
-    if (continues && last && last.key === key && Math.abs(last.cents - note.cents) < s.sameNoteCents && levelDb <= last.levelDb) continue;
+    if (continues && last && last.key === key && Math.abs(last.cents - note.cents) < s.sameNoteCents && levelDb <= last.levelDb - s.sameNoteQuieterDb) continue;
     notes.push(note);
   }
   return { notes };

@@ -39,6 +39,39 @@ function problemOf(err: unknown): RecorderProblem {
   return { kind, message: PROBLEMS[kind] };
 }
 
+// Runs on the audio thread: blocks of samples go to the page by message, so a busy page loses none of them.
+const CAPTURE_WORKLET = `class FeltwireCapture extends AudioWorkletProcessor {
+  constructor() { super(); this.block = new Float32Array(2048); this.at = 0; }
+  process(inputs) {
+    const channel = inputs[0] && inputs[0][0];
+    if (channel) for (let i = 0; i < channel.length; i++) {
+      this.block[this.at++] = channel[i];
+      if (this.at === this.block.length) { this.port.postMessage(this.block, [this.block.buffer]); this.block = new Float32Array(2048); this.at = 0; }
+    }
+    return true;
+  }
+}
+registerProcessor('feltwire-capture', FeltwireCapture);`;
+
+/** The node that hands over the samples: an AudioWorklet where there is one, else the older ScriptProcessor (on the page's thread). */
+async function captureNode(context: AudioContext, take: (block: Float32Array) => void): Promise<{ node: AudioNode; stop: () => void }> {
+  if (context.audioWorklet && typeof AudioWorkletNode !== 'undefined') {
+    try {
+      const url = URL.createObjectURL(new Blob([CAPTURE_WORKLET], { type: 'application/javascript' }));
+      await context.audioWorklet.addModule(url);
+      URL.revokeObjectURL(url);
+      const node = new AudioWorkletNode(context, 'feltwire-capture');
+      node.port.onmessage = (event: MessageEvent<Float32Array>) => take(event.data);
+      return { node, stop: () => (node.port.onmessage = null) };
+    } catch {
+      // A page that forbids blob: modules falls back below.
+    }
+  }
+  const processor = context.createScriptProcessor(4096, 1, 1);
+  processor.onaudioprocess = (event) => take(new Float32Array(event.inputBuffer.getChannelData(0)));
+  return { node: processor, stop: () => (processor.onaudioprocess = null) };
+}
+
 /** Asks for the microphone and starts recording; the browser's voice processing is turned off, since it would bend the pitch and level. */
 export async function startRecording(callbacks: RecorderCallbacks): Promise<{ ok: true; recording: LiveRecording } | { ok: false; problem: RecorderProblem }> {
   const media = typeof navigator !== 'undefined' ? navigator.mediaDevices : undefined;
@@ -53,8 +86,6 @@ export async function startRecording(callbacks: RecorderCallbacks): Promise<{ ok
   const context = new AudioContextClass();
   await context.resume().catch(() => undefined);
   const source = context.createMediaStreamSource(stream);
-  // ScriptProcessorNode is old but everywhere, and needs no separate worklet file in the bundle.
-  const processor = context.createScriptProcessor(4096, 1, 1);
   const silent = context.createGain();
   silent.gain.value = 0;
   const chunks: Float32Array[] = [];
@@ -62,11 +93,21 @@ export async function startRecording(callbacks: RecorderCallbacks): Promise<{ ok
   let finished = false;
   const limit = MAX_RECORDING_SECONDS * context.sampleRate - 4096;
 
+  const take = (block: Float32Array) => {
+    if (finished) return;
+    chunks.push(block);
+    length += block.length;
+    let power = 0;
+    for (let i = 0; i < block.length; i++) power += block[i] * block[i];
+    callbacks.onLevel(10 * Math.log10(power / block.length + 1e-12));
+    if (length >= limit) callbacks.onLimit();
+  };
+  const capture = await captureNode(context, take);
   const release = () => {
     finished = true;
-    processor.onaudioprocess = null;
+    capture.stop();
     source.disconnect();
-    processor.disconnect();
+    capture.node.disconnect();
     silent.disconnect();
     stream.getTracks().forEach((t) => t.stop());
     void context.close().catch(() => undefined);
@@ -87,19 +128,8 @@ export async function startRecording(callbacks: RecorderCallbacks): Promise<{ ok
     }
     return out;
   };
-
-  processor.onaudioprocess = (event) => {
-    if (finished) return;
-    const block = new Float32Array(event.inputBuffer.getChannelData(0));
-    chunks.push(block);
-    length += block.length;
-    let power = 0;
-    for (let i = 0; i < block.length; i++) power += block[i] * block[i];
-    callbacks.onLevel(10 * Math.log10(power / block.length + 1e-12));
-    if (length >= limit) callbacks.onLimit();
-  };
-  source.connect(processor);
-  processor.connect(silent);
+  source.connect(capture.node);
+  capture.node.connect(silent);
   silent.connect(context.destination);
 
   return {
