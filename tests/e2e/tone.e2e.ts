@@ -81,7 +81,10 @@ it('a technician records a piano through the microphone on a phone: a live level
   // The same page on a tablet and a wide screen: the recordings sit in the main column.
   for (const [size, name] of [[TABLET, 'tablet'], [WIDE, 'wide']] as const) {
     await page.setViewportSize(size);
-    await page.getByTestId('play-test-recordings').scrollIntoViewIfNeeded();
+    // From 900 px the page re-lays itself in two columns: wait for the recordings to settle there.
+    await page.waitForTimeout(500);
+    await page.locator('[data-testid$="-chart-svg"]').first().waitFor();
+    await page.locator('[data-testid$="-pitch-raise"]').first().scrollIntoViewIfNeeded();
     await shot(page, `tone-piano-${name}`);
   }
   await page.close();
