@@ -9,13 +9,26 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure' | 'readDemoInbox';
+export type Ability =
+  | 'manageUsers'
+  | 'readPianos'
+  | 'createPianos'
+  | 'readSellerDetails'
+  | 'assess'
+  | 'uploadPhotos'
+  | 'setGradeRules'
+  | 'remeasure'
+  // A play-test recording of a piano, and the pitch and level results measured from it.
+  | 'recordTone'
+  | 'readToneResults'
+  // The local demo inbox of e-mails the server sent (development and tests only).
+  | 'readDemoInbox';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
-  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos'],
-  technician: ['readPianos', 'uploadPhotos', 'remeasure'],
-  floor: ['readPianos'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'readDemoInbox'],
+  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults'],
+  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults'],
+  floor: ['readPianos', 'recordTone', 'readToneResults'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -39,6 +39,8 @@ export const intakeInput = z
     notes: multiLineText().trim().max(2000).nullish(),
     measurements: measurementsInput,
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
+    /** Play-test recordings made during the intake: they join the assessment on submit. */
+    recordingIds: z.array(z.number().int().positive()).max(20).default([]),
     /** A piano already in stock in stage received (logged before its inspection): assess it instead of adding one. */
     pianoId: z.number().int().positive().optional(),
   })
@@ -51,6 +53,7 @@ export const correctionInput = z
     measurements: measurementsInput,
     changeNote: multiLineText().trim().min(1, 'is required: say why the assessment changes').max(500),
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
+    recordingIds: z.array(z.number().int().positive()).max(20).default([]),
     /** The version the correction was made from: a newer one saved meanwhile is not overwritten unseen. */
     baseVersion: z.number().int().positive().optional(),
   })

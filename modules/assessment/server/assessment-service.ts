@@ -12,6 +12,7 @@ import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-in
 import { Photo } from '@/modules/photos/server/photo-model';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano, recordArrival } from '@/modules/pianos/server/stage-service';
+import { attachRecordings } from '@/modules/tone/server/tone-attach';
 import { nextVersion } from '@/server/db/versions';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
@@ -102,6 +103,7 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
     // The inspection is in: the piano moves on from received.
     await movePiano({ pianoId: piano.id, action: 'submit_assessment', by: actor.role, userId: actor.id }, trx);
     await attachPhotos(trx, actor, piano.id, input.photoIds);
+    await attachRecordings(trx, actor, piano.id, assessment.id, input.recordingIds);
     return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version: 1, grade };
   });
 }
@@ -149,6 +151,7 @@ export async function correctAssessment(actor: Actor, raw: unknown): Promise<Sub
       const version = latest.version + 1;
       const assessment = await insertAssessment(trx, actor, piano.id, version, input.measurements, grade, input.changeNote);
       await attachPhotos(trx, actor, piano.id, input.photoIds);
+      await attachRecordings(trx, actor, piano.id, assessment.id, input.recordingIds);
       return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version, grade };
     });
   } catch (err) {

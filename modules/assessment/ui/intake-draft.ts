@@ -14,6 +14,7 @@ import {
 } from '@/modules/assessment/core/measurements';
 import type { PhotoArea } from '@/modules/photos/core/photo-rules';
 import type { CaseCondition, PianoFacts, PianoKind } from '@/modules/pianos/core/piano';
+import type { PlayTestFill } from '@/modules/tone/core/keyboard-report';
 
 import { labelForPath } from './measure-labels';
 
@@ -121,6 +122,8 @@ export interface AssessmentDraft {
   notes: string;
   measurements: MeasureDraft;
   photos: DraftPhoto[];
+  /** play-test recordings made for this draft (by its draft key): they join the assessment on submit */
+  recordingIds: number[];
   /** which piano: the one corrected, or one logged before its inspection that this intake assesses; null for a new trade-in */
   pianoId: number | null;
   /** correction only: the version the form started from */
@@ -202,6 +205,7 @@ export function newIntakeDraft(now: Date): AssessmentDraft {
     notes: '',
     measurements: EMPTY_MEASUREMENTS,
     photos: [],
+    recordingIds: [],
     pianoId: null,
     baseVersion: null,
     changeNote: '',
@@ -288,6 +292,19 @@ export function measureDraftFrom(m: Measurements): MeasureDraft {
 
 export function newCorrectionDraft(pianoId: number, baseVersion: number, m: Measurements): AssessmentDraft {
   return { ...newIntakeDraft(new Date(0)), mode: 'correction', step: 'keys', pianoId, baseVersion, measurements: measureDraftFrom(m) };
+}
+
+/** The play-test fields as measured from a recording (after the user confirms): only what it measured is replaced. */
+export function fillFromRecording(m: MeasureDraft, fill: PlayTestFill): MeasureDraft {
+  const rating = (r: number | null, was: Rating | null) => (r != null ? (r as Rating) : was);
+  return {
+    ...m,
+    a4Hz: fill.a4Hz != null ? fill.a4Hz.toFixed(1) : m.a4Hz,
+    bassEvenness: rating(fill.bassEvenness, m.bassEvenness),
+    middleEvenness: rating(fill.middleEvenness, m.middleEvenness),
+    trebleEvenness: rating(fill.trebleEvenness, m.trebleEvenness),
+    notesStickingOut: fill.notesStickingOut.join(', '),
+  };
 }
 
 // ---- numbers as typed ----
@@ -476,6 +493,7 @@ export function buildIntakeInput(d: AssessmentDraft): BuildResult {
     piano: pianoFromDraft(d.piano, errors),
     measurements: measurements.raw,
     photoIds: d.photos.map((p) => p.id),
+    recordingIds: d.recordingIds,
   };
   if (text(d.notes)) input.notes = text(d.notes);
   if (d.pianoId != null) input.pianoId = d.pianoId;
@@ -498,6 +516,7 @@ export function buildCorrectionInput(d: AssessmentDraft): BuildResult {
     measurements: measurements.raw,
     changeNote: d.changeNote.trim(),
     photoIds: d.photos.map((p) => p.id),
+    recordingIds: d.recordingIds,
     ...(d.baseVersion != null ? { baseVersion: d.baseVersion } : {}),
   };
   const parsed = correctionInput.safeParse(input);

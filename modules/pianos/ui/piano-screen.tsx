@@ -10,6 +10,7 @@ import { CASE_CONDITION_LABELS } from '@/modules/assessment/ui/measure-labels';
 import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
 import { useIntakeRecord } from '@/modules/assessment/ui/use-intake-record';
 import { PhotoGallery } from '@/modules/photos/ui/components/photo-gallery';
+import { PlayTestRecordings } from '@/modules/tone/ui/components/play-test-recordings';
 import { usePianoPhotos } from '@/modules/photos/ui/use-photos';
 import { StageActions } from '@/modules/shop/ui/stage-actions';
 import { StageTimeline } from '@/modules/shop/ui/stage-timeline';
@@ -118,6 +119,12 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
       {photos == null ? <Loading label="Loading photos…" /> : photos.length ? <PhotoGallery photos={photos} /> : <Body tone="secondary">No photos yet.</Body>}
     </Section>
   );
+  const playTest =
+    user && can(user.role, 'readToneResults') ? (
+      <Section title="Play test recordings" description="Pitch and level of each note, measured from a recording of the piano.">
+        <PlayTestRecordings pianoId={piano.id} />
+      </Section>
+    ) : null;
   const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
   const workshop = <WorkshopSummary pianoId={piano.id} />;
   const sale = onFloorSide ? (
@@ -181,6 +188,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
         {condition}
         {sale}
         {workshop}
+        {playTest}
         {photoSection}
         {details}
         {intakeSection}
@@ -196,6 +204,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
         {condition}
         {sale}
         {workshop}
+        {playTest}
         {photoSection}
       </View>
       <View style={styles.aside}>

@@ -20,15 +20,17 @@ const REPORT_CSP = `document.addEventListener('securitypolicyviolation', (e) => 
 
 /**
  * A fresh Chromium profile per test file; each journey opens its own page. Closing it fails the file
- * when any page broke the server's content security policy.
+ * when any page broke the server's content security policy. Extra flags and permissions for journeys
+ * that need them (a fake microphone).
  */
-export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+export async function openBrowser(extra: { args?: string[]; permissions?: string[] } = {}): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(process.env.TMPDIR ?? os.tmpdir(), 'fw-chromium-'));
   const context = await chromium.launchPersistentContext(dir, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-    args: ARGS,
+    args: [...ARGS, ...(extra.args ?? [])],
     headless: true,
     viewport: PHONE,
+    permissions: extra.permissions,
   });
   const violations: string[] = [];
   await context.addInitScript(REPORT_CSP);

@@ -33,6 +33,8 @@ const HUGE = 'x'.repeat(120 * 1024);
 const TOKEN_SHAPED = 'A'.repeat(32);
 const DIGEST = '0'.repeat(64);
 const DRAFT = 'draft-0123456789abcdef';
+// A RIFF/WAVE header of 16-bit mono PCM at 44.1 kHz that announces no samples at all.
+const WAV_HEADER_ONLY = Buffer.from('UklGRiQAAABXQVZFZm10IBAAAAABAAEARKwAAIhYAQACABAAZGF0YQAAAAA=', 'base64');
 
 const event = JSON.stringify({ id: 'evt_corpus_1', type: 'checkout.session.completed', data: { object: { id: 'cs_corpus_1', payment_status: 'paid' } } });
 const signedWith = (secret: string, timestamp?: number) => Stripe.webhooks.generateTestHeaderString({ payload: event, secret, timestamp });
@@ -115,6 +117,14 @@ const rest: BadRequest[] = [
   { name: 'photo multipart with a broken part header', route: 'POST /api/photos', as: 'intake', raw: { type: 'multipart/form-data; boundary=b0undary', body: '--b0undary\r\nContent-Disposition\r\n\r\nkeys\r\n--b0undary--\r\n' } },
   { name: 'photo with two files', route: 'POST /api/photos', as: 'intake', raw: { type: 'multipart/form-data; boundary=b0undary', body: ['photo', 'photo'].map((n) => `--b0undary\r\nContent-Disposition: form-data; name="${n}"; filename="a.jpg"\r\nContent-Type: image/jpeg\r\n\r\nxx\r\n`).join('') + '--b0undary--\r\n' } },
   { name: 'photo as JSON', route: 'POST /api/photos', as: 'intake', json: { photo: 'data:image/jpeg;base64,/9j/' } },
+  // play-test recordings
+  { name: 'recording without a sign-in', route: 'POST /api/recordings', multipart: { fields: { draftKey: DRAFT }, file: { content: WAV_HEADER_ONLY, filename: 'take.wav', contentType: 'audio/wav' } } },
+  { name: 'recording that is a JPEG named .wav', route: 'POST /api/recordings', as: 'technician', multipart: { fields: { draftKey: DRAFT }, file: { content: JPEG, filename: 'take.wav', contentType: 'audio/wav' } } },
+  { name: 'recording that is a bare WAV header', route: 'POST /api/recordings', as: 'technician', multipart: { fields: { draftKey: DRAFT }, file: { content: WAV_HEADER_ONLY, filename: 'take.wav', contentType: 'audio/wav' } } },
+  { name: 'recording with no file', route: 'POST /api/recordings', as: 'technician', multipart: { fields: { draftKey: DRAFT } } },
+  { name: 'recording for a piano id past the integer range', route: 'POST /api/recordings', as: 'technician', multipart: { fields: { pianoId: '99999999999' }, file: { content: WAV_HEADER_ONLY, filename: 'take.wav', contentType: 'audio/wav' } } },
+  { name: 'recording multipart without a boundary', route: 'POST /api/recordings', as: 'technician', raw: { type: 'multipart/form-data', body: 'recording' } },
+  { name: 'recording as JSON', route: 'POST /api/recordings', as: 'technician', json: { recording: 'UklGRg==' } },
   // staff documents
   { name: 'floor tag for a piano id that is not a number', route: 'GET /api/pianos/:id/floor-tag.pdf', url: '/api/pianos/abc/floor-tag.pdf', as: 'floor' },
   { name: 'floor tag for a piano id of -1', route: 'GET /api/pianos/:id/floor-tag.pdf', url: '/api/pianos/-1/floor-tag.pdf', as: 'floor' },
@@ -147,6 +157,11 @@ const graph = (name: string, as: Role | undefined, query: string, variables?: Re
 const graphql: BadRequest[] = [
   graph('no sign-in', undefined, '{ me { id } }'),
   graph('no query', 'manager', ''),
+  graph('recordings with neither piano nor draft', 'technician', '{ toneRecordings(where: {}) { id } }'),
+  graph('recordings of a piano id past the integer range', 'technician', '{ toneRecordings(where: { pianoId: 99999999999 }) { id } }'),
+  graph('recordings of a draft key with a NUL', 'technician', 'query ($k: String) { toneRecordings(where: { draftKey: $k }) { id } }', { k: NUL }),
+  graph('discard a recording that is not there', 'technician', 'mutation { discardToneRecording(input: { id: 987654 }) { id } }'),
+  graph('discard a recording with a negative id', 'technician', 'mutation { discardToneRecording(input: { id: -1 }) { id } }'),
   graph('a syntax error', 'manager', '{ pianos { id '),
   graph('an unknown field', 'manager', '{ pianos { id sellerName } }'),
   graph('variables of an array', 'manager', '{ me { id } }', [1] as never),

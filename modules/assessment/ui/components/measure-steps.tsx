@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { BASS_WINDING, FELT_LEFT, FELT_STATES, KEYTOP_DAMAGE, STEEL_CORROSION, TUNING_PINS } from '@/modules/assessment/core/measurements';
-import { newCrack, parseDecimal, type CrackDraft } from '@/modules/assessment/ui/intake-draft';
+import { fillFromRecording, newCrack, parseDecimal, type CrackDraft } from '@/modules/assessment/ui/intake-draft';
 import {
   BASS_WINDING_LABELS,
   FELT_LEFT_LABELS,
@@ -11,6 +11,7 @@ import {
   TUNING_PIN_LABELS,
 } from '@/modules/assessment/ui/measure-labels';
 import { cents } from '@/modules/tone/core/pitch';
+import { PlayTestRecordings } from '@/modules/tone/ui/components/play-test-recordings';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -285,6 +286,17 @@ export function PlayStep({ draft, update, errorAt }: StepProps) {
           onClear={() => set('tuningPins')(null)}
           error={errorAt(at('tuningPins'))}
           testID="choice-tuningPins"
+        />
+      </Card>
+      <Card testID="play-recording">
+        <Body variant="subheading">Measure from a recording</Body>
+        <Body variant="small" tone="secondary">
+          Feltwire measures the pitch and level of each note, shows where the keyboard is uneven, and can fill in the fields below. The recording joins the assessment when it is submitted.
+        </Body>
+        <PlayTestRecordings
+          draftKey={draft.draftKey}
+          onDraftRecordings={(ids) => update((d) => ({ ...d, recordingIds: ids }))}
+          onFill={(fill) => update((d) => ({ ...d, measurements: fillFromRecording(d.measurements, fill) }))}
         />
       </Card>
       <Card>

@@ -9,6 +9,10 @@ describe('roles', () => {
     ['floor', 'readSellerDetails', false],
     ['intake', 'readSellerDetails', true],
     ['floor', 'readPianos', true],
+    ['floor', 'recordTone', true],
+    ['technician', 'recordTone', true],
+    ['intake', 'readToneResults', true],
+    ['manager', 'readToneResults', true],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);
