@@ -27,8 +27,10 @@ const report = (ctx: ValidationContext | null, err: GraphQLError) => ctx?.report
 const armor = { propagateOnRejection: false, onReject: [report] };
 const depthRefusal = (message: string) => ({ propagateOnRejection: false, onReject: [(ctx: ValidationContext | null) => ctx?.reportError(limitError(message))] });
 
-function rowsOf(args: Record<string, unknown>, root: boolean): number {
+function rowsOf(args: Record<string, unknown>, root: boolean, declared: unknown): number {
   if (typeof args.limit === 'number') return Math.max(1, args.limit);
+  // A hand-written list that returns a bounded number of rows says so in its extensions.
+  if (typeof declared === 'number') return declared;
   const range = args.range;
   if (Array.isArray(range) && range.length === 2 && typeof range[0] === 'number' && typeof range[1] === 'number') return Math.max(1, range[1] - range[0] + 1);
   return root ? DEFAULT_PAGE_SIZE : NESTED_LIST_ROWS;
@@ -39,7 +41,7 @@ const estimateCost: ComplexityEstimator = ({ type, field, args, childComplexity 
   const root = type.name === 'Query' || type.name === 'Mutation';
   const base = root ? ROOT_FIELD_COST : 1;
   const introspection = type.name.startsWith('__') || field.name.startsWith('__');
-  if (!introspection && isListType(getNullableType(field.type)) && isCompositeType(getNamedType(field.type))) return base + rowsOf(args, root) * Math.max(1, childComplexity);
+  if (!introspection && isListType(getNullableType(field.type)) && isCompositeType(getNamedType(field.type))) return base + rowsOf(args, root, field.extensions?.maxRows) * Math.max(1, childComplexity);
   return base + childComplexity;
 };
 

@@ -2,7 +2,7 @@ import { GraphQLBoolean, GraphQLEnumType, GraphQLFloat, GraphQLInputObjectType, 
 
 import type { GraphDomain } from '@/server/graphql/domain';
 
-import { discardRecording, listRecordings } from './tone-service';
+import { discardRecording, listRecordings, MAX_RECORDINGS_LISTED } from './tone-service';
 
 const nn = <T extends GraphQLNullableType>(t: T) => new GraphQLNonNull(t);
 const list = <T extends GraphQLNullableType>(t: T) => nn(new GraphQLList(nn(t)));
@@ -119,8 +119,9 @@ export const toneGraph: GraphDomain = {
   queries: () => ({
     toneRecordings: {
       type: list(ToneRecordingType),
-      description: 'Play-test recordings with their notes and keyboard report, oldest first. Every staff role may read them.',
+      description: `The newest ${MAX_RECORDINGS_LISTED} play-test recordings with their notes and keyboard report, oldest first. Every staff role may read them.`,
       args: { where: { type: nn(RecordingsWhere) } },
+      extensions: { maxRows: MAX_RECORDINGS_LISTED },
       resolve: (_root, args: { where: { pianoId?: number | null; draftKey?: string | null } }, ctx) => listRecordings(ctx.photos, ctx.user, args.where),
     },
   }),

@@ -102,14 +102,17 @@ async function loadViews(store: PhotoStore, q: QueryBuilder<ToneRecording, ToneR
   return Promise.all(rows.map((r) => recordingView(store, r, rules.pitchRaiseCents)));
 }
 
-/** A piano's recordings, or your own recordings for an intake not yet submitted. Every staff role reads results. */
+/** How many recordings one list shows: the newest, enough to compare takes before and after the work. */
+export const MAX_RECORDINGS_LISTED = 12;
+
+/** A piano's newest recordings, or your own recordings for an intake not yet submitted. Every staff role reads results. */
 export async function listRecordings(store: PhotoStore, actor: Actor, where: { pianoId?: number | null; draftKey?: string | null }): Promise<RecordingView[]> {
   if (!can(actor.role, 'readToneResults')) throw notAllowed('read play-test results');
-  const q = ToneRecording.query();
-  if (where.pianoId != null) q.where('piano_id', where.pianoId);
-  else if (where.draftKey) q.where({ draft_key: where.draftKey, recorded_by_id: actor.id }).whereNull('piano_id');
+  const newest = ToneRecording.query().select('id').orderBy('id', 'desc').limit(MAX_RECORDINGS_LISTED);
+  if (where.pianoId != null) newest.where('piano_id', where.pianoId);
+  else if (where.draftKey) newest.where({ draft_key: where.draftKey, recorded_by_id: actor.id }).whereNull('piano_id');
   else throw badInput('pianoId', 'give a pianoId or a draftKey');
-  return loadViews(store, q);
+  return loadViews(store, ToneRecording.query().whereIn('id', newest));
 }
 
 /** Throws away one of your own draft recordings (a take gone wrong): the WAV and its results. */
