@@ -13,6 +13,7 @@ import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDe
 import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
+import { systemClock, type Clock } from './clock';
 import { toAppError, toGraphQLError } from './errors';
 import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
@@ -34,6 +35,16 @@ export interface AppDeps {
   /** The local inbox, when the mail fake runs (development and tests). */
   mailFake?: MailFake;
   webDir?: string;
+  /** The time business rules run on; tests move it on. */
+  clock?: Clock;
+}
+
+/** What the domains' services need, shared by the request handlers and the background jobs. */
+export function serviceDeps(deps: AppDeps): { disclosure: DisclosureDeps; deposits: DepositDeps } {
+  return {
+    disclosure: { photos: deps.photos, publicUrl: deps.publicUrl },
+    deposits: { ...deps.payments, publicUrl: deps.publicUrl, clock: deps.clock ?? systemClock },
+  };
 }
 
 const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api', '/dev'];
@@ -55,8 +66,7 @@ export function createApp(deps: AppDeps): express.Express {
   });
 
   app.use('/auth', authRouter(deps.auth));
-  const disclosure: DisclosureDeps = { photos: deps.photos, mailer: deps.mailer, publicUrl: deps.publicUrl };
-  const deposits: DepositDeps = { ...deps.payments, mailer: deps.mailer, publicUrl: deps.publicUrl };
+  const { disclosure, deposits } = serviceDeps(deps);
   // The signature is checked over the exact bytes received, so this route reads the raw body.
   app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));
