@@ -1,6 +1,7 @@
 import nodemailer from 'nodemailer';
 
 import type { QueuedMail } from '@/modules/jobs/core/job-kinds';
+import { JobFailure } from '@/modules/jobs/server/queue';
 
 export interface OutgoingMail {
   to: string;
@@ -37,13 +38,13 @@ export async function sendQueuedMail(mailer: Mailer, files: { get: (key: string)
       try {
         return { filename: a.filename, contentType: a.contentType, content: await files.get(a.objectKey) };
       } catch (err) {
-        throw new Error(`The attachment ${a.filename} could not be read from storage: ${(err as Error).message}`);
+        throw new JobFailure(`The attachment ${a.filename} could not be read from storage: ${(err as Error).message}`);
       }
     }),
   );
   try {
     await mailer.send({ to: mail.to, subject: mail.subject, text: mail.text, ...(attachments.length ? { attachments } : {}) });
   } catch (err) {
-    throw new Error(`The mail server did not take the e-mail to ${mail.to}: ${(err as Error).message}`);
+    throw new JobFailure(`The mail server did not take the e-mail to ${mail.to}: ${(err as Error).message}`);
   }
 }

@@ -9,13 +9,14 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure';
+export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure' | 'tendBackgroundWork';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure'],
   floor: ['readPianos'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure'],
+  // tendBackgroundWork: see the jobs that failed or stalled, and run one again.
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'tendBackgroundWork'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -8,7 +8,7 @@ import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type
 import { Acknowledgement, ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { disclosureByToken } from '@/modules/disclosure/server/disclosure-service';
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
-import { enqueue, removeJob } from '@/modules/jobs/server/queue';
+import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
 import type { JobRun } from '@/modules/jobs/server/worker';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
@@ -235,7 +235,7 @@ export async function refundDepositJob(deps: DepositDeps, depositId: number, not
       made.data.find((r) => r.metadata?.depositId === String(depositId) && r.status !== 'failed' && r.status !== 'canceled') ??
       (await deps.stripe.refunds.create({ payment_intent: deposit.paymentIntentId!, metadata: { depositId: String(depositId), reason: notice } }, { idempotencyKey: `refund-deposit-${depositId}-try-${run.attempt}` }));
   } catch (err) {
-    throw new Error(`The payment provider did not refund deposit #${depositId}: ${(err as Error).message}`);
+    throw new JobFailure(`The payment provider did not refund deposit #${depositId}: ${(err as Error).message}`);
   }
   await Deposit.transaction(async (trx) => {
     const d = await Deposit.query(trx).findById(depositId).forUpdate();

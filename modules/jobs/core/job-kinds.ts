@@ -19,7 +19,7 @@ export interface JobPayloads {
 export type JobTask = keyof JobPayloads;
 
 export const JOB_KINDS: Record<JobTask, { label: string; maxAttempts: number }> = {
-  // 12 tries with the queue's back-off (e^n seconds) span about 12 hours.
+  // With the queue's back-off (e^n seconds after the n-th failure, at most e^10) 12 tries span about 16 hours, 10 about 3.5.
   'refund-deposit': { label: 'Refund a deposit', maxAttempts: 12 },
   'send-email': { label: 'Send an e-mail', maxAttempts: 10 },
   'expire-hold': { label: 'End a hold that ran out', maxAttempts: 10 },
@@ -69,9 +69,26 @@ export function jobState(job: JobFacts, now: Date): JobState | null {
   return null;
 }
 
+/** A job as a manager reads it, on the server and on the screen. */
+export interface BackgroundJobView {
+  id: string;
+  task: string;
+  label: string;
+  about: string;
+  state: JobState;
+  stateText: string;
+  attempts: number;
+  maxAttempts: number;
+  lastError: string | null;
+  /** When the queue tries it next; null when it gave up or is running. */
+  nextTryAt: string | null;
+  startedAt: string | null;
+  createdAt: string;
+}
+
 export const JOB_STATE_TEXT: Record<JobState, string> = {
-  retrying: 'Failed, will try again',
-  gave_up: 'Gave up after its last try',
-  stuck: 'Started long ago and not finished',
+  retrying: 'Failed, trying again',
+  gave_up: 'Out of tries',
+  stuck: 'Stalled while running',
   late: 'Waiting past its time',
 };

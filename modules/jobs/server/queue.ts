@@ -7,6 +7,9 @@ import { JOB_KINDS, type JobPayloads, type JobTask } from '@/modules/jobs/core/j
 // Durable background work in PostgreSQL (graphile-worker): written in the transaction of the change
 // it follows, so it exists exactly when that change committed.
 
+/** A job's failure told in plain words; the manager's screen shows its message as it is. */
+export class JobFailure extends Error {}
+
 export interface EnqueueOptions {
   /** One job per key: enqueueing again replaces a job not yet started. */
   jobKey?: string;

@@ -1,9 +1,9 @@
-import { consoleLogFactory, Logger, run, type Runner, type Task, type TaskList } from 'graphile-worker';
+import { Logger, run, type Runner, type Task, type TaskList } from 'graphile-worker';
 import type { Knex } from 'knex';
 
 import { JOB_TASKS, type JobPayloads, type JobTask } from '@/modules/jobs/core/job-kinds';
 
-import { bringForward, queuePool, quietLogger } from './queue';
+import { bringForward, JobFailure, queuePool, quietLogger } from './queue';
 
 export interface JobRun {
   id: string;
@@ -30,10 +30,11 @@ export interface WorkerOptions {
   verbose?: boolean;
 }
 
-// Failures are logged in one line each: the manager's screen has the detail.
-const serverLogger = new Logger((scope) => {
-  const log = consoleLogFactory(scope);
-  return (level, message) => log(level, message.split('\n')[0]);
+// One line a job event, without the stack: the manager's screen has the detail.
+const serverLogger = new Logger(() => (level, message) => {
+  const line = `[feltwire] jobs: ${message.split('\n')[0].replace(/:$/, '')}`;
+  if (level === 'error' || level === 'warning') console.error(line);
+  else if (level === 'info') console.log(line);
 });
 
 /** Runs the job queue inside this process, on a small pool of its own so jobs never starve requests. */
@@ -44,7 +45,14 @@ export async function startJobWorker(opts: WorkerOptions): Promise<JobWorker> {
   const taskList: TaskList = {};
   for (const task of JOB_TASKS) {
     const handler = opts.handlers[task] as (payload: unknown, run: JobRun) => Promise<void>;
-    const wrapped: Task = (payload, helpers) => handler(payload, { id: String(helpers.job.id), attempt: helpers.job.attempts });
+    const wrapped: Task = async (payload, helpers) => {
+      try {
+        await handler(payload, { id: String(helpers.job.id), attempt: helpers.job.attempts });
+      } catch (err) {
+        if (err instanceof JobFailure) throw err;
+        throw new JobFailure(`Feltwire stopped on a problem of its own: ${(err as Error)?.message ?? String(err)}`);
+      }
+    };
     taskList[task] = wrapped;
   }
   const runner: Runner = await run({

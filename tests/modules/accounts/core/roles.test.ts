@@ -9,6 +9,9 @@ describe('roles', () => {
     ['floor', 'readSellerDetails', false],
     ['intake', 'readSellerDetails', true],
     ['floor', 'readPianos', true],
+    ['manager', 'tendBackgroundWork', true],
+    ['floor', 'tendBackgroundWork', false],
+    ['technician', 'tendBackgroundWork', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);
