@@ -79,12 +79,13 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
   const price = newest.content.askingPrice;
   if (!price) throw new AppError('CONFLICT', 'This piano has no asking price yet.');
 
+  // The n-th checkout of this acknowledgement: two presses at once send one key and get one session.
+  // Counted before the search for an open one, so a press that counts the other's row also finds it.
+  const tries = await Deposit.query().where('acknowledgement_id', ack.id).resultSize();
   // A second press, or the same buyer acknowledging again, reuses the open checkout.
   const reused = await openCheckout(deps, ack, piano.id, newest.id);
   if (reused) return reused;
   const { amountMinor, currency } = await publicDepositTerms(price);
-  // The n-th checkout of this acknowledgement: two presses at once send one key and get one session.
-  const tries = await Deposit.query().where('acknowledgement_id', ack.id).resultSize();
   const session = await deps.stripe.checkout.sessions.create(
     {
       mode: 'payment',

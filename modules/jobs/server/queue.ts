@@ -19,9 +19,9 @@ export interface EnqueueOptions {
   queueName?: string;
 }
 
-// E-mails to one address go out in the order they were written (a receipt before the release notice).
-function defaultQueue<T extends JobTask>(task: T, payload: JobPayloads[T]): string | null {
-  return task === 'send-email' ? `mail:${(payload as JobPayloads['send-email']).to}`.slice(0, 128) : null;
+// E-mails go out one at a time, in the order they were written (a receipt before the release notice).
+function defaultQueue(task: JobTask): string | null {
+  return task === 'send-email' ? 'mail' : null;
 }
 
 /** Adds a job inside `trx`; a rollback takes the job with it. */
@@ -29,7 +29,7 @@ export async function enqueue<T extends JobTask>(trx: Knex.Transaction, task: T,
   const runAt = opts.runAt == null ? null : new Date(opts.runAt).toISOString();
   const { rows } = await trx.raw(
     'select id from graphile_worker.add_job(identifier => ?, payload => ?::json, queue_name => ?::text, run_at => ?::timestamptz, max_attempts => ?::int, job_key => ?::text)',
-    [task, JSON.stringify(payload), opts.queueName ?? defaultQueue(task, payload), runAt, opts.maxAttempts ?? JOB_KINDS[task].maxAttempts, opts.jobKey ?? null],
+    [task, JSON.stringify(payload), opts.queueName ?? defaultQueue(task), runAt, opts.maxAttempts ?? JOB_KINDS[task].maxAttempts, opts.jobKey ?? null],
   );
   return String(rows[0].id);
 }
@@ -68,7 +68,10 @@ export function queuePool(knex: Knex, max: number): pg.Pool {
   const settings = (knex.client as { connectionSettings?: unknown }).connectionSettings;
   if (!settings || typeof settings !== 'object') throw new Error('the job queue needs the database connection settings of knex');
   const pool = new pg.Pool({ ...(settings as PoolConfig), max });
-  const lost = (err: Error) => console.error('[feltwire] job queue connection lost:', err.message);
+  // A connection cut while the pool closes is the close itself, not news.
+  const lost = (err: Error) => {
+    if (!pool.ending) console.error('[feltwire] job queue connection lost:', err.message);
+  };
   pool.on('error', lost);
   pool.on('connect', (client) => client.on('error', lost));
   return pool;

@@ -79,6 +79,8 @@ export async function startJobWorker(opts: WorkerOptions): Promise<JobWorker> {
   return {
     stop: async () => {
       await runner.stop();
+      // Every connection back before the pool closes (the LISTEN one is handed back last).
+      await runner.promise.catch(() => undefined);
       await pool.end();
     },
     runDue: async (upTo) => {
