@@ -120,7 +120,7 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
     .whereExists(knex('assessments').whereRaw('assessments.piano_id = pianos.id'))
     .select('id');
   for (const p of showing) {
-    await publishDisclosure({ photos: undefined as never, mailer: undefined as never, publicUrl: '' }, { id: staff.manager, role: 'manager' }, p.id);
+    await publishDisclosure({ photos: undefined as never, publicUrl: '' }, { id: staff.manager, role: 'manager' }, p.id);
   }
   if (!(await knex('climate_readings').first('id'))) {
     for (const [daysAgo, tempC, rh] of [[6, 20.5, 44], [4, 21, 47], [2, 19.5, 38], [0, 20, 45]]) {

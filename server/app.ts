@@ -11,6 +11,7 @@ import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDe
 import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, inboxGuard, requireUser, type AuthOptions } from './auth';
+import { systemClock, type Clock } from './clock';
 import { DEFAULT_LIMITS, type Limits } from './config';
 import { toGraphQLError } from './errors';
 import { securityHeaders } from './headers';
@@ -40,6 +41,16 @@ export interface AppDeps {
   photoOrigin?: string;
   /** Rate limits; the defaults when not given. */
   limits?: Limits;
+  /** The time business rules run on; tests move it on. */
+  clock?: Clock;
+}
+
+/** What the domains' services need, shared by the request handlers and the background jobs. */
+export function serviceDeps(deps: AppDeps): { disclosure: DisclosureDeps; deposits: DepositDeps } {
+  return {
+    disclosure: { photos: deps.photos, publicUrl: deps.publicUrl },
+    deposits: { ...deps.payments, publicUrl: deps.publicUrl, clock: deps.clock ?? systemClock },
+  };
 }
 
 const API_PREFIXES = ['/graphql', '/auth', '/healthz', '/api', '/dev'];
@@ -64,8 +75,7 @@ export function createApp(deps: AppDeps): express.Express {
   const limits = deps.limits ?? DEFAULT_LIMITS;
   const publicWrites = publicWriteLimit(limits.publicWrites);
   app.use('/auth', authRouter(deps.auth, limits.signIn));
-  const disclosure: DisclosureDeps = { photos: deps.photos, mailer: deps.mailer, publicUrl: deps.publicUrl };
-  const deposits: DepositDeps = { ...deps.payments, mailer: deps.mailer, publicUrl: deps.publicUrl };
+  const { disclosure, deposits } = serviceDeps(deps);
   // The signature is checked over the exact bytes received, so this route reads the raw body.
   app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));

@@ -16,6 +16,7 @@ export interface Config {
   host: string;
   port: number;
   databaseUrl: string;
+  databasePoolMax: number;
   jwtSecret: string;
   jwtTtlSeconds: number;
   webDir: string;
@@ -75,6 +76,8 @@ export function readConfig(env: NodeJS.ProcessEnv = process.env): Config {
     host: env.HOST ?? '127.0.0.1',
     port: Number(env.PORT ?? 8080),
     databaseUrl: need(env, 'DATABASE_URL'),
+    // Requests share this many connections; the job worker has a few of its own.
+    databasePoolMax: Number(env.DATABASE_POOL_MAX ?? 10),
     jwtSecret,
     jwtTtlSeconds: Number(env.JWT_TTL_SECONDS ?? 12 * 3600),
     webDir: env.WEB_DIR ?? path.resolve(__dirname, '../dist'),

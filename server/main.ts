@@ -1,13 +1,12 @@
 import { hashPassword } from '@/modules/accounts/server/user-service';
 import { DEMO_PASSWORD, DEMO_USERS, seedDemo } from '@/seeds/demo';
-
-import { createApp } from './app';
-import { readConfig } from './config';
-import { bindModels, createKnex, migrateLatest } from './db/knex';
-import { expireHolds } from '@/modules/deposits/server/deposit-service';
 import { createStripe } from '@/modules/deposits/server/payments';
 import { s3PhotoStore } from '@/modules/photos/server/photo-store';
 
+import { createApp, type AppDeps } from './app';
+import { readConfig } from './config';
+import { bindModels, createKnex, migrateLatest } from './db/knex';
+import { startAppJobs } from './job-tasks';
 import { smtpMailer } from './mail';
 import { startMailFake, type MailFake } from './mail-fake';
 import { createS3, ensureBucket } from './storage';
@@ -15,7 +14,7 @@ import { createS3, ensureBucket } from './storage';
 // Boots the product: migrate, seed the demo, check storage, serve the API and the web app.
 async function main(): Promise<void> {
   const config = readConfig();
-  const knex = createKnex(config.databaseUrl);
+  const knex = createKnex(config.databaseUrl, { min: 0, max: config.databasePoolMax });
   bindModels(knex);
   const applied = await migrateLatest(knex);
   if (applied.length) console.log(`[feltwire] migrations applied: ${applied.length}`);
@@ -33,7 +32,7 @@ async function main(): Promise<void> {
 
   const stripe = createStripe(config.payments.secretKey, config.payments.apiUrl);
   const payments = { stripe, webhookSecret: config.payments.webhookSecret };
-  const app = createApp({
+  const deps: AppDeps = {
     knex,
     payments,
     auth: { jwtSecret: config.jwtSecret, jwtTtlSeconds: config.jwtTtlSeconds },
@@ -44,7 +43,10 @@ async function main(): Promise<void> {
     webDir: config.webDir,
     limits: config.limits,
     photoOrigin: new URL(config.s3.endpoint).origin,
-  });
+  };
+  const app = createApp(deps);
+  // Refunds, e-mails and the end of holds run here, from the job queue in PostgreSQL.
+  const jobs = await startAppJobs(deps, { verbose: true });
   const server = app.listen(config.port, config.host, () => {
     const url = `http://${config.host}:${config.port}`;
     console.log(`\n  Feltwire is running at ${url}\n`);
@@ -53,16 +55,16 @@ async function main(): Promise<void> {
     for (const u of DEMO_USERS) console.log(`    ${u.role.padEnd(11)} ${u.email}`);
     console.log('\n  Press Ctrl-C to stop.\n');
   });
-  // Holds that ran out free their pianos, checked once a minute.
-  const sweep = setInterval(() => {
-    expireHolds({ ...payments, mailer, publicUrl: config.publicUrl }).catch((err) => console.error('[feltwire] expiring holds failed:', err));
-  }, 60_000);
-  (sweep as unknown as NodeJS.Timeout).unref();
   const stop = () => {
-    clearInterval(sweep);
     server.close();
-    void mailFake?.close();
-    void knex.destroy();
+    // Jobs in hand finish before the database goes away.
+    void jobs
+      .stop()
+      .catch((err) => console.error('[feltwire] stopping the job worker failed:', err))
+      .finally(() => {
+        void mailFake?.close();
+        void knex.destroy();
+      });
   };
   process.once('SIGINT', stop);
   process.once('SIGTERM', stop);

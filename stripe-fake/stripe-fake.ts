@@ -21,13 +21,31 @@ export interface StripeFakeOptions {
   retryDelaysMs?: number[];
 }
 
+/** A failure the stand-in answers instead of doing the call, in the provider's error shape. */
+export interface InjectedFailure {
+  status: number;
+  type: string;
+  message: string;
+  code?: string;
+}
+
+/** The provider's answer to a call that broke on its side: a 500 it asks the SDK not to retry under the same key. */
+export const PROVIDER_OUTAGE: InjectedFailure = { status: 500, type: 'api_error', message: 'An unknown error occurred while processing this request.' };
+
 export interface StripeFake {
   port: number;
   url: string;
   sessions: Map<string, Obj>;
+  /** Every refund made, by id. */
+  refunds: Map<string, Obj>;
   deliveries: { eventId: string; type: string; attempts: number; lastStatus: number | string }[];
   /** Points webhook deliveries at an endpoint (tests start their server after the fake). */
   setWebhook: (url: string, secret: string) => void;
+  /** Holds webhook deliveries back until `resumeWebhooks`, which sends every held one at once. */
+  pauseWebhooks: () => void;
+  resumeWebhooks: () => void;
+  /** The next `count` calls to `POST /v1/<endpoint>` fail with `failure` (the provider's error shape). */
+  failNext: (endpoint: 'refunds' | 'checkout/sessions', count: number, failure?: InjectedFailure) => void;
   /** Resolves when every webhook delivery started so far has finished (tests wait on it). */
   idle: () => Promise<void>;
   close: () => Promise<void>;
@@ -62,6 +80,8 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
   const deliveries: StripeFake['deliveries'] = [];
   const pending = new Set<Promise<void>>();
   const retryDelays = opts.retryDelaysMs ?? [500, 1000, 2000, 4000];
+  const failures = new Map<string, { count: number; failure: InjectedFailure }>();
+  let paused: { promise: Promise<void>; release: () => void } | null = null;
   let baseUrl = '';
 
   function sign(payload: string, secret: string): string {
@@ -73,6 +93,7 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     if (!opts.webhookUrl || !opts.webhookSecret) return;
     const record = { eventId: event.id as string, type: event.type as string, attempts: 0, lastStatus: '' as number | string };
     deliveries.unshift(record);
+    if (paused) await paused.promise;
     const payload = JSON.stringify(event, null, 2);
     for (let attempt = 0; attempt <= retryDelays.length; attempt += 1) {
       if (attempt > 0) await new Promise((r) => setTimeout(r, retryDelays[attempt - 1]));
@@ -112,6 +133,7 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     if (!key) return next();
     const seen = idempotent.get(`${req.path}:${key}`);
     if (seen) {
+      if (seen.status >= 500) res.set('Stripe-Should-Retry', 'false');
       res.status(seen.status).set('Idempotent-Replayed', 'true').json(seen.body);
       return;
     }
@@ -121,6 +143,15 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
       return json(body);
     };
     next();
+  });
+  // An injected failure stands for an outage inside the provider: like its real 500s, the answer is
+  // kept under the idempotency key (the middleware above), so only a fresh key tries again.
+  api.use((req, res, next) => {
+    const armed = req.method === 'POST' ? failures.get(req.path.slice(1)) : undefined;
+    if (!armed || armed.count < 1) return next();
+    armed.count -= 1;
+    const { status, type, message, code } = armed.failure;
+    res.status(status).set('Stripe-Should-Retry', 'false').json({ error: { type, message, ...(code ? { code } : {}) } });
   });
 
   api.post('/checkout/sessions', (req, res) => {
@@ -189,6 +220,11 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     refunds.set(refund.id as string, refund);
     emit('charge.refunded', { id: pi.latest_charge, object: 'charge', amount: pi.amount, amount_refunded: pi.amount_refunded, currency: pi.currency, payment_intent: pi.id, refunded: pi.amount_refunded === pi.amount, metadata: pi.metadata });
     res.json(refund);
+  });
+  api.get('/refunds', (req, res) => {
+    const pi = req.query.payment_intent;
+    const data = [...refunds.values()].filter((r) => pi == null || r.payment_intent === pi).reverse();
+    res.json({ object: 'list', data: data.slice(0, 100), has_more: data.length > 100, url: '/v1/refunds' });
   });
   api.get('/events/:id', (req, res) => {
     const e = events.get(String(req.params.id));
@@ -267,10 +303,24 @@ export async function startStripeFake(opts: StripeFakeOptions): Promise<StripeFa
     port,
     url: baseUrl,
     sessions,
+    refunds,
     deliveries,
     setWebhook: (url, secret) => {
       opts.webhookUrl = url;
       opts.webhookSecret = secret;
+    },
+    pauseWebhooks: () => {
+      if (paused) return;
+      let release = () => undefined as void;
+      const promise = new Promise<void>((resolve) => (release = resolve));
+      paused = { promise, release };
+    },
+    resumeWebhooks: () => {
+      paused?.release();
+      paused = null;
+    },
+    failNext: (endpoint, count, failure = PROVIDER_OUTAGE) => {
+      failures.set(endpoint, { count, failure });
     },
     idle: async () => {
       while (pending.size) await Promise.all([...pending]);

@@ -3,7 +3,7 @@ import pdfParse from 'pdf-parse/lib/pdf-parse.js';
 
 import { sha256Hex } from '@/modules/disclosure/server/digest';
 
-import { startTestApi, type TestApi } from '../support/api';
+import { postGql, startTestApi, type TestApi } from '../support/api';
 import { buildIntake, buildMeasurements } from '../support/builders';
 
 let api: TestApi;
@@ -123,6 +123,8 @@ describe('a published disclosure', () => {
     const again = await api.gql(await api.tokenFor('floor'), `mutation { countersign(acknowledgementId: ${ack.body.acknowledgementId}) }`);
     expect(again.body.errors[0].extensions.code).toBe('CONFLICT');
 
+    // The e-mail is a job, queued with the signature.
+    await api.jobs.settle();
     expect(api.mail.messages).toHaveLength(1);
     const mail = api.mail.messages[0];
     expect(mail.to).toEqual(['ada@example.test']);
@@ -145,6 +147,25 @@ describe('a published disclosure', () => {
     expect(staff.status).toBe(200);
     const list = (await call('floor', `{ acknowledgements(pianoId: ${pianoId}) }`)).acknowledgements;
     expect(list[0]).toMatchObject({ buyerName: 'Ada Brightwell', buyerEmail: 'ada@example.test', countersignedBy: 'Fern Adeyemi-Holt', hasPdf: true });
+  });
+
+  it('two staff countersigning one acknowledgement at once: one signs, the other is refused, one PDF, one e-mail', async () => {
+    const base = await api.listen();
+    const current = (await api.http.get(`/api/public/disclosures/${token}`)).body;
+    const ack = await api.http.post(`/api/public/disclosures/${token}/acknowledge`).send({ fullName: 'Bram Oyelaran', email: 'bram@example.test', read: true, digest: current.digest });
+    const q = `mutation { countersign(acknowledgementId: ${ack.body.acknowledgementId}) }`;
+    const [a, b] = await Promise.all([postGql(base, await api.tokenFor('floor'), q), postGql(base, await api.tokenFor('manager'), q)]);
+    const won = [a, b].filter((r) => !r.errors);
+    expect(won).toHaveLength(1);
+    const lost = [a, b].find((r) => r.errors)!;
+    expect(lost.errors![0]).toMatchObject({ message: 'This acknowledgement is already countersigned.', extensions: { code: 'CONFLICT' } });
+    const row = await api.knex('acknowledgements').where({ id: ack.body.acknowledgementId }).first();
+    expect(row.countersigned_by_id).toBe((await api.knex('users').where({ name: won[0].data.countersign.countersignedBy }).first()).id);
+    const pdfs = (await api.objectKeys()).filter((k) => k.startsWith(`disclosures/${pianoId}/signed-${ack.body.acknowledgementId}-`));
+    expect(pdfs).toEqual([row.pdf_key]);
+    // Every job done, one e-mail went out: one e-mail job was queued.
+    await api.jobs.settle();
+    expect(api.mail.messages.filter((m) => m.to.includes('bram@example.test'))).toHaveLength(1);
   });
 
   it('prints a floor tag with the stock number, the price and the link', async () => {

@@ -4,7 +4,7 @@ import { equilibriumMoistureContent, fahrenheit } from '@/modules/shop/core/clim
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { demoRateCard } from '@/modules/shop/core/rate-card';
 
-import { startTestApi, type TestApi } from '../support/api';
+import { postGql, startTestApi, type TestApi } from '../support/api';
 import { buildIntake, buildMeasurements } from '../support/builders';
 
 let api: TestApi;
@@ -237,5 +237,38 @@ describe('workshop climate', () => {
     const hot = await refused('technician', 'mutation($r: JSON!) { logClimate(reading: $r) }', { r: { tempC: 60, relativeHumidity: 55 } });
     expect(hot.extensions.field).toBe('tempC');
     expect((await call('manager', '{ climateReadings }')).climateReadings).toHaveLength(seeded + 2);
+  });
+});
+
+describe('two technicians at one unassigned item', () => {
+  it('start their timers at the same moment: one takes the item, the other is told who did, and no timer is left behind', async () => {
+    const base = await api.listen();
+    const pianoId = await assessedPiano();
+    await call('manager', `mutation { decidePiano(pianoId: ${pianoId}, decision: "recondition") }`);
+    await call('manager', `mutation { approvePlan(pianoId: ${pianoId}) { stage } }`);
+    const item = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan.items.find((i: Json) => i.assignedToId == null);
+    await call('manager', 'mutation { createUser(email: "wren@feltwire.test", name: "Wren Tallowmere", role: "technician", password: "a-long-password") { id } }');
+    const wren = (await api.http.post('/auth/login').send({ email: 'wren@feltwire.test', password: 'a-long-password' })).body.token as string;
+    const tomas = await api.tokenFor('technician');
+    const ids = Object.fromEntries((await api.knex('users').whereIn('email', ['tech@feltwire.test', 'wren@feltwire.test'])).map((u) => [u.id, u.name]));
+
+    const start = `mutation { startTimer(itemId: ${item.id}) }`;
+    const answers = await Promise.all([postGql(base, tomas, start), postGql(base, wren, start)]);
+    expect(answers.filter((a) => !a.errors)).toHaveLength(1);
+    const loser = answers.find((a) => a.errors)!;
+    const entries = await api.knex('time_entries').where({ work_item_id: item.id });
+    expect(entries).toHaveLength(1);
+    const winnerId = entries[0].technician_id as number;
+    const winnerName = ids[winnerId];
+    expect((await api.knex('work_items').where({ id: item.id }).first()).assigned_to_id).toBe(winnerId);
+    expect(loser.errors![0].extensions.code).toBe('CONFLICT');
+    expect(loser.errors![0].message).toBe(`${winnerName} has taken this item: ask a manager to assign it to you.`);
+
+    // The winner stops their timer; the loser's bench is free: no timer of theirs runs anywhere.
+    const winnerToken = winnerName === 'Tomas Reyval' ? tomas : wren;
+    const loserId = Number(Object.keys(ids).find((id) => Number(id) !== winnerId));
+    const stopped = await postGql(base, winnerToken, `mutation { stopTimer(itemId: ${item.id}) }`);
+    expect(stopped.errors).toBeUndefined();
+    expect(await api.knex('time_entries').where({ technician_id: loserId }).whereNull('ended_at').whereNull('minutes')).toEqual([]);
   });
 });

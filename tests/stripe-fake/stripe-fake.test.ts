@@ -83,3 +83,28 @@ describe('webhook deliveries', () => {
     answers.length = 0;
   });
 });
+
+describe('failures on request', () => {
+  let fake: StripeFake;
+  beforeAll(async () => {
+    fake = await startStripeFake({ port: 0 });
+  });
+  afterAll(() => fake.close());
+
+  it('fails the next refund in the provider’s error shape, keeps that answer under its key, then refunds', async () => {
+    const stripe = new Stripe('sk_test_x', { host: '127.0.0.1', port: fake.port, protocol: 'http', maxNetworkRetries: 2 });
+    const session = await stripe.checkout.sessions.create({ mode: 'payment', success_url: 'http://x.test/ok', cancel_url: 'http://x.test/no', line_items: [{ quantity: 1, price_data: { currency: 'usd', unit_amount: 25000, product_data: { name: 'Deposit' } } }] });
+    await fetch(`${fake.url}/checkout/${session.id}/pay`, { method: 'POST', redirect: 'manual', headers: { 'Content-Type': 'application/x-www-form-urlencoded' }, body: new URLSearchParams({ card: '4242424242424242', exp: '12/30', cvc: '123' }) });
+    const pi = String(fake.sessions.get(session.id)!.payment_intent);
+    fake.failNext('refunds', 1);
+    // The provider asks the SDK not to retry its 500s, so one call is one attempt.
+    await expect(stripe.refunds.create({ payment_intent: pi }, { idempotencyKey: 'refund-a' })).rejects.toMatchObject({ type: 'StripeAPIError', statusCode: 500, message: 'An unknown error occurred while processing this request.' });
+    await expect(stripe.refunds.create({ payment_intent: pi }, { idempotencyKey: 'refund-a' })).rejects.toMatchObject({ statusCode: 500 });
+    expect(fake.refunds.size).toBe(0);
+    const refund = await stripe.refunds.create({ payment_intent: pi }, { idempotencyKey: 'refund-b' });
+    expect(refund).toMatchObject({ amount: 25000, payment_intent: pi, status: 'succeeded' });
+    expect((await stripe.refunds.list({ payment_intent: pi })).data.map((r) => r.id)).toEqual([refund.id]);
+    await fake.idle();
+  });
+});
+

@@ -11,11 +11,14 @@ import { s3PhotoStore, type PhotoStore } from '@/modules/photos/server/photo-sto
 import { createApp } from '@/server/app';
 import type { Limits } from '@/server/config';
 import { createStripe } from '@/modules/deposits/server/payments';
+import type { JobWorker } from '@/modules/jobs/server/worker';
+import { startAppJobs } from '@/server/job-tasks';
 import { smtpMailer } from '@/server/mail';
 import { startStripeFake, type StripeFake } from '@/stripe-fake/stripe-fake';
 import { startMailFake, type MailFake } from '@/server/mail-fake';
 import { createS3, ensureBucket } from '@/server/storage';
 
+import { testClock, type TestClock } from './clock';
 import { createTestDatabase } from './test-db';
 
 export const TEST_AUTH = { jwtSecret: 'test-secret-that-is-long-enough-0123456789', jwtTtlSeconds: 3600 };
@@ -28,6 +31,12 @@ export interface TestApi {
   mail: MailFake;
   stripeFake: StripeFake;
   webhookSecret: string;
+  /** The clock the services and jobs run on. */
+  clock: TestClock;
+  /** The job worker running in this test's server: `settle()` waits for the jobs due now. */
+  jobs: JobWorker;
+  /** Moves the clock on and runs every job that came due meanwhile. */
+  advance: (ms: number) => Promise<void>;
   /** Serves the app on a loopback port and points the payment stand-in's webhooks at it. */
   listen: () => Promise<string>;
   /** Every object key in this file's bucket. */
@@ -37,6 +46,12 @@ export interface TestApi {
   tokenFor: (role: Role) => Promise<string>;
   gql: (token: string, query: string, variables?: Record<string, unknown>) => Promise<request.Response>;
   close: () => Promise<void>;
+}
+
+/** A GraphQL call over real HTTP to a listening server (races need two requests truly in flight). */
+export async function postGql(base: string, token: string, query: string, variables?: Record<string, unknown>): Promise<{ data?: any; errors?: { message: string; extensions: { code: string } }[] }> {
+  const res = await fetch(`${base}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query, variables }) });
+  return (await res.json()) as never;
 }
 
 /** An app on a fresh database seeded with the demo scenario, and helpers to sign in and query. */
@@ -54,7 +69,11 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
   const stripeFake = await startStripeFake({ port: 0, retryDelaysMs: [50, 100, 200] });
   const webhookSecret = `whsec_test_${randomBytes(12).toString('hex')}`;
   const payments = { stripe: createStripe('sk_test_feltwire', stripeFake.url), webhookSecret };
-  const app = createApp({ knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test', limits: options.limits, photoOrigin: new URL(s3Endpoint).origin });
+  const clock = testClock();
+  const deps = { knex: db.knex, auth: TEST_AUTH, photos, mailer, mailFake: mail, payments, publicUrl: 'http://feltwire.test', clock, limits: options.limits, photoOrigin: new URL(s3Endpoint).origin };
+  const app = createApp(deps);
+  // Real jobs, as in the server: API tests see refunds and e-mails made by them.
+  const jobs = await startAppJobs(deps);
   let server: import('node:http').Server | undefined;
   const http = request(app);
   const tokens = new Map<Role, string>();
@@ -66,7 +85,11 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
     mail,
     stripeFake,
     webhookSecret,
+    clock,
+    jobs,
+    advance: (ms) => jobs.runDue(clock.advance(ms)),
     listen: async () => {
+      if (server) return `http://127.0.0.1:${(server.address() as import('node:net').AddressInfo).port}`;
       server = await new Promise((resolve) => {
         const s = app.listen(0, '127.0.0.1', () => resolve(s));
       });
@@ -90,6 +113,7 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
     gql: (token, query, variables) =>
       request(app).post('/graphql').set('Authorization', `Bearer ${token}`).send({ query, variables }),
     close: async () => {
+      await jobs.stop();
       s3.destroy();
       await mail.close();
       await stripeFake.idle();

@@ -22,13 +22,15 @@ export type Ability =
   | 'recordTone'
   | 'readToneResults'
   // The local demo inbox of e-mails the server sent (development and tests only).
-  | 'readDemoInbox';
+  | 'readDemoInbox'
+  // See the jobs that failed or stalled, and run one again.
+  | 'tendBackgroundWork';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults'],
   floor: ['readPianos', 'recordTone', 'readToneResults'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -22,7 +22,7 @@ export const depositsGraph: GraphDomain = {
       resolve: async (_r, a: { depositId: number; refund: boolean; why?: string }, ctx) => asJson(await releaseHold(ctx.deposits, ctx.user, a.depositId, a.refund, a.why)),
     },
     refundDeposit: { type: json, args: { depositId: int }, resolve: async (_r, a: { depositId: number }, ctx) => asJson(await refundDeposit(ctx.deposits, ctx.user, a.depositId)) },
-    recordSale: { type: json, args: { pianoId: int }, resolve: (_r, a: { pianoId: number }, ctx) => recordSale(ctx.user, a.pianoId) },
+    recordSale: { type: json, args: { pianoId: int }, resolve: (_r, a: { pianoId: number }, ctx) => recordSale(ctx.deposits, ctx.user, a.pianoId) },
     setDepositRules: { type: json, args: { rules: { type: json } }, resolve: (_r, a: { rules: unknown }, ctx) => setDepositRules(ctx.user, a.rules) },
   }),
 };

@@ -1,6 +1,6 @@
 import { BaseModel } from '@/server/db/base-model';
 
-export type DepositStatus = 'pending' | 'holding' | 'applied' | 'released' | 'expired' | 'refunded' | 'cancelled';
+export type DepositStatus = 'pending' | 'holding' | 'applied' | 'released' | 'expired' | 'refunding' | 'refunded' | 'cancelled';
 
 export class Deposit extends BaseModel {
   static tableName = 'deposits';

@@ -1,4 +1,5 @@
 import type { Knex } from 'knex';
+import { UniqueViolationError } from 'objection';
 import type Stripe from 'stripe';
 
 import type { Actor } from '@/modules/accounts/server/user-service';
@@ -6,27 +7,35 @@ import { User } from '@/modules/accounts/server/user-model';
 import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
 import { Acknowledgement, ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { disclosureByToken } from '@/modules/disclosure/server/disclosure-service';
+import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
+import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
+import type { JobRun } from '@/modules/jobs/server/worker';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
+import type { Clock } from '@/server/clock';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
-import type { Mailer } from '@/server/mail';
 
 import { Deposit, PaymentEvent } from './deposit-models';
 
 export interface DepositDeps {
   stripe: Stripe;
-  mailer: Mailer;
   publicUrl: string;
   webhookSecret: string;
+  clock: Clock;
 }
 
 const DAY = 86_400_000;
+// How far a webhook's signed time may stand from ours, either way (the provider's default).
+const WEBHOOK_TOLERANCE_S = 300;
+// A hold's end job that wakes this little before the end still ends it (clocks differ slightly).
+const EXPIRY_GRACE_MS = 5_000;
 const pianoName = (p: Piano) => [p.maker, p.model].filter(Boolean).join(' ');
 const money = (minor: number, currency: string) => formatMoney(minor, currency as Currency);
+const expiryKey = (depositId: number) => `expire-hold:${depositId}`;
 
-export async function depositRules(): Promise<DepositRules> {
-  const row = await ShopSetting.query().findById('depositRules');
+export async function depositRules(trx?: Knex.Transaction): Promise<DepositRules> {
+  const row = await ShopSetting.query(trx).findById('depositRules');
   return { ...defaultDepositRules, ...((row?.value as Partial<DepositRules>) ?? {}) };
 }
 
@@ -44,6 +53,19 @@ export async function publicDepositTerms(price: { minor: number; currency: strin
   return { amountMinor: depositAmount(price.minor, currency, rules), currency, holdDays: rules.holdDays };
 }
 
+/** The buyer's open checkout for this piano and version, started from this acknowledgement or by the same e-mail. */
+async function openCheckout(deps: DepositDeps, ack: Acknowledgement, pianoId: number, disclosureId: number): Promise<{ url: string; amountMinor: number; currency: string } | null> {
+  const open = await Deposit.query()
+    .where({ piano_id: pianoId, disclosure_id: disclosureId, status: 'pending' })
+    .where((q) => q.where('acknowledgement_id', ack.id).orWhereRaw('lower(buyer_email) = lower(?)', [ack.buyerEmail]))
+    .orderBy('id', 'desc');
+  for (const d of open) {
+    const session = await deps.stripe.checkout.sessions.retrieve(d.checkoutSessionId);
+    if (session.status === 'open' && session.url) return { url: session.url, amountMinor: d.amountMinor, currency: d.currency };
+  }
+  return null;
+}
+
 /** A buyer who acknowledged the current disclosure version starts a checkout for the deposit. */
 export async function startDeposit(deps: DepositDeps, token: string, raw: unknown): Promise<{ url: string; amountMinor: number; currency: string }> {
   const { link, newest } = await disclosureByToken(token);
@@ -57,12 +79,12 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
   const price = newest.content.askingPrice;
   if (!price) throw new AppError('CONFLICT', 'This piano has no asking price yet.');
 
-  // A second press reuses the open checkout instead of starting another.
-  const open = await Deposit.query().findOne({ acknowledgement_id: ack.id, status: 'pending' });
-  if (open) {
-    const session = await deps.stripe.checkout.sessions.retrieve(open.checkoutSessionId);
-    if (session.status === 'open' && session.url) return { url: session.url, amountMinor: open.amountMinor, currency: open.currency };
-  }
+  // The n-th checkout of this acknowledgement: two presses at once send one key and get one session.
+  // Counted before the search for an open one, so a press that counts the other's row also finds it.
+  const tries = await Deposit.query().where('acknowledgement_id', ack.id).resultSize();
+  // A second press, or the same buyer acknowledging again, reuses the open checkout.
+  const reused = await openCheckout(deps, ack, piano.id, newest.id);
+  if (reused) return reused;
   const { amountMinor, currency } = await publicDepositTerms(price);
   const session = await deps.stripe.checkout.sessions.create(
     {
@@ -73,93 +95,122 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
       cancel_url: `${deps.publicUrl}/d/${token}`,
       metadata: { pianoId: String(piano.id), stockNumber: piano.stockNumber, disclosureVersion: String(newest.version), disclosureDigest: newest.digest, acknowledgementId: String(ack.id) },
     },
-    { idempotencyKey: `deposit-ack-${ack.id}-${Date.now()}` },
+    { idempotencyKey: `deposit-checkout-ack-${ack.id}-${tries + 1}` },
   );
-  await Deposit.query().insert({
-    pianoId: piano.id,
-    disclosureId: newest.id,
-    acknowledgementId: ack.id,
-    disclosureDigest: newest.digest,
-    buyerName: ack.buyerName,
-    buyerEmail: ack.buyerEmail,
-    amountMinor,
-    currency,
-    checkoutSessionId: session.id,
-  });
+  try {
+    await Deposit.query().insert({
+      pianoId: piano.id,
+      disclosureId: newest.id,
+      acknowledgementId: ack.id,
+      disclosureDigest: newest.digest,
+      buyerName: ack.buyerName,
+      buyerEmail: ack.buyerEmail,
+      amountMinor,
+      currency,
+      checkoutSessionId: session.id,
+    });
+  } catch (err) {
+    // The other press recorded this very session first.
+    if (!(err instanceof UniqueViolationError)) throw err;
+  }
   return { url: session.url!, amountMinor, currency };
 }
 
-type Outcome = { kind: 'held' | 'refund' | 'none'; deposit?: Deposit; piano?: Piano };
-
-async function onCompleted(trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<Outcome> {
-  const deposit = await Deposit.query(trx).findOne({ checkout_session_id: session.id }).forUpdate();
-  if (!deposit || deposit.status !== 'pending' || session.payment_status !== 'paid') return { kind: 'none' };
-  // The piano's row lock makes two payments for one piano take turns: the first holds it.
-  const piano = (await Piano.query(trx).findById(deposit.pianoId).forUpdate())!;
-  const paid = { paymentIntentId: String(session.payment_intent), paidAt: new Date().toISOString() };
-  const holding = await Deposit.query(trx).findOne({ piano_id: piano.id, status: 'holding' });
-  if (piano.stage !== 'on_floor' || holding) {
-    const refunded = await deposit.$query(trx).patchAndFetch({ ...paid, status: 'refunded', closedAt: paid.paidAt, closeReason: 'The piano was already held for another buyer.' });
-    return { kind: 'refund', deposit: refunded, piano };
-  }
-  const rules = await depositRules();
-  const held = await deposit.$query(trx).patchAndFetch({ ...paid, status: 'holding', holdExpiresAt: new Date(Date.now() + rules.holdDays * DAY).toISOString() });
-  const moved = await movePiano({ pianoId: piano.id, action: 'hold', by: 'system', userId: null, why: `Deposit ${money(held.amountMinor, held.currency)} paid by ${held.buyerName}` }, trx);
-  return { kind: 'held', deposit: held, piano: moved };
+async function staffEmails(trx: Knex.Transaction): Promise<string[]> {
+  return (await User.query(trx).whereIn('role', ['floor', 'manager']).where('active', true)).map((u) => u.email);
 }
 
-async function staffEmails(): Promise<string[]> {
-  return (await User.query().whereIn('role', ['floor', 'manager']).where('active', true)).map((u) => u.email);
-}
-
-async function afterCompleted(deps: DepositDeps, outcome: Outcome): Promise<void> {
-  const { deposit, piano } = outcome;
-  if (!deposit || !piano) return;
-  if (outcome.kind === 'refund') {
-    const refund = await deps.stripe.refunds.create({ payment_intent: deposit.paymentIntentId!, metadata: { depositId: String(deposit.id), reason: 'already held' } }, { idempotencyKey: `refund-deposit-${deposit.id}` });
-    await deposit.$query().patch({ refundId: refund.id, refundedMinor: refund.amount });
-    await deps.mailer.send({
-      to: deposit.buyerEmail,
-      subject: `Your deposit for ${piano.stockNumber} has been refunded`,
-      text: `Dear ${deposit.buyerName},\n\nAnother buyer's deposit for the ${pianoName(piano)} (stock number ${piano.stockNumber}) reached us moments before yours, so the piano is held for them. We have refunded your deposit of ${money(deposit.amountMinor, deposit.currency)} in full; your card provider shows it within a few days.\n\nWe are sorry for the disappointment. Ask us about similar pianos on the floor.\n`,
-    });
-    return;
-  }
-  const b = balanceDue(piano.askingPriceMinor!, deposit.amountMinor, deposit.currency as Currency, await depositRules());
+function receiptMail(deposit: Deposit, piano: Piano, rules: DepositRules): QueuedMail {
+  const b = balanceDue(piano.askingPriceMinor!, deposit.amountMinor, deposit.currency as Currency, rules);
   const until = deposit.holdExpiresAt!.slice(0, 10);
-  await deps.mailer.send({
+  return {
     to: deposit.buyerEmail,
     subject: `Receipt: deposit to hold ${piano.stockNumber}`,
     text:
       `Dear ${deposit.buyerName},\n\nWe received your deposit of ${money(deposit.amountMinor, deposit.currency)} for the ${pianoName(piano)} (stock number ${piano.stockNumber}). ` +
       `The piano is held for you until ${until}.\n\nPrice ${money(b.priceMinor, b.currency)}\nSales tax (${b.salesTaxPct} %) ${money(b.taxMinor, b.currency)}\nDeposit paid -${money(b.depositMinor, b.currency)}\nBalance due at sale ${money(b.balanceMinor, b.currency)}\n\n` +
       `Your deposit refers to version ${deposit.disclosureDigest.slice(0, 12)}… of the condition disclosure you acknowledged. The deposit terms are the dealer's template, adapted to local law.\n`,
-  });
-  const staff = await staffEmails();
+  };
+}
+
+function refundMail(notice: RefundNotice, deposit: Deposit, piano: Piano): QueuedMail {
+  const amount = money(deposit.amountMinor, deposit.currency);
+  const what = `the ${pianoName(piano)} (stock number ${piano.stockNumber})`;
+  if (notice === 'lost_race') {
+    return {
+      to: deposit.buyerEmail,
+      subject: `Your deposit for ${piano.stockNumber} has been refunded`,
+      text: `Dear ${deposit.buyerName},\n\nAnother buyer's deposit for ${what} reached us moments before yours, so the piano is held for them. We have refunded your deposit of ${amount} in full; your card provider shows it within a few days.\n\nWe are sorry for the disappointment. Ask us about similar pianos on the floor.\n`,
+    };
+  }
+  if (notice === 'released') {
+    return { to: deposit.buyerEmail, subject: 'Your piano hold has been released', text: `Dear ${deposit.buyerName},\n\nThe hold on your piano has been released. Your deposit of ${amount} has been refunded.\n` };
+  }
+  return { to: deposit.buyerEmail, subject: `Your deposit for ${piano.stockNumber} has been refunded`, text: `Dear ${deposit.buyerName},\n\nWe have refunded your deposit of ${amount} for ${what}; your card provider shows it within a few days.\n` };
+}
+
+/** Marks a paid deposit as refunding and queues its refund, in the caller's transaction. */
+async function requestRefund(trx: Knex.Transaction, deposit: Deposit, notice: RefundNotice, patch: Partial<Deposit>): Promise<Deposit> {
+  const refunding = await deposit.$query(trx).patchAndFetch({ ...patch, status: 'refunding' });
+  await enqueue(trx, 'refund-deposit', { depositId: deposit.id, notice }, { jobKey: `refund-deposit:${deposit.id}` });
+  return refunding;
+}
+
+async function onCompleted(deps: DepositDeps, trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<void> {
+  const deposit = await Deposit.query(trx).findOne({ checkout_session_id: session.id }).forUpdate();
+  if (!deposit || deposit.status !== 'pending' || session.payment_status !== 'paid') return;
+  // The piano's row lock makes two payments for one piano take turns: the first holds it.
+  const piano = (await Piano.query(trx).findById(deposit.pianoId).forUpdate())!;
+  const now = deps.clock.now();
+  const paid = { paymentIntentId: String(session.payment_intent), paidAt: now.toISOString() };
+  const holding = await Deposit.query(trx).findOne({ piano_id: piano.id, status: 'holding' });
+  if (piano.stage !== 'on_floor' || holding) {
+    await requestRefund(trx, deposit, 'lost_race', { ...paid, closedAt: paid.paidAt, closeReason: 'The piano was already held for another buyer.' });
+    return;
+  }
+  const rules = await depositRules(trx);
+  const held = await deposit.$query(trx).patchAndFetch({ ...paid, status: 'holding', holdExpiresAt: new Date(now.getTime() + rules.holdDays * DAY).toISOString() });
+  const moved = await movePiano({ pianoId: piano.id, action: 'hold', by: 'system', userId: null, why: `Deposit ${money(held.amountMinor, held.currency)} paid by ${held.buyerName}` }, trx);
+  await enqueue(trx, 'expire-hold', { depositId: held.id }, { jobKey: expiryKey(held.id), runAt: held.holdExpiresAt! });
+  await enqueue(trx, 'send-email', receiptMail(held, moved, rules));
+  const staff = await staffEmails(trx);
   if (staff.length) {
-    await deps.mailer.send({
+    await enqueue(trx, 'send-email', {
       to: staff.join(', '),
-      subject: `Held: ${piano.stockNumber} for ${deposit.buyerName}`,
-      text: `${piano.stockNumber} (${pianoName(piano)}) is held for ${deposit.buyerName} <${deposit.buyerEmail}> until ${until}: deposit ${money(deposit.amountMinor, deposit.currency)} paid online. Take its floor tag down or mark it held.\n`,
+      subject: `Held: ${moved.stockNumber} for ${held.buyerName}`,
+      text: `${moved.stockNumber} (${pianoName(moved)}) is held for ${held.buyerName} <${held.buyerEmail}> until ${held.holdExpiresAt!.slice(0, 10)}: deposit ${money(held.amountMinor, held.currency)} paid online. Take its floor tag down or mark it held.\n`,
     });
   }
 }
 
-/** The payment provider's webhook: signature checked on the raw body, each event acted on once. */
-export async function handlePaymentWebhook(deps: DepositDeps, rawBody: Buffer, signature: string | undefined): Promise<{ received: true; duplicate?: true }> {
+/** The signed event, or a 400 saying why not: a wrong signature, or a time outside the tolerance either way. */
+function verifiedEvent(deps: DepositDeps, rawBody: Buffer, signature: string | undefined): Stripe.Event {
+  const signedAt = Number(/(?:^|,)t=(\d+)(?:,|$)/.exec(signature ?? '')?.[1]);
+  const nowS = Math.floor(Date.now() / 1000);
   let event: Stripe.Event;
   try {
-    event = deps.stripe.webhooks.constructEvent(rawBody, signature ?? '', deps.webhookSecret);
+    // The SDK refuses old signatures only; the future is checked below, once the signature is known to be ours.
+    event = deps.stripe.webhooks.constructEvent(rawBody, signature ?? '', deps.webhookSecret, Number.MAX_SAFE_INTEGER);
   } catch {
     throw new AppError('BAD_INPUT', 'The webhook signature does not match.');
   }
-  let outcome: Outcome = { kind: 'none' };
+  if (signedAt > nowS + WEBHOOK_TOLERANCE_S) throw new AppError('BAD_INPUT', 'The webhook signature is dated in the future: check the clock of the sender.');
+  if (signedAt < nowS - WEBHOOK_TOLERANCE_S) throw new AppError('BAD_INPUT', `The webhook signature is too old: the event was sent more than ${WEBHOOK_TOLERANCE_S / 60} minutes ago.`);
+  return event;
+}
+
+/**
+ * The payment provider's webhook: signature checked on the raw body, each event acted on once. The
+ * event, the state change and the work it causes (refund, e-mails, the hold's end) commit together.
+ */
+export async function handlePaymentWebhook(deps: DepositDeps, rawBody: Buffer, signature: string | undefined): Promise<{ received: true; duplicate?: true }> {
+  const event = verifiedEvent(deps, rawBody, signature);
   const fresh = await Deposit.transaction(async (trx) => {
     const inserted = await trx(PaymentEvent.tableName).insert({ event_id: event.id, type: event.type }).onConflict('event_id').ignore().returning('event_id');
     if (!inserted.length) return false;
-    if (event.type === 'checkout.session.completed') outcome = await onCompleted(trx, event.data.object as Stripe.Checkout.Session);
+    if (event.type === 'checkout.session.completed') await onCompleted(deps, trx, event.data.object as Stripe.Checkout.Session);
     if (event.type === 'checkout.session.expired') {
-      await Deposit.query(trx).patch({ status: 'cancelled', closedAt: new Date().toISOString(), closeReason: 'The checkout expired unpaid.' }).where({ checkout_session_id: (event.data.object as Stripe.Checkout.Session).id, status: 'pending' });
+      await Deposit.query(trx).patch({ status: 'cancelled', closedAt: deps.clock.now().toISOString(), closeReason: 'The checkout expired unpaid.' }).where({ checkout_session_id: (event.data.object as Stripe.Checkout.Session).id, status: 'pending' });
     }
     if (event.type === 'charge.refunded') {
       const charge = event.data.object as Stripe.Charge;
@@ -167,9 +218,33 @@ export async function handlePaymentWebhook(deps: DepositDeps, rawBody: Buffer, s
     }
     return true;
   });
-  if (!fresh) return { received: true, duplicate: true };
-  await afterCompleted(deps, outcome);
-  return { received: true };
+  return fresh ? { received: true } : { received: true, duplicate: true };
+}
+
+/**
+ * The refund job. The provider keeps a failed answer under its idempotency key, so each try sends a
+ * key of its own; before it, the job looks for a refund already made for this deposit, so a try whose
+ * answer was lost never leads to a second refund.
+ */
+export async function refundDepositJob(deps: DepositDeps, depositId: number, notice: RefundNotice, run: JobRun): Promise<void> {
+  const deposit = await Deposit.query().findById(depositId);
+  if (deposit?.status !== 'refunding') return;
+  let refund: Stripe.Refund;
+  try {
+    const made = await deps.stripe.refunds.list({ payment_intent: deposit.paymentIntentId!, limit: 100 });
+    refund =
+      made.data.find((r) => r.metadata?.depositId === String(depositId) && r.status !== 'failed' && r.status !== 'canceled') ??
+      (await deps.stripe.refunds.create({ payment_intent: deposit.paymentIntentId!, metadata: { depositId: String(depositId), reason: notice } }, { idempotencyKey: `refund-deposit-${depositId}-try-${run.attempt}` }));
+  } catch (err) {
+    throw new JobFailure(`The payment provider did not refund deposit #${depositId}: ${(err as Error).message}`);
+  }
+  await Deposit.transaction(async (trx) => {
+    const d = await Deposit.query(trx).findById(depositId).forUpdate();
+    if (d?.status !== 'refunding') return;
+    const refunded = await d.$query(trx).patchAndFetch({ status: 'refunded', refundId: refund.id, refundedMinor: refund.amount });
+    const piano = (await Piano.query(trx).findById(d.pianoId))!;
+    await enqueue(trx, 'send-email', refundMail(notice, refunded, piano));
+  });
 }
 
 async function loadHolding(trx: Knex.Transaction, depositId: number): Promise<Deposit> {
@@ -179,62 +254,63 @@ async function loadHolding(trx: Knex.Transaction, depositId: number): Promise<De
   return deposit;
 }
 
-async function refundDepositNow(deps: DepositDeps, deposit: Deposit): Promise<Deposit> {
-  const refund = await deps.stripe.refunds.create({ payment_intent: deposit.paymentIntentId!, metadata: { depositId: String(deposit.id) } }, { idempotencyKey: `refund-deposit-${deposit.id}` });
-  return deposit.$query().patchAndFetch({ status: 'refunded', refundId: refund.id, refundedMinor: refund.amount });
-}
-
 /** A manager frees a held piano, refunding the deposit or keeping it as the shop's terms allow. */
 export async function releaseHold(deps: DepositDeps, actor: Actor, depositId: number, refund: boolean, why?: string | null): Promise<Deposit> {
   if (actor.role !== 'manager') throw notAllowed('release holds');
-  let deposit = await Deposit.transaction(async (trx) => {
+  return Deposit.transaction(async (trx) => {
     const d = await loadHolding(trx, depositId);
     await movePiano({ pianoId: d.pianoId, action: 'release_hold', by: actor.role, userId: actor.id, why: why ?? (refund ? 'Hold released, deposit refunded' : 'Hold released, deposit kept') }, trx);
-    return d.$query(trx).patchAndFetch({ status: 'released', closedAt: new Date().toISOString(), closeReason: why ?? null });
+    await removeJob(trx, expiryKey(d.id));
+    const closed = { closedAt: deps.clock.now().toISOString(), closeReason: why ?? null };
+    // With a refund, the buyer hears once it is made.
+    if (refund) return requestRefund(trx, d, 'released', closed);
+    const released = await d.$query(trx).patchAndFetch({ ...closed, status: 'released' });
+    await enqueue(trx, 'send-email', { to: d.buyerEmail, subject: 'Your piano hold has been released', text: `Dear ${d.buyerName},\n\nThe hold on your piano has been released. Your deposit is kept under the terms you agreed to; ask us if you have questions.\n` });
+    return released;
   });
-  if (refund) deposit = await refundDepositNow(deps, deposit);
-  await deps.mailer.send({
-    to: deposit.buyerEmail,
-    subject: 'Your piano hold has been released',
-    text: `Dear ${deposit.buyerName},\n\nThe hold on your piano has been released. ${refund ? `Your deposit of ${money(deposit.amountMinor, deposit.currency)} has been refunded.` : 'Your deposit is kept under the terms you agreed to; ask us if you have questions.'}\n`,
-  });
-  return deposit;
 }
 
-/** Holds past their end free their pianos; the deposit waits for the manager's refund decision. */
-export async function expireHolds(deps: DepositDeps, now: Date = new Date()): Promise<number> {
-  const due = await Deposit.query().where('status', 'holding').where('hold_expires_at', '<', now.toISOString());
-  let n = 0;
-  for (const d of due) {
-    const expired = await Deposit.transaction(async (trx) => {
-      const fresh = await Deposit.query(trx).findById(d.id).forUpdate();
-      if (fresh?.status !== 'holding') return null;
-      await movePiano({ pianoId: d.pianoId, action: 'release_hold', by: 'system', userId: null, why: 'The hold expired' }, trx);
-      return fresh.$query(trx).patchAndFetch({ status: 'expired', closedAt: now.toISOString(), closeReason: 'The hold expired.' });
-    });
-    if (!expired) continue;
-    n += 1;
-    const staff = await staffEmails();
-    await deps.mailer.send({ to: [expired.buyerEmail, ...staff].join(', '), subject: 'A piano hold has expired', text: `The hold for ${expired.buyerName} ended on ${expired.holdExpiresAt!.slice(0, 10)}; the piano is back on the floor. The deposit of ${money(expired.amountMinor, expired.currency)} awaits the dealer's decision under its terms.\n` });
-  }
-  return n;
+/** The hold's end job: the piano goes back on the floor; the deposit waits for the manager's decision. */
+export async function expireHoldJob(deps: DepositDeps, depositId: number): Promise<void> {
+  await Deposit.transaction(async (trx) => {
+    const d = await Deposit.query(trx).findById(depositId).forUpdate();
+    // Released, applied or gone: nothing to end.
+    if (d?.status !== 'holding') return;
+    const now = deps.clock.now();
+    if (Date.parse(d.holdExpiresAt!) > now.getTime() + EXPIRY_GRACE_MS) {
+      await enqueue(trx, 'expire-hold', { depositId }, { jobKey: expiryKey(depositId), runAt: d.holdExpiresAt! });
+      return;
+    }
+    await movePiano({ pianoId: d.pianoId, action: 'release_hold', by: 'system', userId: null, why: 'The hold expired' }, trx);
+    const expired = await d.$query(trx).patchAndFetch({ status: 'expired', closedAt: now.toISOString(), closeReason: 'The hold expired.' });
+    const text = `The hold for ${expired.buyerName} ended on ${expired.holdExpiresAt!.slice(0, 10)}; the piano is back on the floor. The deposit of ${money(expired.amountMinor, expired.currency)} awaits the dealer's decision under its terms.\n`;
+    await enqueue(trx, 'send-email', { to: expired.buyerEmail, subject: 'A piano hold has expired', text });
+    const staff = await staffEmails(trx);
+    if (staff.length) await enqueue(trx, 'send-email', { to: staff.join(', '), subject: 'A piano hold has expired', text });
+  });
 }
 
+/** A manager refunds a deposit kept after a release or an expired hold; the refund job makes it. */
 export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: number): Promise<Deposit> {
   if (actor.role !== 'manager') throw notAllowed('refund deposits');
-  const deposit = await Deposit.query().findById(depositId);
-  if (!deposit) throw notFound(`deposit ${depositId}`);
-  if (!['released', 'expired'].includes(deposit.status) || deposit.refundId) throw new AppError('CONFLICT', `A ${deposit.status} deposit cannot be refunded here.`);
-  return refundDepositNow(deps, deposit);
+  return Deposit.transaction(async (trx) => {
+    const deposit = await Deposit.query(trx).findById(depositId).forUpdate();
+    if (!deposit) throw notFound(`deposit ${depositId}`);
+    if (!['released', 'expired'].includes(deposit.status) || deposit.refundId) throw new AppError('CONFLICT', `A ${deposit.status} deposit cannot be refunded here.`);
+    return requestRefund(trx, deposit, 'on_request', {});
+  });
 }
 
 /** The sale: a held piano's deposit counts toward the price; the balance due is what is left. */
-export async function recordSale(actor: Actor, pianoId: number) {
+export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number) {
   return Piano.transaction(async (trx) => {
     const holding = await Deposit.query(trx).findOne({ piano_id: pianoId, status: 'holding' }).forUpdate();
     const piano = await movePiano({ pianoId, action: 'sell', by: actor.role, userId: actor.id, why: holding ? `Deposit of ${money(holding.amountMinor, holding.currency)} applied` : null }, trx);
-    if (holding) await holding.$query(trx).patch({ status: 'applied', closedAt: new Date().toISOString() });
-    const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, (piano.priceCurrency ?? 'USD') as Currency, await depositRules()) : null;
+    if (holding) {
+      await holding.$query(trx).patch({ status: 'applied', closedAt: deps.clock.now().toISOString() });
+      await removeJob(trx, expiryKey(holding.id));
+    }
+    const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, (piano.priceCurrency ?? 'USD') as Currency, await depositRules(trx)) : null;
     return { stage: piano.stage, balance: b };
   });
 }

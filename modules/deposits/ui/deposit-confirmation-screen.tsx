@@ -93,8 +93,8 @@ function Outcome({ status: s, dealer, piano }: { status: PublicDepositStatus; de
             </Body>
             <Body style={styles.heldText}>{`${shop} has taken ${what} off the floor for you.`}</Body>
           </View>
-          <Notice tone="success" title="Receipt sent" testID="deposit-receipt-note">
-            We e-mailed a receipt for your deposit to the address you gave with your acknowledgement.
+          <Notice tone="success" title="Receipt on its way" testID="deposit-receipt-note">
+            A receipt for your deposit is on its way to the address you gave with your acknowledgement.
           </Notice>
           {s.balance ? (
             <Card>
@@ -115,6 +115,17 @@ function Outcome({ status: s, dealer, piano }: { status: PublicDepositStatus; de
             {s.holdExpiresAt
               ? `Your deposit of ${amount} for ${what} has been refunded in full. Your card provider shows it within a few days.`
               : `Another buyer’s deposit for ${what} reached ${dealer ?? 'the dealer'} moments before yours, so the piano is held for them. Your deposit of ${amount} has been refunded in full; your card provider shows it within a few days. We are sorry for the disappointment.`}
+          </Notice>
+        </View>
+      );
+    case 'refunding':
+      return (
+        <View style={styles.block} testID="deposit-refunding">
+          <Heading level={1}>Your deposit is being refunded</Heading>
+          <Notice tone="info" title={s.holdExpiresAt ? 'The hold has ended' : 'Another buyer’s deposit arrived first'}>
+            {s.holdExpiresAt
+              ? `The hold on ${what} has ended and ${shop} is refunding your deposit of ${amount} in full. You get an e-mail once the refund is made; your card provider then shows it within a few days.`
+              : `Another buyer’s deposit for ${what} reached ${dealer ?? 'the dealer'} moments before yours, so the piano is held for them. ${shop} is refunding your deposit of ${amount} in full; you get an e-mail once the refund is made. We are sorry for the disappointment.`}
           </Notice>
         </View>
       );

@@ -32,6 +32,8 @@ export function depositStatusText(d: DepositRow): string {
       return d.refundId ? `${amount}: hold released, refunded ${money(d.refundedMinor, d.currency)}` : `${amount}: hold released, deposit kept`;
     case 'expired':
       return d.refundId ? `${amount}: hold expired, refunded` : `${amount}: hold expired ${longDay(d.holdExpiresAt)}; the refund awaits a manager`;
+    case 'refunding':
+      return `${amount}: refund asked of the payment provider, not yet made`;
     case 'refunded':
       return `${amount}: refunded ${money(d.refundedMinor || d.amountMinor, d.currency)}`;
     case 'cancelled':

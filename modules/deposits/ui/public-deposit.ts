@@ -2,7 +2,7 @@
 import type { Balance } from '@/modules/deposits/core/deposit';
 import { disclosureApi, errorMessage, UNREACHABLE, type Loaded } from '@/modules/disclosure/ui/public-disclosure';
 
-export type DepositStatus = 'pending' | 'holding' | 'refunded' | 'applied' | 'released' | 'expired' | 'cancelled';
+export type DepositStatus = 'pending' | 'holding' | 'refunding' | 'refunded' | 'applied' | 'released' | 'expired' | 'cancelled';
 
 export interface PublicDepositStatus {
   status: DepositStatus | string;

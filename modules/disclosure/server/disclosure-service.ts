@@ -3,18 +3,19 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 import Handlebars from 'handlebars';
+import type { Knex } from 'knex';
 
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
 import { Assessment } from '@/modules/assessment/server/assessment-models';
 import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
 import { WorkItem } from '@/modules/shop/server/shop-models';
 import { AppError, notAllowed, notFound } from '@/server/errors';
-import type { Mailer } from '@/server/mail';
 
 import { contentDigest } from './digest';
 import { floorTagPdf, signedCopyPdf } from './disclosure-pdf';
@@ -26,7 +27,6 @@ const SIGNED_COPY_EMAIL = template('signed-copy-email.hbs');
 
 export interface DisclosureDeps {
   photos: PhotoStore;
-  mailer: Mailer;
   publicUrl: string;
 }
 
@@ -188,8 +188,8 @@ export async function acknowledgementsFor(actor: Actor, pianoId: number) {
   });
 }
 
-async function pdfFor(ack: Acknowledgement, countersignedBy: string): Promise<{ pdf: Buffer; disclosure: Disclosure }> {
-  const disclosure = (await Disclosure.query().findById(ack.disclosureId))!;
+async function pdfFor(trx: Knex.Transaction, ack: Acknowledgement, countersignedBy: string): Promise<{ pdf: Buffer; disclosure: Disclosure }> {
+  const disclosure = (await Disclosure.query(trx).findById(ack.disclosureId))!;
   const c = disclosure.content;
   const pdf = await signedCopyPdf(c, {
     version: disclosure.version,
@@ -204,37 +204,43 @@ async function pdfFor(ack: Acknowledgement, countersignedBy: string): Promise<{ 
   return { pdf, disclosure };
 }
 
-/** Floor staff or a manager countersign; the signed copy is made, stored, and e-mailed to the buyer. */
+/**
+ * Floor staff or a manager countersign; the signed copy is made and stored, and its e-mail to the
+ * buyer is queued, all under the acknowledgement's row lock: of two at once, one signs.
+ */
 export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledgementId: number) {
   if (!canPublish(actor)) throw notAllowed('countersign disclosures');
-  const ack = await Acknowledgement.query().findById(acknowledgementId);
-  if (!ack) throw notFound(`acknowledgement ${acknowledgementId}`);
-  if (ack.countersignedAt) throw new AppError('CONFLICT', 'This acknowledgement is already countersigned.');
   const signer = (await User.query().findById(actor.id))!;
-  const signed = await ack.$query().patchAndFetch({ countersignedById: actor.id, countersignedAt: new Date().toISOString() });
-  const { pdf, disclosure } = await pdfFor(signed, signer.name);
-  const pdfKey = `disclosures/${disclosure.pianoId}/signed-${signed.id}-${signed.receiptToken.slice(0, 8)}.pdf`;
-  await deps.photos.put(pdfKey, pdf, 'application/pdf');
-  await signed.$query().patch({ pdfKey });
-  const c = disclosure.content;
-  const pianoName = `${c.piano.maker}${c.piano.model ? ` ${c.piano.model}` : ''}`;
-  await deps.mailer.send({
-    to: signed.buyerEmail,
-    subject: `Your signed condition disclosure: ${pianoName}, ${c.piano.stockNumber}`,
-    text: SIGNED_COPY_EMAIL({
-      buyerName: signed.buyerName,
-      piano: pianoName,
-      stockNumber: c.piano.stockNumber,
-      dealerName: c.dealerName,
-      version: disclosure.version,
-      acknowledgedOn: signed.acknowledgedAt.slice(0, 10),
-      countersignedBy: signer.name,
-      digest: disclosure.digest,
-      downloadUrl: `${deps.publicUrl}/api/public/receipts/${signed.receiptToken}.pdf`,
-    }),
-    attachments: [{ filename: `disclosure-${c.piano.stockNumber}-v${disclosure.version}-signed.pdf`, content: pdf, contentType: 'application/pdf' }],
+  return Acknowledgement.transaction(async (trx) => {
+    const ack = await Acknowledgement.query(trx).findById(acknowledgementId).forUpdate();
+    if (!ack) throw notFound(`acknowledgement ${acknowledgementId}`);
+    if (ack.countersignedAt) throw new AppError('CONFLICT', 'This acknowledgement is already countersigned.');
+    const signed = await ack.$query(trx).patchAndFetch({ countersignedById: actor.id, countersignedAt: new Date().toISOString() });
+    const { pdf, disclosure } = await pdfFor(trx, signed, signer.name);
+    const pdfKey = `disclosures/${disclosure.pianoId}/signed-${signed.id}-${signed.receiptToken.slice(0, 8)}.pdf`;
+    await deps.photos.put(pdfKey, pdf, 'application/pdf');
+    await signed.$query(trx).patch({ pdfKey });
+    const c = disclosure.content;
+    const pianoName = `${c.piano.maker}${c.piano.model ? ` ${c.piano.model}` : ''}`;
+    await enqueue(trx, 'send-email', {
+      to: signed.buyerEmail,
+      subject: `Your signed condition disclosure: ${pianoName}, ${c.piano.stockNumber}`,
+      text: SIGNED_COPY_EMAIL({
+        buyerName: signed.buyerName,
+        piano: pianoName,
+        stockNumber: c.piano.stockNumber,
+        dealerName: c.dealerName,
+        version: disclosure.version,
+        acknowledgedOn: signed.acknowledgedAt.slice(0, 10),
+        countersignedBy: signer.name,
+        digest: disclosure.digest,
+        downloadUrl: `${deps.publicUrl}/api/public/receipts/${signed.receiptToken}.pdf`,
+      }),
+      // The PDF waits in storage; the job carries its key.
+      attachments: [{ filename: `disclosure-${c.piano.stockNumber}-v${disclosure.version}-signed.pdf`, contentType: 'application/pdf', objectKey: pdfKey }],
+    });
+    return { id: signed.id, countersignedAt: signed.countersignedAt, countersignedBy: signer.name, pdfKey };
   });
-  return { id: signed.id, countersignedAt: signed.countersignedAt, countersignedBy: signer.name, pdfKey };
 }
 
 export async function signedPdfByReceipt(deps: DisclosureDeps, receiptToken: string): Promise<{ pdf: Buffer; filename: string }> {

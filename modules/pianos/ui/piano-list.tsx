@@ -1,8 +1,9 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
 import { STAGE_LABELS } from '@/modules/pianos/core/piano';
-import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { SPACE } from '@/modules/theme/core/palette';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { rowTable, TableHead } from '@/modules/theme/ui/row-table';
 import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
@@ -36,17 +37,9 @@ export function PianoList({ pianos, dateColumn = 'received', testID }: PianoList
   const dateLabel = dateColumn === 'received' ? 'Taken in' : 'In stage since';
   const dateOf = (p: PianoRecord) => formatDay(dateColumn === 'received' ? p.createdAt : p.stageChangedAt);
   return (
-    <View style={wide ? styles.table : undefined} testID={testID}>
-      {wide ? (
-        <View aria-hidden style={[styles.row, styles.headRow]}>
-          {COLUMNS.map((c) => (
-            <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
-              {c.key === 'date' ? dateLabel : c.label}
-            </Text>
-          ))}
-        </View>
-      ) : null}
-      <View role="list" style={wide ? undefined : styles.cards}>
+    <View style={wide ? rowTable.table : undefined} testID={testID}>
+      {wide ? <TableHead columns={COLUMNS} labelOf={(c) => (c.key === 'date' ? dateLabel : c.label)} /> : null}
+      <View role="list" style={wide ? undefined : rowTable.cards}>
         {pianos.map((p, index) => (
           <View role="listitem" key={p.id}>
             <LinkPressable
@@ -54,7 +47,7 @@ export function PianoList({ pianos, dateColumn = 'received', testID }: PianoList
               accessibilityLabel={rowLabel(p)}
               testID={`piano-row-${p.id}`}
               insetFocus={wide}
-              style={({ hovered }) => [wide ? styles.row : styles.card, wide && index > 0 && styles.rowRule, hovered && styles.hover]}
+              style={({ hovered }) => [wide ? rowTable.row : [rowTable.card, styles.card], wide && index > 0 && rowTable.rule, hovered && rowTable.hover]}
             >
               {wide ? <WideRow piano={p} date={dateOf(p)} /> : <PhoneCard piano={p} date={`${dateLabel.toLowerCase()} ${dateOf(p)}`} />}
             </LinkPressable>
@@ -106,20 +99,6 @@ function PhoneCard({ piano: p, date }: { piano: PianoRecord; date: string }) {
 }
 
 const styles = StyleSheet.create({
-  table: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, overflow: 'hidden' },
-  cards: { gap: SPACE.sm },
-  row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, minHeight: 56 },
-  rowRule: { borderTopWidth: 1, borderTopColor: PALETTE.linen },
-  headRow: { backgroundColor: PALETTE.ivory, borderBottomWidth: 2, borderBottomColor: PALETTE.linen, minHeight: 44, paddingVertical: SPACE.sm },
-  head: { color: PALETTE.walnut },
-  hover: { backgroundColor: PALETTE.feltMist },
-  card: {
-    backgroundColor: PALETTE.vellum,
-    borderWidth: 1,
-    borderColor: PALETTE.linen,
-    borderRadius: RADIUS.lg,
-    padding: SPACE.lg,
-    gap: SPACE.xs,
-  },
+  card: { gap: SPACE.xs },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
 });

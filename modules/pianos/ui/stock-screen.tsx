@@ -1,6 +1,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
+import { BackgroundWorkPanel } from '@/modules/jobs/ui/background-work-panel';
 import { STAGES, STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
 import { PALETTE, RADIUS, SPACE, STAGE_TONES, TYPE_SCALE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -23,6 +24,7 @@ export function StockScreen() {
       headingTestID="home-heading"
       actions={<Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" testID="start-trade-in" />}
     >
+      <BackgroundWorkPanel />
       <Section title="By stage" description="Pick a stage to see its pianos.">
         <StageCounts />
       </Section>

@@ -126,8 +126,9 @@ export async function addWorkItem(actor: Actor, pianoId: number, raw: unknown): 
   });
 }
 
-async function loadItem(trx: Knex.Transaction | undefined, itemId: number): Promise<WorkItem> {
-  const item = await WorkItem.query(trx).findById(itemId);
+async function loadItem(trx: Knex.Transaction | undefined, itemId: number, lock = false): Promise<WorkItem> {
+  const q = WorkItem.query(trx).findById(itemId);
+  const item = await (lock ? q.forUpdate() : q);
   if (!item) throw notFound(`work item ${itemId}`);
   return item;
 }
@@ -143,7 +144,8 @@ export async function updateWorkItem(actor: Actor, itemId: number, raw: unknown)
 export async function removeWorkItem(actor: Actor, itemId: number): Promise<boolean> {
   requireRole(actor, isManager, 'drop workshop work');
   return WorkItem.transaction(async (trx) => {
-    const item = await loadItem(trx, itemId);
+    // Locked, so a timer cannot start on the item while it is being dropped.
+    const item = await loadItem(trx, itemId, true);
     const logged = await TimeEntry.query(trx).where('work_item_id', itemId).resultSize();
     const parts = await PartUse.query(trx).where('work_item_id', itemId).resultSize();
     if (logged || parts || item.status !== 'planned') throw new AppError('CONFLICT', 'This item has work logged against it: mark it done instead of dropping it.');
@@ -174,10 +176,14 @@ export async function approvePlan(actor: Actor, pianoId: number, why?: string | 
 
 // ---- the bench ----
 
-async function benchItem(trx: Knex.Transaction | undefined, actor: Actor, itemId: number): Promise<WorkItem> {
+async function benchItem(trx: Knex.Transaction | undefined, actor: Actor, itemId: number, lock = false): Promise<WorkItem> {
   requireRole(actor, atBench, 'log workshop work');
-  const item = await loadItem(trx, itemId);
-  if (actor.role === 'technician' && item.assignedToId != null && item.assignedToId !== actor.id) throw notAllowed('log work on an item assigned to someone else');
+  const item = await loadItem(trx, itemId, lock);
+  if (actor.role === 'technician' && item.assignedToId != null && item.assignedToId !== actor.id) {
+    // Taking an unassigned item is first come; the one who came second is told who has it.
+    if (lock) throw new AppError('CONFLICT', `${(await User.query(trx).findById(item.assignedToId))?.name ?? 'Someone else'} has taken this item: ask a manager to assign it to you.`);
+    throw notAllowed('log work on an item assigned to someone else');
+  }
   const piano = await Piano.query(trx).findById(item.pianoId);
   if (piano?.stage !== 'in_workshop') throw new AppError('CONFLICT', 'Work is logged only while the piano is in the workshop.');
   return item;
@@ -186,7 +192,8 @@ async function benchItem(trx: Knex.Transaction | undefined, actor: Actor, itemId
 export async function startTimer(actor: Actor, itemId: number): Promise<TimeEntry> {
   try {
     return await WorkItem.transaction(async (trx) => {
-      const item = await benchItem(trx, actor, itemId);
+      // The item's row lock makes two starts take turns: the second sees who took it.
+      const item = await benchItem(trx, actor, itemId, true);
       if (item.status === 'done') throw new AppError('CONFLICT', 'This item is done: reopen it before logging more time.');
       // Starting work on an unassigned item takes it.
       await item.$query(trx).patch({ status: 'in_progress', ...(item.assignedToId == null ? { assignedToId: actor.id } : {}) });
@@ -200,9 +207,15 @@ export async function startTimer(actor: Actor, itemId: number): Promise<TimeEntr
 
 export async function stopTimer(actor: Actor, itemId: number): Promise<TimeEntry> {
   await benchItem(undefined, actor, itemId);
-  const running = await TimeEntry.query().findOne({ work_item_id: itemId, technician_id: actor.id, ended_at: null, minutes: null });
-  if (!running) throw new AppError('CONFLICT', 'No timer of yours is running on this item.');
-  return running.$query().patchAndFetch({ endedAt: new Date().toISOString() });
+  // One statement finds and stops the timer, so two stops at once end it once.
+  const [stopped] = (await TimeEntry.query()
+    .patch({ endedAt: new Date().toISOString() })
+    .where({ work_item_id: itemId, technician_id: actor.id })
+    .whereNull('ended_at')
+    .whereNull('minutes')
+    .returning('*')) as unknown as TimeEntry[];
+  if (!stopped) throw new AppError('CONFLICT', 'No timer of yours is running on this item.');
+  return stopped;
 }
 
 export async function logTime(actor: Actor, raw: unknown): Promise<TimeEntry> {

@@ -1,12 +1,13 @@
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { STAGE_LABELS } from '@/modules/pianos/core/piano';
-import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { EmptyState } from '@/modules/theme/ui/empty-state';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
+import { rowTable, TableHead } from '@/modules/theme/ui/row-table';
 import { Screen } from '@/modules/theme/ui/screen';
 import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
@@ -67,17 +68,9 @@ function Overruns() {
           Every item so far has cost no more than its estimate.
         </EmptyState>
       ) : (
-        <View style={wide ? styles.table : undefined} testID="overruns-list">
-          {wide ? (
-            <View aria-hidden style={[styles.row, styles.headRow]}>
-              {COLS.map((c) => (
-                <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
-                  {c.label}
-                </Text>
-              ))}
-            </View>
-          ) : null}
-          <View role="list" style={wide ? undefined : styles.cards}>
+        <View style={wide ? rowTable.table : undefined} testID="overruns-list">
+          {wide ? <TableHead columns={COLS} /> : null}
+          <View role="list" style={wide ? undefined : rowTable.cards}>
             {overruns.map((o, i) => (
               <View role="listitem" key={o.pianoId}>
                 <LinkPressable
@@ -85,7 +78,7 @@ function Overruns() {
                   accessibilityLabel={rowLabel(o)}
                   testID={`overrun-${o.pianoId}`}
                   insetFocus={wide}
-                  style={({ hovered }) => [wide ? styles.row : styles.card, wide && i > 0 && styles.rule, hovered && styles.hover]}
+                  style={({ hovered }) => [wide ? [rowTable.row, styles.row] : rowTable.card, wide && i > 0 && rowTable.rule, hovered && rowTable.hover]}
                 >
                   {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
                 </LinkPressable>
@@ -134,13 +127,6 @@ function PhoneCard({ o }: { o: Overrun }) {
 }
 
 const styles = StyleSheet.create({
-  table: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, overflow: 'hidden' },
-  row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, minHeight: 64 },
-  headRow: { backgroundColor: PALETTE.ivory, borderBottomWidth: 2, borderBottomColor: PALETTE.linen, minHeight: 44, paddingVertical: SPACE.sm },
-  head: { color: PALETTE.walnut },
-  rule: { borderTopWidth: 1, borderTopColor: PALETTE.linen },
-  hover: { backgroundColor: PALETTE.feltMist },
-  cards: { gap: SPACE.sm },
-  card: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, padding: SPACE.lg, gap: SPACE.sm },
+  row: { minHeight: 64 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
 });

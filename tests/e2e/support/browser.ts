@@ -52,7 +52,8 @@ export async function newPage(context: BrowserContext, viewport: { width: number
   await page.setViewportSize(viewport);
   page.on('pageerror', (err) => console.error('page error:', err.message));
   // The profile is shared by the file's journeys: each starts signed out, with no draft left behind.
-  await page.goto(`${baseUrl()}/sign-in`);
+  // Cleared from a page of the same origin that runs no app code, which could write the session back.
+  await page.goto(`${baseUrl()}/healthz`);
   await page.evaluate(() => localStorage.clear());
   return page;
 }

@@ -68,7 +68,7 @@ export function AcknowledgementsPanel({ pianoId, newestVersion }: Acknowledgemen
                   </Body>
                   {row.countersignedAt ? (
                     <Body variant="small" tone="success" testID={`ack-signed-${row.id}`}>
-                      Countersigned by {row.countersignedBy ?? 'staff'} on {dayAndTime(row.countersignedAt)}; the signed copy was e-mailed.
+                      Countersigned by {row.countersignedBy ?? 'staff'} on {dayAndTime(row.countersignedAt)}; the signed copy goes to the buyer by e-mail.
                     </Body>
                   ) : (
                     <Body variant="small" tone="quiet">

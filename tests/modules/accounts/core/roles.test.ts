@@ -13,6 +13,9 @@ describe('roles', () => {
     ['technician', 'recordTone', true],
     ['intake', 'readToneResults', true],
     ['manager', 'readToneResults', true],
+    ['manager', 'tendBackgroundWork', true],
+    ['floor', 'tendBackgroundWork', false],
+    ['technician', 'tendBackgroundWork', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);
