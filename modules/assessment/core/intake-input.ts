@@ -39,6 +39,8 @@ export const intakeInput = z
     photoIds: z.array(z.number().int().positive()).max(60).default([]),
     /** A piano already in stock in stage received (logged before its inspection): assess it instead of adding one. */
     pianoId: z.number().int().positive().optional(),
+    /** The earlier record with the same maker, model and serial: intake staff say it is the same piano coming back. */
+    samePianoAs: z.number().int().positive().optional(),
   })
   .strict();
 export type IntakeInput = z.infer<typeof intakeInput>;

@@ -327,3 +327,53 @@ export const textsInput = z
     warranty: z.string().trim().min(1).max(4000),
   })
   .strict();
+/** One part of an area as a reader meets it: what was found, what was done, what was measured after. */
+export interface AreaSection {
+  kind: 'found' | 'work' | 'after' | 'unmeasured' | 'not_done';
+  title: string;
+  items: { mark: AreaMark | 'done' | null; text: string }[];
+}
+
+const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+
+/**
+ * The sections of one area, in the order they happened, for the web page, the printable page and
+ * the signed copy alike. `day` writes a YYYY-MM-DD day for the reader.
+ */
+export function areaSections(a: DisclosureAreaContent, c: DisclosureContent, day: (isoDay: string) => string): AreaSection[] {
+  const out: AreaSection[] = [];
+  const intakeDay = day(c.inspectedOn);
+  if (a.found.length) {
+    out.push({ kind: 'found', title: a.foundBeforeWork ? `Found at intake on ${intakeDay}, before the work` : `Found at intake on ${intakeDay}`, items: a.found.map((f) => ({ mark: f.mark, text: f.text })) });
+  } else if (!a.measuredAfter.length) {
+    out.push({ kind: 'found', title: `At intake on ${intakeDay}`, items: [{ mark: 'unseen', text: 'Not inspected: nothing in this area was measured or looked at.' }] });
+  }
+  if (a.workDone.length) out.push({ kind: 'work', title: 'Work done in our workshop', items: a.workDone.map((w) => ({ mark: 'done', text: w })) });
+  if (a.measuredAfter.length && c.measuredAfterOn) {
+    out.push({ kind: 'after', title: `Measured after the work on ${day(c.measuredAfterOn)}`, items: a.measuredAfter.map((f) => ({ mark: f.mark, text: f.text })) });
+  }
+  if (a.notMeasuredAgain.length) out.push({ kind: 'unmeasured', title: 'Not measured again after the work', items: a.notMeasuredAgain.map((t) => ({ mark: 'unseen', text: capital(t) })) });
+  if (a.notDone.length) out.push({ kind: 'not_done', title: 'Recommended and not done', items: a.notDone.map((t) => ({ mark: null, text: t })) });
+  return out;
+}
+
+/** What the buyer is told up front about work not done; null when all the work called for was done. */
+export function notDoneSummary(c: DisclosureContent): { title: string; text: string } | null {
+  const list = c.notDone.join('; ');
+  if (c.soldAsItStands) {
+    return {
+      title: 'Sold as it stands',
+      text: c.notDone.length
+        ? `This piano has not been reconditioned in our workshop. Our inspection called for this work, which was not done: ${list}.`
+        : 'This piano has not been reconditioned in our workshop; our inspection called for no work.',
+    };
+  }
+  return c.notDone.length ? { title: 'Work not done', text: `Our inspection called for this work, which was not done: ${list}.` } : null;
+}
+
+/** When the pitch on the disclosure was measured, in words. */
+export function pitchWhen(p: DisclosurePitch, day: (isoDay: string) => string): string {
+  if (p.when === 'after_work') return `Measured after the work on ${day(p.measuredOn)}.`;
+  if (p.when === 'before_work') return `Measured at intake on ${day(p.measuredOn)}, before the tuning work; not measured again since.`;
+  return `Measured at intake on ${day(p.measuredOn)}.`;
+}

@@ -28,8 +28,31 @@ export const workItemPatch = workItemInput.partial().omit({ task: true }).strict
 export const timeEntryInput = z
   .object({
     workItemId: z.number().int().positive(),
-    minutes: z.number().int('must be whole minutes').min(1, 'must be at least 1 minute').max(1440, 'must be at most 24 hours'),
+    minutes: z
+      .number()
+      .int('must be whole minutes')
+      .min(0, 'cannot be negative: give the minutes worked; an entry logged by mistake is corrected instead')
+      .min(1, 'must be at least 1 minute')
+      .max(1440, 'must be at most 24 hours'),
     note: z.string().trim().max(500).nullish(),
+  })
+  .strict();
+
+/** A correction of a logged time entry: the minutes it should have been (0 for one logged by mistake) and why. */
+export const timeCorrectionInput = z
+  .object({
+    timeEntryId: z.number().int().positive(),
+    minutes: z.number().int('must be whole minutes').min(0, 'cannot be negative: 0 stands for an entry logged by mistake').max(1440, 'must be at most 24 hours'),
+    why: z.string().trim().min(1, 'is required: say why the time changes').max(500),
+  })
+  .strict();
+
+/** Marking a work item done; a reason is needed when no time is logged on it. */
+export const doneInput = z
+  .object({
+    itemId: z.number().int().positive(),
+    done: z.boolean(),
+    reason: z.string().trim().max(500).nullish(),
   })
   .strict();
 
