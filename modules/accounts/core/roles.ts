@@ -9,13 +9,25 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability = 'manageUsers' | 'readPianos' | 'createPianos' | 'readSellerDetails' | 'assess' | 'uploadPhotos' | 'setGradeRules' | 'remeasure';
+export type Ability =
+  | 'manageUsers'
+  | 'readPianos'
+  | 'createPianos'
+  | 'readSellerDetails'
+  | 'assess'
+  | 'uploadPhotos'
+  | 'setGradeRules'
+  | 'remeasure'
+  /** correct a time entry one logged oneself */
+  | 'correctOwnTime'
+  /** correct a time entry anyone logged */
+  | 'correctAnyTime';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos'],
-  technician: ['readPianos', 'uploadPhotos', 'remeasure'],
+  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'correctOwnTime'],
   floor: ['readPianos'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'correctOwnTime', 'correctAnyTime'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -47,7 +47,8 @@ export const defaultRules: GradeRules = {
 };
 
 /** Rules as stored in an older version (with fields since dropped, without ones since added): complete and trimmed. */
-export function completeRules(stored: Partial<GradeRules> & Record<string, unknown>): GradeRules {
+export function completeRules(stored: object): GradeRules {
   const known = Object.keys(defaultRules) as (keyof GradeRules)[];
-  return Object.fromEntries(known.map((k) => [k, stored[k] ?? defaultRules[k]])) as unknown as GradeRules;
+  const given = stored as Partial<GradeRules>;
+  return Object.fromEntries(known.map((k) => [k, given[k] ?? defaultRules[k]])) as unknown as GradeRules;
 }

@@ -18,6 +18,14 @@ export const MARK_WORDS: Record<AreaMark, string> = {
   major: 'Major work',
   unseen: 'Not inspected',
 };
+/** What each mark means, in words for anyone reading it: the key beside the marks. */
+export const MARK_MEANINGS: Record<AreaMark, string> = {
+  fine: 'nothing to do',
+  noted: 'worth knowing; no work needed',
+  work: 'work the piano calls for',
+  major: 'a large repair or a structural concern',
+  unseen: 'nobody measured it, so nothing is claimed',
+};
 const MARK_RANK: Record<Mark, number> = { fine: 0, noted: 1, work: 2, major: 3 };
 
 /** The worst of some marks; null when there are none. */

@@ -64,3 +64,14 @@ export const remeasureInput = z
     changeNote: z.string().trim().max(500).nullish(),
   })
   .strict();
+
+/** A piano already on record with the same maker, model and serial number: what the server answers, the screen shows. */
+export interface SamePiano {
+  id: number;
+  stockNumber: string;
+  stage: string;
+  maker: string;
+  model: string | null;
+  serialNumber: string | null;
+  createdAt: string;
+}

@@ -5,7 +5,7 @@ import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { gradeAssessment, inspectedAreas, type Grade, type MeasureField } from '@/modules/assessment/core/grade';
 import { completeRules, defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
-import { correctionInput, intakeInput, remeasureInput } from '@/modules/assessment/core/intake-input';
+import { correctionInput, intakeInput, remeasureInput, type SamePiano } from '@/modules/assessment/core/intake-input';
 import { diffMeasurements, type FieldChange } from '@/modules/assessment/core/measurement-diff';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-input';
@@ -64,16 +64,6 @@ export function remeasuredFieldsOf(row: Assessment, before: Assessment | undefin
   if (row.kind !== 'post_workshop') return [];
   if (row.remeasuredFields) return row.remeasuredFields as MeasureField[];
   return before ? (diffMeasurements(before.measurements, row.measurements).map((c) => c.field) as MeasureField[]) : [];
-}
-
-export interface SamePiano {
-  id: number;
-  stockNumber: string;
-  stage: string;
-  maker: string;
-  model: string | null;
-  serialNumber: string | null;
-  createdAt: string;
 }
 
 /** Records with the same maker, model and serial number: the same piano, taken in before. */

@@ -22,6 +22,7 @@ export type MeasureField = keyof Measurements;
 export const MEASURE_LABELS: Record<MeasureField, string> = {
   keySidePlayMm: 'Key side play',
   keyTouchesNeighbour: 'A key can be pushed until it touches its neighbour',
+  keysTouchingNeighbour: 'Keys that touch a neighbour',
   keyLevelDeviationMm: 'Key level deviation',
   keytopDamage: 'Keytop damage',
   stickingKeys: 'Sticking keys',
@@ -76,6 +77,8 @@ const INPUT_LABELS: Record<string, string> = {
   notes: 'Internal notes',
   photoIds: 'Photos',
   changeNote: 'Reason for the correction',
+  samePianoAs: 'The same piano taken in before',
+  measurements: 'The inspection',
 };
 
 /** The words for an input path such as `measurements.keySidePlayMm` or `measurements.soundboardCracks.0.widestGapMm`. */

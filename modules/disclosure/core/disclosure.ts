@@ -346,13 +346,14 @@ export function areaSections(a: DisclosureAreaContent, c: DisclosureContent, day
   if (a.found.length) {
     out.push({ kind: 'found', title: a.foundBeforeWork ? `Found at intake on ${intakeDay}, before the work` : `Found at intake on ${intakeDay}`, items: a.found.map((f) => ({ mark: f.mark, text: f.text })) });
   } else if (!a.measuredAfter.length) {
-    out.push({ kind: 'found', title: `At intake on ${intakeDay}`, items: [{ mark: 'unseen', text: 'Not inspected: nothing in this area was measured or looked at.' }] });
+    out.push({ kind: 'found', title: `At intake on ${intakeDay}`, items: [{ mark: 'unseen', text: 'Nothing in this area was measured or looked at.' }] });
   }
   if (a.workDone.length) out.push({ kind: 'work', title: 'Work done in our workshop', items: a.workDone.map((w) => ({ mark: 'done', text: w })) });
   if (a.measuredAfter.length && c.measuredAfterOn) {
     out.push({ kind: 'after', title: `Measured after the work on ${day(c.measuredAfterOn)}`, items: a.measuredAfter.map((f) => ({ mark: f.mark, text: f.text })) });
   }
-  if (a.notMeasuredAgain.length) out.push({ kind: 'unmeasured', title: 'Not measured again after the work', items: a.notMeasuredAgain.map((t) => ({ mark: 'unseen', text: capital(t) })) });
+  // Measured at intake, so not "not inspected": the section's title says what is missing.
+  if (a.notMeasuredAgain.length) out.push({ kind: 'unmeasured', title: 'Not measured again after the work', items: a.notMeasuredAgain.map((t) => ({ mark: null, text: capital(t) })) });
   if (a.notDone.length) out.push({ kind: 'not_done', title: 'Recommended and not done', items: a.notDone.map((t) => ({ mark: null, text: t })) });
   return out;
 }

@@ -27,6 +27,9 @@ export function markSvg(mark: AreaMark | 'done' | null): string {
   return `${open}${body}</svg>`;
 }
 
+/** Work recommended and not done: an open box, like the screens. */
+export const OPEN_BOX_SVG = `<svg class="mark" width="12" height="12" viewBox="0 0 12 12" aria-hidden="true"><rect x="1.5" y="1.5" width="9" height="9" fill="none" stroke="${PALETTE.walnut}" stroke-width="1.5"/></svg>`;
+
 /** The word printed beside a mark: the mark's own, or "Done" for work done. */
 export function markWord(mark: AreaMark | 'done' | null): string {
   return mark == null ? '' : mark === 'done' ? 'Done' : MARK_WORDS[mark];
@@ -44,7 +47,7 @@ export function paperView(c: DisclosureContent) {
       label: a.label,
       condition: a.condition,
       svg: markSvg(a.mark),
-      sections: areaSections(a, c, paperDay).map((s) => ({ ...s, items: s.items.map((i) => ({ ...i, svg: markSvg(i.mark), word: markWord(i.mark) })) })),
+      sections: areaSections(a, c, paperDay).map((s) => ({ ...s, items: s.items.map((i) => ({ ...i, svg: s.kind === 'not_done' ? OPEN_BOX_SVG : markSvg(i.mark), word: markWord(i.mark) })) })),
     })),
   };
 }

@@ -60,10 +60,11 @@ function drawMark(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, x: nu
   doc.restore();
 }
 
-/** One line led by a mark and its word. */
-function markedLine(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, text: string): void {
+/** One line led by a mark and its word; work not done by an open box. */
+function markedLine(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, text: string, openBox = false): void {
   const x = doc.page.margins.left + 8;
-  drawMark(doc, mark, x, doc.y + 3);
+  if (openBox) doc.save().lineWidth(1).rect(x + 0.5, doc.y + 3.5, 7, 7).stroke(PALETTE.walnut).restore();
+  else drawMark(doc, mark, x, doc.y + 3);
   const word = markWord(mark);
   doc.fillColor('#1d1a16');
   if (word) doc.font('bold').text(`${word}: `, x + 14, doc.y, { continued: true }).font('body').text(text);
@@ -80,7 +81,7 @@ function areasV2(doc: PDFKit.PDFDocument, c: DisclosureContent): void {
     doc.moveDown(0.8).font('bold').fontSize(13).fillColor('#1d1a16').text(`${area.label}: `, { continued: true }).text(area.condition).font('body').fontSize(11);
     for (const section of areaSections(area, c, paperDay)) {
       doc.moveDown(0.3).font('bold').fontSize(10).fillColor('#4a4238').text(section.title.toUpperCase(), { characterSpacing: 0.4 }).font('body').fontSize(11);
-      for (const item of section.items) markedLine(doc, item.mark, item.text);
+      for (const item of section.items) markedLine(doc, item.mark, item.text, section.kind === 'not_done');
     }
   }
   if (c.otherWorkDone.length) {

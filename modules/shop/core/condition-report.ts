@@ -15,6 +15,8 @@ export interface AreaReport {
   findings: Finding[];
   /** the work counted here: each task once, under the first area (in area order) whose findings ask for it */
   lines: EstimateLine[];
+  /** cheaper partial fixes offered here instead of a line: shown, not counted */
+  options: EstimateLine[];
   /** work this area's findings ask for that is counted under an earlier area */
   countedElsewhere: { task: WorkTask; label: string; countedIn: Area }[];
   hours: number;
@@ -61,6 +63,7 @@ export function conditionReport(grade: Grade, card: RateCard): ConditionReport {
       mark: inspected ? (worstMark(findings.map((f) => f.mark)) ?? 'fine') : 'unseen',
       findings,
       lines,
+      options: estimate.options.filter((l) => owner.get(l.task) === area),
       countedElsewhere,
       hours: lines.reduce((s, l) => s + l.hours, 0),
       workMinor: lines.reduce((s, l) => s + l.totalMinor, 0),

@@ -6,6 +6,9 @@ import { WORK_TASKS } from '@/modules/assessment/core/work-tasks';
 export const DECISIONS = ['recondition', 'sell_as_is', 'wholesale', 'decline'] as const;
 export type Decision = (typeof DECISIONS)[number];
 
+/** The shortest reason a manager gives for selling as it stands a piano not recommended for retail. */
+export const SELL_AS_IS_REASON_MIN = 10;
+
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date, YYYY-MM-DD');
 const hours = z.number().min(0, 'cannot be negative').max(200, 'must be at most 200 hours');
 const minor = z.number().int('must be whole minor units').min(0, 'cannot be negative').max(100_000_000);

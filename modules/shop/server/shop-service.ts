@@ -15,7 +15,7 @@ import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
 import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
-import { climateInput, DECISIONS, doneInput, partUseInput, timeCorrectionInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
+import { climateInput, DECISIONS, doneInput, SELL_AS_IS_REASON_MIN, partUseInput, timeCorrectionInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
@@ -45,9 +45,6 @@ export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard>
 }
 
 // ---- decision and plan ----
-
-/** The shortest reason a manager gives for selling a piano not fit for retail as it stands. */
-export const SELL_AS_IS_REASON_MIN = 10;
 
 /** The manager's choice for an assessed piano. Recondition drafts a plan; the others move the piano. */
 export async function decide(actor: Actor, raw: { pianoId: number; decision: string; why?: string | null }): Promise<{ stage: string; planId: number | null }> {
@@ -258,12 +255,12 @@ export async function setWorkItemDone(actor: Actor, raw: unknown): Promise<WorkI
 
 /** A time entry corrected by the technician who logged it or a manager; each correction is kept. */
 export async function correctTimeEntry(actor: Actor, raw: unknown): Promise<TimeEntry> {
-  requireRole(actor, atBench, 'correct logged time');
+  requireRole(actor, (a) => can(a.role, 'correctOwnTime'), 'correct logged time');
   const input = timeCorrectionInput.parse(raw);
   return TimeEntry.transaction(async (trx) => {
     const entry = await TimeEntry.query(trx).findById(input.timeEntryId).forUpdate();
     if (!entry) throw notFound(`time entry ${input.timeEntryId}`);
-    if (!isManager(actor) && entry.technicianId !== actor.id) throw notAllowed('correct time someone else logged');
+    if (entry.technicianId !== actor.id && !can(actor.role, 'correctAnyTime')) throw notAllowed('correct time someone else logged');
     if (entry.minutes == null && !entry.endedAt) throw new AppError('CONFLICT', 'This timer is still running: stop it before correcting its time.');
     const old = minutesOf([entry], Date.now());
     if (old === input.minutes) throw badInput('minutes', `is what the entry already says (${old} min): nothing to correct`);

@@ -51,6 +51,16 @@ export function KeysStep({ draft, update, errorAt }: StepProps) {
           error={errorAt(at('keyTouchesNeighbour'))}
           testID="choice-keyTouchesNeighbour"
         />
+        {m.keyTouchesNeighbour ? (
+          <KeyListField
+            label="Which keys touch a neighbour"
+            hint="Key numbers from 1 (the lowest A) to 88, separated by commas."
+            value={m.keysTouchingNeighbour}
+            onChange={set('keysTouchingNeighbour')}
+            error={errorAt(at('keysTouchingNeighbour'))}
+            testID="field-keysTouchingNeighbour"
+          />
+        ) : null}
         <MeasureInput
           label="Key level deviation"
           hint="How far the most uneven key rests above or below its neighbours."

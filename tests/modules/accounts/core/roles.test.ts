@@ -9,6 +9,10 @@ describe('roles', () => {
     ['floor', 'readSellerDetails', false],
     ['intake', 'readSellerDetails', true],
     ['floor', 'readPianos', true],
+    ['technician', 'correctOwnTime', true],
+    ['technician', 'correctAnyTime', false],
+    ['manager', 'correctAnyTime', true],
+    ['floor', 'correctOwnTime', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);

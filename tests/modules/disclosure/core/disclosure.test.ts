@@ -1,7 +1,7 @@
 import { gradeAssessment } from '@/modules/assessment/core/grade';
 import type { MeasureField } from '@/modules/assessment/core/grade';
 import type { Measurements } from '@/modules/assessment/core/measurements';
-import { buildDisclosure, canonicalJson, DEFAULT_WARRANTY, publishBlockers, type DisclosureInput } from '@/modules/disclosure/core/disclosure';
+import { areaSections, buildDisclosure, canonicalJson, DEFAULT_WARRANTY, notDoneSummary, publishBlockers, type DisclosureInput } from '@/modules/disclosure/core/disclosure';
 
 import { buildMeasurements } from '../../../support/builders';
 
@@ -123,6 +123,41 @@ describe('buildDisclosure', () => {
   it('carries the notices a buyer is owed', () => {
     const titles = buildDisclosure(input()).notices.map((n) => n.title);
     expect(titles).toEqual(['Tuning after delivery', 'Moving a piano', 'Your own inspection', 'About this document']);
+  });
+});
+
+describe('areaSections', () => {
+  const day = (d: string) => `day ${d}`;
+
+  it('reads in the order things happened: found at intake, before the work; the work; measured after; what was not measured again', () => {
+    const c = buildDisclosure(input({ workDone: [reshape], after: after({ hammerGrooveDepthMm: 0.6 }) }));
+    const sections = areaSections(areaOf(c, 'hammers'), c, day);
+    expect(sections.map((s) => [s.kind, s.title])).toEqual([
+      ['found', 'Found at intake on day 2026-11-28, before the work'],
+      ['work', 'Work done in our workshop'],
+      ['after', 'Measured after the work on day 2026-12-02'],
+      ['unmeasured', 'Not measured again after the work'],
+    ]);
+    expect(sections[1].items).toEqual([{ mark: 'done', text: 'Reshape and voice hammers' }]);
+    expect(sections[3].items).toEqual([{ mark: null, text: 'Hammer felt' }]);
+  });
+
+  it('says an area was not inspected rather than leaving it empty, and lists work not done', () => {
+    const m = { keySidePlayMm: 1.2, hammerGrooveDepthMm: 2 } as Measurements;
+    const c = buildDisclosure(input({ intake: { measurements: m, grade: gradeAssessment(m), submittedAt: intakeAt } }));
+    expect(areaSections(areaOf(c, 'strings'), c, day)).toEqual([{ kind: 'found', title: 'At intake on day 2026-11-28', items: [{ mark: 'unseen', text: 'Nothing in this area was measured or looked at.' }] }]);
+    expect(areaSections(areaOf(c, 'hammers'), c, day).at(-1)).toEqual({ kind: 'not_done', title: 'Recommended and not done', items: [{ mark: null, text: 'Reshape and voice hammers' }] });
+  });
+});
+
+describe('notDoneSummary', () => {
+  it('tells the buyer up front what was not done, and plainly when it is sold as it stands', () => {
+    expect(notDoneSummary(buildDisclosure(input({ soldAsItStands: true })))).toEqual({
+      title: 'Sold as it stands',
+      text: 'This piano has not been reconditioned in our workshop. Our inspection called for this work, which was not done: Regulation; Reshape and voice hammers; Fine tuning; Voicing.',
+    });
+    const clean = { keySidePlayMm: 1.2, a4Hz: 440 } as Measurements;
+    expect(notDoneSummary(buildDisclosure(input({ intake: { measurements: clean, grade: gradeAssessment(clean), submittedAt: intakeAt } })))).toBeNull();
   });
 });
 
