@@ -84,7 +84,7 @@ const INPUT_LABELS: Record<string, string> = {
 /** The words for an input path such as `measurements.keySidePlayMm` or `measurements.soundboardCracks.0.widestGapMm`. */
 export function labelForPath(path: string): string {
   const parts = path.split('.');
-  if (parts[0] === 'measurements') {
+  if (parts[0] === 'measurements' && parts.length > 1) {
     if (parts[1] === 'soundboardCracks' && parts.length >= 4) return `Crack ${Number(parts[2]) + 1}: ${CRACK_LABELS[parts[3]] ?? parts[3]}`;
     return MEASURE_LABELS[parts[1] as MeasureField] ?? parts[1];
   }

@@ -225,7 +225,8 @@ export function buildDisclosure(input: DisclosureInput): DisclosureContent {
     const inspected = intake.grade.inspectedAreas.includes(a) || measuredAfter.length > 0;
     const worst = worstMark(now.map((f) => f.mark));
     const mark: AreaMark = worst ?? 'unseen';
-    const condition = worst ? MARK_WORDS[worst] : inspected ? 'Not measured after the work' : MARK_WORDS.unseen;
+    // Only what was measured again speaks for the area after the work; the words say when that is part of it.
+    const condition = worst ? (notMeasuredAgain.length ? `${MARK_WORDS[worst]} where measured again` : MARK_WORDS[worst]) : inspected ? 'Not measured after the work' : MARK_WORDS.unseen;
     const notDone = unique(now.flatMap((f) => (callsForWork(f) ? f.work.filter((w) => !w.alternativeTo && !doneTasks.has(w.task)).map((w) => taskLabel(w.task)) : [])));
     areas.push({
       area,

@@ -39,7 +39,7 @@ export function ReadinessVerdict({ grade, report, testID = 'readiness' }: { grad
         <Text style={[TYPE_SCALE.heading, { color: look.ink }]} testID={`${testID}-verdict`}>
           {READINESS_WORDS[grade.readiness]}
         </Text>
-        {grade.provisional ? <MarkTag mark="unseen" label={`Provisional: ${grade.inspectedAreas.length} of ${AREAS.length} areas`} testID={`${testID}-provisional`} /> : null}
+        {grade.provisional ? <MarkTag mark="unseen" label="Provisional" testID={`${testID}-provisional`} /> : null}
       </View>
       {reasons.map((r) => (
         <Body key={r} variant="small" tone="secondary">
@@ -156,9 +156,9 @@ export function ConditionSummary({ grade, card, focus = [], testID = 'condition'
                   <FindingRow key={f.check} finding={f} />
                 ))}
               </View>
-            ) : (
-              <Body tone="secondary">Not inspected: nothing in this area is measured{focus.includes(area) ? ' yet' : ''}.</Body>
-            )}
+            ) : focus.includes(area) ? (
+              <Body tone="secondary">Nothing in this area is measured yet: its findings appear here as you fill in this step.</Body>
+            ) : null}
             {areaReport && report ? <AreaWork area={areaReport} report={report} currency={report.currency} /> : null}
           </View>
         );

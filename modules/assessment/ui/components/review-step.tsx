@@ -53,8 +53,8 @@ function InspectedSummary({ measurements, rules }: { measurements: Measurements;
   const provisional = inspected.length < rules.minInspectedAreas;
   if (!inspected.length) {
     return (
-      <Notice tone="error" title="Nothing is measured yet" testID="review-inspected">
-        Every area is not inspected. An intake with nothing measured cannot be submitted: go back and measure at least one area.
+      <Notice tone="caution" title="Nothing is measured yet" testID="review-inspected">
+        No area is inspected yet. An intake with nothing measured cannot be submitted: go back and measure at least one area.
       </Notice>
     );
   }
