@@ -204,7 +204,16 @@ async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: num
     if (done || i === 0) {
       // Logged hours run a little over or under the estimate, as real work does.
       const minutes = Math.round(line.hours * 60 * (i % 2 === 0 ? 1.15 : 0.9));
-      if (minutes > 0) await knex('time_entries').insert({ work_item_id: itemId, technician_id: staff.technician, started_at: at(2), minutes: Math.min(minutes, 1440), note: 'Demo entry' });
+      if (minutes > 0) {
+        const logged = Math.min(minutes, 1440);
+        const [{ id: entryId }] = await knex('time_entries').insert({ work_item_id: itemId, technician_id: staff.technician, started_at: at(2), minutes: logged, note: 'Demo entry' }).returning('id');
+        // On a piano still in the workshop, the first entry was put right once, as happens.
+        if (!done) {
+          const fixed = logged - 15;
+          await knex('time_entry_corrections').insert({ time_entry_id: entryId, corrected_by_id: staff.technician, corrected_at: at(2), old_minutes: logged, new_minutes: fixed, why: 'The timer ran on over the tea break.' });
+          await knex('time_entries').where({ id: entryId }).update({ minutes: fixed });
+        }
+      }
     }
   }
   if (!done || !story.remeasured) return;

@@ -408,6 +408,7 @@ it('warns at intake, before submit, of a piano taken in before with the same mak
   await expect(notice.textContent()).resolves.toContain('FW-0002');
   const open = page.getByTestId('same-piano-open-FW-0002');
   expect(await open.getAttribute('href')).toMatch(/^\/pianos\/\d+$/);
+  await notice.scrollIntoViewIfNeeded();
   await shot(page, 'intake-same-piano-phone');
   await pick(page, 'same-piano-confirm-FW-0002');
   await expect(notice.textContent()).resolves.toContain('Confirmed');

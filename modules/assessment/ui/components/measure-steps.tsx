@@ -300,7 +300,7 @@ export function PlayStep({ draft, update, errorAt }: StepProps) {
       <Card>
         <Body variant="subheading">Play test</Body>
         <Body variant="small" tone="secondary">
-          1 poor · 3 fair · 5 excellent. Tap a chosen number again to clear it.
+          From 1, plays badly, to 5, a pleasure to play. Tap a chosen number again to clear it.
         </Body>
         <RatingRow label="Bass: even from key to key" value={m.bassEvenness} onChange={set('bassEvenness')} error={errorAt(at('bassEvenness'))} testID="choice-bassEvenness" />
         <RatingRow label="Middle: even from key to key" value={m.middleEvenness} onChange={set('middleEvenness')} error={errorAt(at('middleEvenness'))} testID="choice-middleEvenness" />

@@ -187,7 +187,7 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
         />
       ))}
       <View style={styles.play}>
-        <Body variant="subheading">Play test, 1 (poor) to 5 (fine)</Body>
+        <Body variant="subheading">Play test, from 1 (plays badly) to 5 (a pleasure to play)</Body>
         {RATING_FIELDS.map((f) => (
           <ChoiceGroup
             key={f.key}
