@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { READINESS_WORDS, type Grade } from '@/modules/assessment/core/grade';
+import { AREAS, READINESS_WORDS, type Grade } from '@/modules/assessment/core/grade';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import type { RateCard } from '@/modules/shop/core/rate-card';
 import { DECISIONS, SELL_AS_IS_REASON_MIN, type Decision } from '@/modules/shop/core/work-input';
@@ -54,7 +54,7 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
         {grade ? (
           <Body tone="secondary">
             Assessed: {READINESS_WORDS[grade.readiness].toLowerCase()}
-            {grade.provisional ? `, provisional (${grade.inspectedAreas.length} of 6 areas inspected)` : ''}.
+            {grade.provisional ? `, provisional (${grade.inspectedAreas.length} of ${AREAS.length} areas inspected)` : ''}.
             {grade.referToTechnician ? ' Refer to a technician.' : ''}
             {grade.notRecommendedForRetail ? ' Not recommended for retail as it stands.' : ''}
           </Body>
