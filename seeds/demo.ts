@@ -30,21 +30,23 @@ interface DemoPiano {
   sizeCm: number;
   finish: string;
   stage: Stage;
+  /** which invented inspection it came in with, and what happened after the work */
+  story?: { inspection: InspectionKey; remeasured?: 'all' | 'not_hammers'; sellAsIsWhy?: string };
 }
 
 export const DEMO_PIANOS: DemoPiano[] = [
   { maker: 'Almsbury', model: 'Parlour 118', serialNumber: 'AL-204117', year: 1987, yearIsEstimate: false, kind: 'upright', sizeCm: 118, finish: 'satin walnut', stage: 'received' },
   { maker: 'Thornquist & Hale', model: 'Studio B', serialNumber: 'TH-88213', year: 1972, yearIsEstimate: true, kind: 'upright', sizeCm: 126, finish: 'polished ebony', stage: 'received' },
-  { maker: 'Corvelle', model: 'G-172', serialNumber: 'CV-530981', year: 2004, yearIsEstimate: false, kind: 'grand', sizeCm: 172, finish: 'polished ebony', stage: 'assessed' },
-  { maker: 'Marrowfield', model: 'Console 109', serialNumber: 'MF-11902', year: 1995, yearIsEstimate: false, kind: 'upright', sizeCm: 109, finish: 'cherry', stage: 'assessed' },
-  { maker: 'Wendell Kestrel', model: 'Salon', serialNumber: 'WK-7731', year: 1958, yearIsEstimate: true, kind: 'grand', sizeCm: 155, finish: 'mahogany', stage: 'in_workshop' },
-  { maker: 'Almsbury', model: 'Parlour 121', serialNumber: 'AL-310552', year: 2011, yearIsEstimate: false, kind: 'upright', sizeCm: 121, finish: 'white satin', stage: 'in_workshop' },
-  { maker: 'Solenne', model: 'Model 5', serialNumber: 'SO-19044', year: 1999, yearIsEstimate: false, kind: 'upright', sizeCm: 131, finish: 'polished ebony', stage: 'ready' },
-  { maker: 'Corvelle', model: 'U-125', serialNumber: 'CV-402277', year: 2008, yearIsEstimate: false, kind: 'upright', sizeCm: 125, finish: 'satin oak', stage: 'on_floor' },
-  { maker: 'Thornquist & Hale', model: 'Concert Parlour', serialNumber: 'TH-90077', year: 1983, yearIsEstimate: false, kind: 'grand', sizeCm: 188, finish: 'polished ebony', stage: 'on_floor' },
-  { maker: 'Marrowfield', model: 'Spinet 91', serialNumber: 'MF-06650', year: 1979, yearIsEstimate: true, kind: 'upright', sizeCm: 91, finish: 'walnut', stage: 'on_floor' },
-  { maker: 'Solenne', model: 'Model 3', serialNumber: 'SO-15520', year: 1992, yearIsEstimate: false, kind: 'upright', sizeCm: 121, finish: 'mahogany', stage: 'held' },
-  { maker: 'Wendell Kestrel', model: 'Boudoir', serialNumber: 'WK-8102', year: 1964, yearIsEstimate: true, kind: 'grand', sizeCm: 150, finish: 'satin black', stage: 'sold' },
+  { maker: 'Corvelle', model: 'G-172', serialNumber: 'CV-530981', year: 2004, yearIsEstimate: false, kind: 'grand', sizeCm: 172, finish: 'polished ebony', stage: 'assessed', story: { inspection: 'clean' } },
+  { maker: 'Marrowfield', model: 'Console 109', serialNumber: 'MF-11902', year: 1995, yearIsEstimate: false, kind: 'upright', sizeCm: 109, finish: 'cherry', stage: 'assessed', story: { inspection: 'partial' } },
+  { maker: 'Wendell Kestrel', model: 'Salon', serialNumber: 'WK-7731', year: 1958, yearIsEstimate: true, kind: 'grand', sizeCm: 155, finish: 'mahogany', stage: 'in_workshop', story: { inspection: 'worn' } },
+  { maker: 'Almsbury', model: 'Parlour 121', serialNumber: 'AL-310552', year: 2011, yearIsEstimate: false, kind: 'upright', sizeCm: 121, finish: 'white satin', stage: 'in_workshop', story: { inspection: 'fair' } },
+  { maker: 'Solenne', model: 'Model 5', serialNumber: 'SO-19044', year: 1999, yearIsEstimate: false, kind: 'upright', sizeCm: 131, finish: 'polished ebony', stage: 'ready', story: { inspection: 'fair', remeasured: 'all' } },
+  { maker: 'Corvelle', model: 'U-125', serialNumber: 'CV-402277', year: 2008, yearIsEstimate: false, kind: 'upright', sizeCm: 125, finish: 'satin oak', stage: 'on_floor', story: { inspection: 'worn', remeasured: 'all' } },
+  { maker: 'Thornquist & Hale', model: 'Concert Parlour', serialNumber: 'TH-90077', year: 1983, yearIsEstimate: false, kind: 'grand', sizeCm: 188, finish: 'polished ebony', stage: 'on_floor', story: { inspection: 'fair', remeasured: 'all' } },
+  { maker: 'Marrowfield', model: 'Spinet 91', serialNumber: 'MF-06650', year: 1979, yearIsEstimate: true, kind: 'upright', sizeCm: 91, finish: 'walnut', stage: 'on_floor', story: { inspection: 'fair', remeasured: 'not_hammers' } },
+  { maker: 'Solenne', model: 'Model 3', serialNumber: 'SO-15520', year: 1992, yearIsEstimate: false, kind: 'upright', sizeCm: 121, finish: 'mahogany', stage: 'held', story: { inspection: 'poor_play', sellAsIsWhy: 'The buyer wants it as a project piano to restore himself; told what it needs and priced for it.' } },
+  { maker: 'Wendell Kestrel', model: 'Boudoir', serialNumber: 'WK-8102', year: 1964, yearIsEstimate: true, kind: 'grand', sizeCm: 150, finish: 'satin black', stage: 'sold', story: { inspection: 'worn', remeasured: 'all' } },
 ];
 
 // The road each demo piano took to its stage, with the action that made each move.
@@ -62,12 +64,37 @@ const ROADS: Record<Stage, [string, Stage][]> = {
 };
 const MOVER: Record<string, string> = { submit_assessment: 'intake', approve_plan: 'manager', sell_as_is: 'manager', finish_workshop: 'technician', put_on_floor: 'floor', hold: 'system', sell: 'floor' };
 
-// Invented inspections: each demo piano gets one of these, by its place in the list.
-const DEMO_MEASUREMENTS: Measurements[] = [
-  { keySidePlayMm: 1.5, keyLevelDeviationMm: 0.8, hammerGrooveDepthMm: 1.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'light', bassWinding: 'dull', soundboardCracks: [{ lengthCm: 22, widestGapMm: 0.4, crossesRib: false, buzzes: false, hurtsTuning: false }], ribsSeparated: false, a4Hz: 437.2, tuningPins: 'firm', bassEvenness: 4, middleEvenness: 4, trebleEvenness: 3, dynamicRange: 4, overallImpression: 4 },
-  { keySidePlayMm: 2.6, keyTouchesNeighbour: true, keyLevelDeviationMm: 2.4, hammerGrooveDepthMm: 3.2, hammerFelt: 'hard', hammerFeltLeft: 'thin', steelCorrosion: 'moderate', bassWinding: 'dark', brokenStrings: 2, soundboardCracks: [], ribsSeparated: false, a4Hz: 428.4, tuningPins: 'some_loose', bassEvenness: 3, middleEvenness: 3, trebleEvenness: 3, dynamicRange: 3, overallImpression: 3 },
-  { keySidePlayMm: 1.2, keyLevelDeviationMm: 0.4, hammerGrooveDepthMm: 0.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'none', bassWinding: 'bright', soundboardCracks: [], ribsSeparated: false, a4Hz: 439.1, tuningPins: 'firm', bassEvenness: 5, middleEvenness: 5, trebleEvenness: 4, dynamicRange: 5, overallImpression: 5 },
-];
+// Invented inspections, each a case the demo shows: a fair piano, a worn one, a clean one, one
+// inspected only in part (a provisional grade), and one whose play test says not for retail.
+type InspectionKey = 'fair' | 'worn' | 'clean' | 'partial' | 'poor_play';
+const DEMO_MEASUREMENTS: Record<InspectionKey, Measurements> = {
+  fair: { keySidePlayMm: 1.5, keyLevelDeviationMm: 0.8, hammerGrooveDepthMm: 1.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'light', bassWinding: 'dull', soundboardCracks: [{ lengthCm: 22, widestGapMm: 0.4, crossesRib: false, buzzes: false, hurtsTuning: false }], ribsSeparated: false, a4Hz: 437.2, tuningPins: 'firm', bassEvenness: 4, middleEvenness: 4, trebleEvenness: 3, dynamicRange: 4, overallImpression: 4 },
+  worn: { keySidePlayMm: 2.6, keyTouchesNeighbour: true, keysTouchingNeighbour: [23, 24, 61], keyLevelDeviationMm: 2.4, hammerGrooveDepthMm: 3.2, hammerFelt: 'hard', hammerFeltLeft: 'thin', steelCorrosion: 'moderate', bassWinding: 'dark', brokenStrings: 2, soundboardCracks: [], ribsSeparated: false, a4Hz: 428.4, tuningPins: 'some_loose', bassEvenness: 3, middleEvenness: 3, trebleEvenness: 3, dynamicRange: 3, overallImpression: 3 },
+  clean: { keySidePlayMm: 1.2, keyLevelDeviationMm: 0.4, hammerGrooveDepthMm: 0.8, hammerFelt: 'firm', hammerFeltLeft: 'ample', steelCorrosion: 'none', bassWinding: 'bright', soundboardCracks: [], ribsSeparated: false, a4Hz: 439.1, tuningPins: 'firm', bassEvenness: 5, middleEvenness: 5, trebleEvenness: 4, dynamicRange: 5, overallImpression: 5 },
+  // Seen in the seller's hall: keys, hammers and pitch only, the rest left for the showroom.
+  partial: { keySidePlayMm: 1.8, keyLevelDeviationMm: 1.1, hammerGrooveDepthMm: 1.4, hammerFelt: 'firm', a4Hz: 434.0 },
+  poor_play: { keySidePlayMm: 1.9, keyLevelDeviationMm: 1.9, hammerGrooveDepthMm: 2.1, hammerFelt: 'hard', hammerFeltLeft: 'ample', steelCorrosion: 'light', bassWinding: 'dull', brokenStrings: 0, ribsSeparated: false, a4Hz: 436.0, tuningPins: 'firm', bassEvenness: 2, middleEvenness: 3, trebleEvenness: 2, dynamicRange: 3, overallImpression: 2 },
+};
+
+// The workshop's re-measurements of what it worked on: only these fields are measured again.
+const AFTER_WORK: Measurements = {
+  keyTouchesNeighbour: false,
+  keysTouchingNeighbour: null,
+  keySidePlayMm: 1.3,
+  keyLevelDeviationMm: 0.3,
+  hammerGrooveDepthMm: 0.6,
+  // new or reshaped and voiced hammers
+  hammerFelt: 'firm',
+  hammerFeltLeft: 'ample',
+  brokenStrings: 0,
+  a4Hz: 440,
+  bassEvenness: 4,
+  middleEvenness: 4,
+  trebleEvenness: 4,
+  dynamicRange: 4,
+  overallImpression: 4,
+};
+const HAMMER_FIELDS = ['hammerGrooveDepthMm', 'hammerFelt', 'hammerFeltLeft'];
 
 const DAY = 86_400_000;
 
@@ -105,7 +132,7 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
       created_at: new Date(arrived).toISOString(),
       stage_changed_at: new Date(arrived + road.length * 9 * DAY).toISOString(),
     }).returning('id');
-    await seedStory(knex, staff, id, index, p.stage, arrived);
+    await seedStory(knex, staff, id, index, p, arrived);
     pianos += 1;
   }
   // Pianos ready for sale carry an asking price; those on the floor have a published disclosure.
@@ -132,16 +159,17 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
 }
 
 // A demo piano's past: its stage moves, and once assessed, its intake, assessment and workshop plan.
-async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: number, index: number, stage: Stage, arrived: number): Promise<void> {
+async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: number, index: number, piano: DemoPiano, arrived: number): Promise<void> {
+  const { stage, story } = piano;
   const at = (step: number) => new Date(arrived + step * 9 * DAY).toISOString();
   await knex('stage_moves').insert({ piano_id: pianoId, action: 'receive', from_stage: null, to_stage: 'received', by_user_id: staff.intake, by_role: 'intake', at: at(0) });
   let from: Stage = 'received';
   for (const [step, [action, to]] of ROADS[stage].entries()) {
     const role = MOVER[action];
-    await knex('stage_moves').insert({ piano_id: pianoId, action, from_stage: from, to_stage: to, by_user_id: role === 'system' ? null : staff[role], by_role: role, at: at(step + 1), why: action === 'hold' ? 'Deposit paid (demo)' : null });
+    await knex('stage_moves').insert({ piano_id: pianoId, action, from_stage: from, to_stage: to, by_user_id: role === 'system' ? null : staff[role], by_role: role, at: at(step + 1), why: action === 'hold' ? 'Deposit paid (demo)' : action === 'sell_as_is' ? (story?.sellAsIsWhy ?? null) : null });
     from = to;
   }
-  if (stage === 'received') return;
+  if (stage === 'received' || !story) return;
   await knex('intakes').insert({
     piano_id: pianoId,
     seller_name: ['Wren Halvorsen', 'Dario Quennell', 'Maud Ostrander-Pike'][index % 3],
@@ -154,10 +182,10 @@ async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: num
     created_by_id: staff.intake,
     created_at: at(0),
   });
-  const measurements = DEMO_MEASUREMENTS[index % DEMO_MEASUREMENTS.length];
+  const measurements = DEMO_MEASUREMENTS[story.inspection];
   const grade = gradeAssessment(measurements, defaultRules);
   const [{ id: assessmentId }] = await knex('assessments').insert({
-    piano_id: pianoId, version: 1, kind: 'intake', measurements: JSON.stringify(measurements), grade: JSON.stringify(grade), score: grade.score, band: grade.band,
+    piano_id: pianoId, version: 1, kind: 'intake', measurements: JSON.stringify(measurements), grade: JSON.stringify(grade),
     refer_to_technician: grade.referToTechnician, not_recommended_for_retail: grade.notRecommendedForRetail, rules_version: grade.rulesVersion, submitted_by_id: staff.intake, submitted_at: at(1),
   }).returning('id');
   if (!['in_workshop', 'ready', 'on_floor', 'sold'].includes(stage)) return;
@@ -176,30 +204,25 @@ async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: num
     if (done || i === 0) {
       // Logged hours run a little over or under the estimate, as real work does.
       const minutes = Math.round(line.hours * 60 * (i % 2 === 0 ? 1.15 : 0.9));
-      if (minutes > 0) await knex('time_entries').insert({ work_item_id: itemId, technician_id: staff.technician, started_at: at(2), minutes: Math.min(minutes, 1440), note: 'Demo entry' });
+      if (minutes > 0) {
+        const logged = Math.min(minutes, 1440);
+        const [{ id: entryId }] = await knex('time_entries').insert({ work_item_id: itemId, technician_id: staff.technician, started_at: at(2), minutes: logged, note: 'Demo entry' }).returning('id');
+        // On a piano still in the workshop, the first entry was put right once, as happens.
+        if (!done) {
+          const fixed = logged - 15;
+          await knex('time_entry_corrections').insert({ time_entry_id: entryId, corrected_by_id: staff.technician, corrected_at: at(2), old_minutes: logged, new_minutes: fixed, why: 'The timer ran on over the tea break.' });
+          await knex('time_entries').where({ id: entryId }).update({ minutes: fixed });
+        }
+      }
     }
   }
-  if (!done) return;
-  // The workshop's re-measurements of what it worked on.
-  const after: Measurements = {
-    ...measurements,
-    keyTouchesNeighbour: false,
-    keySidePlayMm: 1.3,
-    keyLevelDeviationMm: 0.3,
-    hammerGrooveDepthMm: 0.6,
-    // new or reshaped and voiced hammers
-    hammerFelt: 'firm',
-    hammerFeltLeft: 'ample',
-    brokenStrings: 0,
-    a4Hz: 440,
-    tuningPins: measurements.tuningPins === 'loose' ? 'firm' : measurements.tuningPins,
-    bassEvenness: Math.max(4, measurements.bassEvenness ?? 4),
-    middleEvenness: Math.max(4, measurements.middleEvenness ?? 4),
-    trebleEvenness: Math.max(4, measurements.trebleEvenness ?? 4),
-  };
+  if (!done || !story.remeasured) return;
+  // The workshop measures again what it worked on; on one piano nobody measured the hammers again.
+  const remeasured = Object.fromEntries(Object.entries(AFTER_WORK).filter(([f]) => story.remeasured === 'all' || !HAMMER_FIELDS.includes(f))) as Measurements;
+  const after: Measurements = { ...measurements, ...remeasured };
   const regrade = gradeAssessment(after, defaultRules);
   await knex('assessments').insert({
-    piano_id: pianoId, version: 2, kind: 'post_workshop', measurements: JSON.stringify(after), grade: JSON.stringify(regrade), score: regrade.score, band: regrade.band,
+    piano_id: pianoId, version: 2, kind: 'post_workshop', measurements: JSON.stringify(after), grade: JSON.stringify(regrade), remeasured_fields: Object.keys(remeasured).sort(),
     refer_to_technician: regrade.referToTechnician, not_recommended_for_retail: regrade.notRecommendedForRetail, rules_version: regrade.rulesVersion,
     change_note: 'Re-measured after workshop work.', submitted_by_id: staff.technician, submitted_at: at(3),
   });

@@ -42,6 +42,7 @@ it('walks a buyer through the disclosure on the tablet, takes their acknowledgem
   await tablet.getByTestId('present-next').click();
   expect(await position()).toBe(`3 / ${steps}`);
   expect(await tablet.getByTestId('present-step-title').textContent()).not.toBe(firstArea);
+  await expect(tablet.getByTestId('present-condition').textContent()).resolves.toMatch(/^(Fine|Noted|Needs work|Major work|Not inspected|Not measured after the work)( where measured again)?$/);
   await shot(tablet, 'disc-e2e-tablet-area');
   await tablet.getByTestId('present-prev').click();
   expect(await tablet.getByTestId('present-step-title').textContent()).toBe(firstArea);
@@ -104,5 +105,43 @@ it('answers an unknown link with a plain page, without asking anyone to sign in'
   await phone.getByTestId('disclosure-missing').waitFor();
   await phone.getByText('This link does not lead to a disclosure').waitFor();
   expect(new URL(phone.url()).pathname).toBe(`/d/${token}`);
+  await phone.close();
+});
+
+// Read only: FW-0010 (the third piano on the floor) and FW-0011 (held) are no other journey's.
+it('shows the buyer one set of marks, each with its word, and what was found, done and measured after kept apart', async () => {
+  const floorToken = await login('floor@feltwire.test');
+  const linkOf = async (stockNumber: string) => {
+    const { piano } = await gql<{ piano: { id: number } }>(floorToken, `{ piano(stockNumberEq: "${stockNumber}") { id } }`);
+    return (await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`)).disclosures.token;
+  };
+  const phone = await buyer.context.newPage();
+  await phone.setViewportSize(PHONE);
+  await phone.goto(`${baseUrl()}/d/${await linkOf('FW-0010')}`);
+  await phone.getByTestId('mark-key').waitFor();
+  // the key names each mark in words; every area's tag carries words, never colour alone
+  const key = (await phone.getByTestId('mark-key').textContent()) ?? '';
+  for (const word of ['Fine', 'Noted', 'Needs work', 'Major work', 'Not inspected']) expect(key).toContain(word);
+  for (const area of ['keys', 'hammers', 'strings', 'soundboard', 'tuning', 'play', 'case']) {
+    expect(((await phone.getByTestId(`disclosure-mark-${area}`).textContent()) ?? '').trim().length).toBeGreaterThan(0);
+  }
+  // The hammers were worked on and not measured again: what was found is before the work, not as it stands.
+  await expect(phone.getByTestId('disclosure-mark-hammers').textContent()).resolves.toBe('Not measured after the work');
+  const hammers = phone.getByTestId('disclosure-area-hammers');
+  await expect(hammers.getByTestId('area-section-hammers-found').textContent()).resolves.toMatch(/^Found at intake on .+, before the work/);
+  await hammers.getByTestId('area-section-hammers-work').waitFor();
+  await expect(hammers.getByTestId('area-section-hammers-unmeasured').textContent()).resolves.toContain('Hammer wear');
+  await expect(hammers.getByTestId('area-section-hammers-after').count()).resolves.toBe(0);
+  await phone.getByTestId('disclosure-mark-keys').scrollIntoViewIfNeeded();
+  await shot(phone, 'disc-e2e-marks-phone');
+  await hammers.scrollIntoViewIfNeeded();
+  await shot(phone, 'disc-e2e-before-the-work-phone');
+
+  // Sold as it stands: said plainly, up front, with what was not done.
+  await phone.goto(`${baseUrl()}/d/${await linkOf('FW-0011')}`);
+  const notDone = phone.getByTestId('disclosure-not-done');
+  await notDone.waitFor();
+  await expect(notDone.textContent()).resolves.toMatch(/^Sold as it stands.*not been reconditioned.*not done: .*Regulation/);
+  await shot(phone, 'disc-e2e-as-it-stands-phone');
   await phone.close();
 });

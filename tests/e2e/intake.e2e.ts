@@ -2,7 +2,7 @@ import path from 'node:path';
 
 import type { BrowserContext, Page } from 'playwright-core';
 
-import { gradeAssessment } from '@/modules/assessment/core/grade';
+import { AREAS, READINESS_WORDS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
 
 import { baseUrl, newPage, openBrowser, PHONE, shot, signIn, WIDE } from './support/browser';
 
@@ -17,6 +17,10 @@ const JPEG = path.join(__dirname, '../fixtures/keys-photo.jpg');
 
 const fill = (page: Page, id: string, value: string) => page.getByTestId(id).fill(value);
 const pick = (page: Page, id: string) => page.getByTestId(id).click();
+// The verdict a condition panel shows: the live one while grading, the stored one on the piano's page.
+const verdict = (page: Page, panel: string) => page.getByTestId(panel).first().getByTestId('readiness-verdict').textContent();
+const says = (g: Grade) => READINESS_WORDS[g.readiness];
+
 async function next(page: Page, title: string) {
   await page.getByTestId('step-next').click();
   await expect(page.getByTestId('step-title').textContent()).resolves.toBe(title);
@@ -87,13 +91,15 @@ it('intake staff log a whole trade-in on a phone, with a photo, keep the draft o
     dynamicRange: 4,
     overallImpression: 4,
   });
-  await expect(page.getByTestId('grade-score').first().textContent()).resolves.toContain(String(expected.score));
+  await expect(verdict(page, 'live-condition')).resolves.toBe(says(expected));
   await page.getByText('a wide crack (a payment card fits in it)').first().waitFor();
+  // Every area measured: none is said to be not inspected.
+  await expect(page.getByTestId('review-inspected').textContent()).resolves.toContain('6 of 6 areas inspected');
   await shot(page, 'intake-review-phone');
 
   await pick(page, 'submit-intake');
   await page.waitForURL(/\/pianos\/\d+$/);
-  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(expected.score));
+  await expect(verdict(page, 'assessment-condition')).resolves.toBe(says(expected));
   await page.getByText('Marrowfield').first().waitFor();
   await page.getByTestId('photo-thumb').first().waitFor();
   await shot(page, 'intake-piano-phone');
@@ -142,7 +148,8 @@ it('lets a manager correct an assessment with a reason, and the history shows ve
   await signIn(page, 'manager@feltwire.test');
   await page.waitForURL('**/stock');
   await page.goto(`${baseUrl()}/pianos/${pianoId}`);
-  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(gradeAssessment(before).score));
+  await expect(verdict(page, 'assessment-condition')).resolves.toBe(says(gradeAssessment(before)));
+  await page.getByTestId('assessment-condition').getByTestId('readiness-provisional').waitFor();
 
   await pick(page, 'correct-assessment');
   await expect(page.getByTestId('step-title').textContent()).resolves.toBe('Keys');
@@ -161,7 +168,7 @@ it('lets a manager correct an assessment with a reason, and the history shows ve
   await pick(page, 'submit-correction');
   await page.waitForURL(new RegExp(`/pianos/${pianoId}$`));
   const after = { ...before, keySidePlayMm: 3.1 };
-  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(gradeAssessment(after).score));
+  await expect(verdict(page, 'assessment-condition')).resolves.toBe(says(gradeAssessment(after)));
   const v2 = page.getByTestId('history-version-2');
   await v2.waitFor();
   const text = await v2.textContent();
@@ -345,12 +352,70 @@ it('intake staff assess a piano logged before its inspection from its page, its 
   await fill(page, 'field-keySidePlayMm', '1.8');
   for (const title of ['Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
   const expected = gradeAssessment({ keySidePlayMm: 1.8 });
-  await expect(page.getByTestId('grade-score').first().textContent()).resolves.toContain(String(expected.score));
+  await expect(verdict(page, 'live-condition')).resolves.toBe(says(expected));
 
   await pick(page, 'submit-intake');
   await page.waitForURL(new RegExp(`/pianos/${pianoId}$`));
-  await expect(page.getByTestId('assessment-score').first().textContent()).resolves.toContain(String(expected.score));
+  await expect(verdict(page, 'assessment-condition')).resolves.toBe(says(expected));
   await expect(page.getByTestId('piano-flash').textContent()).resolves.toContain('FW-0001');
   await expect(page.getByTestId('assess-piano').count()).resolves.toBe(0);
+  await page.close();
+});
+
+it('an intake with every step left empty shows every area not inspected, claims no quality, and cannot be submitted', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  await fill(page, 'field-seller-name', 'Perpetua Hallsworth');
+  await pick(page, 'choice-acquisition-purchase');
+  await pick(page, 'choice-inspectedAt-showroom');
+  await fill(page, 'field-maker', 'Hollowmere');
+  await pick(page, 'choice-kind-upright');
+  for (const title of ['Keys', 'Hammers', 'Strings', 'Soundboard', 'Play and pitch', 'Photos', 'Review']) await next(page, title);
+
+  // The review says so, area by area, and the live panel gives no verdict of quality.
+  await expect(page.getByTestId('review-inspected').textContent()).resolves.toContain('Nothing is measured yet');
+  for (const area of AREAS) {
+    await expect(page.getByTestId('live-condition').getByTestId(`area-mark-${area}`).textContent()).resolves.toBe('Not inspected');
+    await page.getByTestId(`review-not-inspected-${area}`).waitFor();
+  }
+  await expect(verdict(page, 'live-condition')).resolves.toBe('Not judged yet');
+  const panel = (await page.getByTestId('live-condition').textContent()) ?? '';
+  for (const claim of ['Ready for the floor', 'Fine', 'Excellent', 'of 100']) expect(panel).not.toContain(claim);
+  await expect(page.getByTestId('grade-chip').textContent()).resolves.toContain('0 of 6 areas');
+  await shot(page, 'intake-empty-review-phone');
+
+  await pick(page, 'submit-intake');
+  await page.getByText('The inspection has nothing measured yet').first().waitFor();
+  expect(new URL(page.url()).pathname).toBe('/trade-ins/new');
+  await pick(page, 'discard-draft');
+  await pick(page, 'confirm-discard');
+  await page.close();
+});
+
+it('warns at intake, before submit, of a piano taken in before with the same maker, model and serial', async () => {
+  const page = await newPage(context, PHONE);
+  await signIn(page, 'intake@feltwire.test');
+  await page.waitForURL('**/trade-ins');
+  await pick(page, 'start-trade-in');
+  // FW-0002 in the demo: the same maker, model and serial, typed another way
+  await fill(page, 'field-maker', 'Thornquist & Hale');
+  await fill(page, 'field-model', 'Studio B');
+  await fill(page, 'field-serialNumber', 'th 88213');
+  const notice = page.getByTestId('same-piano');
+  await notice.waitFor();
+  await expect(notice.textContent()).resolves.toContain('FW-0002');
+  const open = page.getByTestId('same-piano-open-FW-0002');
+  expect(await open.getAttribute('href')).toMatch(/^\/pianos\/\d+$/);
+  await notice.scrollIntoViewIfNeeded();
+  await shot(page, 'intake-same-piano-phone');
+  await pick(page, 'same-piano-confirm-FW-0002');
+  await expect(notice.textContent()).resolves.toContain('Confirmed');
+  // Another serial: the warning goes, and so does the confirmation.
+  await fill(page, 'field-serialNumber', 'TH-88214');
+  await notice.waitFor({ state: 'detached' });
+  await pick(page, 'discard-draft');
+  await pick(page, 'confirm-discard');
   await page.close();
 });

@@ -179,3 +179,90 @@ describe('a published disclosure', () => {
     expect(anon.status).toBe(401);
   });
 });
+
+describe('what cannot be published', () => {
+  const publish = async (pianoId: number) => api.gql(await api.tokenFor('manager'), `mutation { publishDisclosure(pianoId: ${pianoId}) }`);
+  const intake = async (measurements: Json) => (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ measurements }) })).submitIntake;
+
+  it('refuses a provisional grade with a conflict that says why, and publishes nothing', async () => {
+    const out = await intake({ keySidePlayMm: 1.2, hammerGrooveDepthMm: 0.8, overallImpression: 4 });
+    expect(out.grade.provisional).toBe(true);
+    const res = await publish(out.pianoId);
+    expect(res.body.errors[0].extensions.code).toBe('CONFLICT');
+    expect(res.body.errors[0].message).toBe(
+      `${out.stockNumber} cannot be published yet. The grade is provisional: 3 of 6 areas are inspected and the shop asks for 5. Correct the assessment with the missing areas first.`,
+    );
+    expect(await api.knex('disclosures').where({ piano_id: out.pianoId }).count('* as n').first()).toEqual({ n: 0 });
+    expect(await api.knex('disclosure_links').where({ piano_id: out.pianoId }).count('* as n').first()).toEqual({ n: 0 });
+  });
+
+  it('refuses a grade without the play test, and takes it once the play test is in', async () => {
+    const noPlay = buildMeasurements({ bassEvenness: null, middleEvenness: null, trebleEvenness: null, dynamicRange: null, overallImpression: null });
+    const out = await intake(noPlay);
+    expect(out.grade).toMatchObject({ provisional: false, playTested: false });
+    const res = await publish(out.pianoId);
+    expect(res.body.errors[0]).toMatchObject({ extensions: { code: 'CONFLICT' } });
+    expect(res.body.errors[0].message).toContain('The play test is missing, and a disclosure needs it');
+    await call('intake', 'mutation($input: JSON!) { correctAssessment(input: $input) }', { input: { pianoId: out.pianoId, measurements: buildMeasurements(), changeNote: 'Play test done in the showroom' } });
+    expect((await publish(out.pianoId)).body.data.publishDisclosure.version).toBe(1);
+  });
+});
+
+describe('the demo’s disclosures', () => {
+  const contentOf = async (stockNumber: string) => {
+    const piano = await api.knex('pianos').where({ stock_number: stockNumber }).first();
+    return (await api.knex('disclosures').where({ piano_id: piano.id }).orderBy('version', 'desc').first()).content;
+  };
+
+  it('a piano whose hammers were worked on and not measured again shows them as found before the work', async () => {
+    const c = await contentOf('FW-0010');
+    const hammers = c.areas.find((a: Json) => a.area === 'hammers');
+    expect(hammers).toMatchObject({ foundBeforeWork: true, measuredAfter: [], mark: 'unseen', condition: 'Not measured after the work', notMeasuredAgain: ['hammer wear', 'hammer felt'] });
+    // voicing, asked for by the play test, is work on the hammers too
+    expect(hammers.workDone).toEqual(['Reshape and voice hammers', 'Voicing']);
+    const keys = c.areas.find((a: Json) => a.area === 'keys');
+    expect(keys.measuredAfter.map((f: Json) => f.mark)).toEqual(['fine', 'fine']);
+  });
+
+  it('a piano sold as it stands says what was not done', async () => {
+    const c = await contentOf('FW-0011');
+    expect(c.soldAsItStands).toBe(true);
+    expect(c.notDone).toEqual(expect.arrayContaining(['Regulation', 'Voicing', 'Reshape and voice hammers']));
+    const history = (await call('manager', `{ stageHistory(pianoId: ${(await api.knex('pianos').where({ stock_number: 'FW-0011' }).first()).id}) }`)).stageHistory;
+    expect(history.find((h: Json) => h.action === 'sell_as_is').why).toMatch(/project piano/);
+  });
+});
+
+describe('a version published in the first format', () => {
+  it('stays readable as published, and its signed copy prints its own words', async () => {
+    const out = (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
+    const pub = (await call('manager', `mutation { publishDisclosure(pianoId: ${out.pianoId}) }`)).publishDisclosure;
+    const link = await api.knex('disclosure_links').where({ piano_id: out.pianoId }).first();
+    // Content as format 1 stored it: a condition word per area, severities, no format field.
+    const v1 = {
+      dealerName: 'Larkspur Lane Pianos',
+      piano: { stockNumber: out.stockNumber, maker: 'Almsbury', model: 'Parlour 118', serialNumber: null, year: '1981', kind: 'upright', size: 'upright, 118 cm tall', finish: null },
+      askingPrice: null,
+      assessedOn: '2026-11-20',
+      assessedAfterWorkshop: false,
+      pitch: null,
+      areas: [{ area: 'hammers', label: 'Hammers', condition: 'Needs attention', severity: 'needs_work', findings: [{ severity: 'needs_work', text: 'Hammer string grooves are 2.2 mm deep.' }], workDone: [], photoIds: [] }],
+      photos: [],
+      warranty: 'One year.',
+      notices: [],
+    };
+    const digest = sha256Hex(JSON.stringify(v1));
+    const [row] = await api.knex('disclosures').insert({ piano_id: out.pianoId, version: pub.version + 1, content: JSON.stringify(v1), html: '<p>as published</p>', digest, published_by_id: 1 }).returning('id');
+    const read = (await api.http.get(`/api/public/disclosures/${link.token}`)).body;
+    expect(read.content).toEqual(v1);
+    expect((await api.http.get(`/api/public/disclosures/${link.token}/html`)).text).toBe('<p>as published</p>');
+    const ack = await api.http.post(`/api/public/disclosures/${link.token}/acknowledge`).send({ fullName: 'Tam Oldfield', email: 'tam@example.test', read: true, digest });
+    expect(ack.status).toBe(201);
+    await call('floor', `mutation { countersign(acknowledgementId: ${ack.body.acknowledgementId}) }`);
+    const mail = api.mail.messages.find((m) => m.to.includes('tam@example.test'))!;
+    const text = await pdfText(mail.attachments[0].content);
+    expect(text).toContain('Hammers: Needs attention');
+    expect(text).toContain('Hammer string grooves are 2.2 mm deep.');
+    expect(row.id).toBeGreaterThan(0);
+  });
+});

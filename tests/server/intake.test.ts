@@ -33,13 +33,16 @@ describe('submitIntake', () => {
     expect(piano.stock_number).toBe(out.stockNumber);
     const stored = await api.knex('assessments').where({ piano_id: out.pianoId }).first();
     expect(stored.grade).toEqual(expected);
-    expect(stored).toMatchObject({ version: 1, score: expected.score, band: expected.band, rules_version: defaultRules.version });
-    // the stored grade names both the cosmetic crack and the worn hammers
-    const checks = stored.grade.findings.map((f: { check: string; severity: string }) => `${f.check}:${f.severity}`);
-    expect(checks).toEqual(expect.arrayContaining(['soundboard.crack.1:watch', 'hammers.wear:needs_work']));
+    expect(stored).toMatchObject({ version: 1, rules_version: defaultRules.version, refer_to_technician: false, not_recommended_for_retail: false });
+    expect(stored).not.toHaveProperty('score');
+    expect(stored).not.toHaveProperty('band');
+    // the stored grade names both the cosmetic crack and the worn hammers, and says how ready the piano is
+    const checks = stored.grade.findings.map((f: { check: string; mark: string }) => `${f.check}:${f.mark}`);
+    expect(checks).toEqual(expect.arrayContaining(['soundboard.crack.1:noted', 'hammers.wear:work']));
+    expect(stored.grade).toMatchObject({ format: 2, readiness: 'work_first', provisional: false, playTested: true });
 
-    const read = await api.gql(await api.tokenFor('technician'), `{ assessments(pianoIdEq: ${out.pianoId}) { version score band rulesVersion } }`);
-    expect(read.body.data.assessments).toEqual([{ version: 1, score: expected.score, band: expected.band, rulesVersion: defaultRules.version }]);
+    const read = await api.gql(await api.tokenFor('technician'), `{ assessments(pianoIdEq: ${out.pianoId}) { version rulesVersion referToTechnician } }`);
+    expect(read.body.data.assessments).toEqual([{ version: 1, rulesVersion: defaultRules.version, referToTechnician: false }]);
   });
 
   it.each([
@@ -47,6 +50,10 @@ describe('submitIntake', () => {
     [{ measurements: buildMeasurements({ hammerGrooveDepthMm: -1 }) }, 'measurements.hammerGrooveDepthMm'],
     [{ measurements: buildMeasurements({ a4Hz: 'flat' as never }) }, 'measurements.a4Hz'],
     [{ measurements: buildMeasurements({ stickingKeys: [90] }) }, 'measurements.stickingKeys.0'],
+    [{ measurements: buildMeasurements({ keyTouchesNeighbour: true }) }, 'measurements.keysTouchingNeighbour'],
+    [{ measurements: buildMeasurements({ keyTouchesNeighbour: true, keysTouchingNeighbour: [0, 40] }) }, 'measurements.keysTouchingNeighbour.0'],
+    [{ measurements: {} }, 'measurements'],
+    [{ measurements: { keytopDamage: [], soundboardCracks: [] } }, 'measurements'],
     [{ seller: { name: '' } }, 'seller.name'],
     [{ acquisition: 'gift' }, 'acquisition'],
     [{ receivedOn: '28/11/2026' }, 'receivedOn'],
@@ -58,6 +65,23 @@ describe('submitIntake', () => {
     expect(res.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field });
     expect(res.body.errors[0].message.startsWith(`${field}: `)).toBe(true);
     expect(await counts()).toEqual(before);
+  });
+
+  it('refuses an intake with nothing measured, in words', async () => {
+    const res = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ measurements: {} }) });
+    expect(res.body.errors[0].message).toBe('measurements: has nothing measured yet: measure at least one area before submitting');
+  });
+
+  it('takes a provisional intake, and says it is provisional with no verdict of quality', async () => {
+    const res = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: { maker: 'Hollowmere', kind: 'upright' }, measurements: { keySidePlayMm: 1.2, a4Hz: 440 } }) });
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.submitIntake.grade).toMatchObject({ inspectedAreas: ['keys', 'tuning'], provisional: true, playTested: false, readiness: 'unjudged' });
+  });
+
+  it('names the keys that touch a neighbour in the finding', async () => {
+    const res = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: { maker: 'Hollowmere', kind: 'upright' }, measurements: buildMeasurements({ keyTouchesNeighbour: true, keysTouchingNeighbour: [61, 23] }) }) });
+    const finding = res.body.data.submitIntake.grade.findings.find((f: { check: string }) => f.check === 'keys.sidePlay');
+    expect(finding.finding).toBe('Keys 23, 61 can be pushed sideways until they touch their neighbours: the key bushings are worn.');
   });
 
   it.each(['technician', 'floor'] as Role[])('refuses %s and stores nothing', async (role) => {
@@ -101,10 +125,10 @@ describe('seller details', () => {
     const token = await api.tokenFor(role);
     const res = await api.gql(
       token,
-      `{ intake(pianoId: ${pianoId}) piano(idEq: ${pianoId}) { stockNumber maker } assessmentHistory(pianoId: ${pianoId}) assessments(pianoIdEq: ${pianoId}) { score } }`,
+      `{ intake(pianoId: ${pianoId}) piano(idEq: ${pianoId}) { stockNumber maker } assessmentHistory(pianoId: ${pianoId}) assessments(pianoIdEq: ${pianoId}) { version } }`,
     );
     expect(res.body.errors).toBeUndefined();
-    expect(res.body.data.intake).toEqual({ pianoId, acquisition: 'trade_in', receivedOn: '2026-11-28', inspectedAt: 'customer_home', createdAt: expect.any(String) });
+    expect(res.body.data.intake).toEqual({ pianoId, acquisition: 'trade_in', receivedOn: '2026-11-28', inspectedAt: 'customer_home', createdAt: expect.any(String), samePianoAs: null });
     const text = JSON.stringify(res.body);
     for (const secret of ['Rosalind', 'Vantongeren', '555 0100', 'rosalind@example.test', 'Quince Row', 'before the holidays']) expect(text).not.toContain(secret);
   });
@@ -148,6 +172,53 @@ describe('corrections', () => {
   });
 });
 
+describe('the same piano taken in twice', () => {
+  const SAME = 'query($m: String!, $mo: String, $s: String!, $x: Int) { samePianos(maker: $m, model: $mo, serialNumber: $s, exceptPianoId: $x) }';
+  const again = { maker: 'Almsbury', model: 'Parlour 118', serialNumber: 'AL-204117', kind: 'upright' };
+
+  it('tells the client before submit which record has the same maker, model and serial', async () => {
+    const token = await api.tokenFor('intake');
+    // FW-0001 in the demo: case, spaces and dashes do not make another serial
+    const res = await api.gql(token, SAME, { m: 'almsbury ', mo: 'PARLOUR 118', s: 'al 204117' });
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.samePianos).toEqual([{ id: expect.any(Number), stockNumber: 'FW-0001', stage: 'received', maker: 'Almsbury', model: 'Parlour 118', serialNumber: 'AL-204117', createdAt: expect.any(String) }]);
+    const otherModel = await api.gql(token, SAME, { m: 'Almsbury', mo: 'Parlour 121', s: 'AL-204117' });
+    expect(otherModel.body.data.samePianos).toEqual([]);
+    const itself = await api.gql(token, SAME, { m: 'Almsbury', mo: 'Parlour 118', s: 'AL-204117', x: res.body.data.samePianos[0].id });
+    expect(itself.body.data.samePianos).toEqual([]);
+    const floor = await api.gql(await api.tokenFor('floor'), SAME, { m: 'Almsbury', s: 'AL-204117' });
+    expect(floor.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
+  });
+
+  it('refuses the second intake until intake staff say it is the same piano coming back, then records the link', async () => {
+    const before = await counts();
+    const first = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: again }) });
+    expect(first.body.errors[0]).toMatchObject({ extensions: { code: 'CONFLICT', field: 'samePianoAs' } });
+    expect(first.body.errors[0].message).toBe('FW-0001 has the same maker, model and serial number. If this is the same piano coming back, say so and submit again; otherwise check the serial number.');
+    expect(await counts()).toEqual(before);
+    const fw1 = (await api.knex('pianos').where({ stock_number: 'FW-0001' }).first()).id;
+    const wrong = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: again, samePianoAs: fw1 + 1000 }) });
+    expect(wrong.body.errors[0].extensions.field).toBe('samePianoAs');
+    const ok = await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: again, samePianoAs: fw1 }) });
+    expect(ok.body.errors).toBeUndefined();
+    const record = await api.gql(await api.tokenFor('intake'), `{ intake(pianoId: ${ok.body.data.submitIntake.pianoId}) }`);
+    expect(record.body.data.intake.samePianoAs).toEqual({ id: fw1, stockNumber: 'FW-0001' });
+  });
+});
+
+describe('assessments stored before the grade had marks', () => {
+  it('are read from their own measurements with the rules of their own version, the stored document left as it was', async () => {
+    const out = (await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake({ piano: { maker: 'Quillby', kind: 'upright' } }) })).body.data.submitIntake;
+    // A grade document as the first format stored it: a score and a band, severities, no areas.
+    const oldGrade = { rulesVersion: defaultRules.version, findings: [{ area: 'keys', check: 'keys.level', severity: 'watch', finding: 'old words', work: [], mustDisclose: true }], score: 97, band: 'excellent', referToTechnician: false, notRecommendedForRetail: false, centsFromStandard: null };
+    await api.knex('assessments').where({ piano_id: out.pianoId }).update({ grade: JSON.stringify(oldGrade) });
+    const history = (await api.gql(await api.tokenFor('technician'), `{ assessmentHistory(pianoId: ${out.pianoId}) }`)).body.data.assessmentHistory;
+    expect(history[0].grade).toEqual(gradeAssessment(buildMeasurements(), defaultRules));
+    expect(JSON.stringify(history[0].grade)).not.toContain('score');
+    expect((await api.knex('assessments').where({ piano_id: out.pianoId }).first()).grade).toEqual(oldGrade);
+  });
+});
+
 describe('grading rules', () => {
   it('a manager’s change makes a new version that the next intake is graded with', async () => {
     const manager = await api.tokenFor('manager');
@@ -160,7 +231,7 @@ describe('grading rules', () => {
 
     const out = (await api.gql(await api.tokenFor('intake'), SUBMIT, { input: buildIntake() })).body.data.submitIntake;
     expect(out.grade.rulesVersion).toBe(version);
-    expect(out.grade.findings.find((f: { check: string }) => f.check === 'keys.sidePlay').severity).toBe('watch');
+    expect(out.grade.findings.find((f: { check: string }) => f.check === 'keys.sidePlay').mark).toBe('noted');
   });
 
   it('refuses rules out of order and rules from a non-manager', async () => {

@@ -3,7 +3,7 @@ import { DEMO_PIANOS, DEMO_USERS, seedDemo } from '@/seeds/demo';
 
 import { createTestDatabase } from '../support/test-db';
 
-const TABLES = ['users', 'pianos', 'intakes', 'assessments', 'stage_moves', 'work_plans', 'work_items', 'time_entries', 'climate_readings', 'disclosures', 'disclosure_links'];
+const TABLES = ['users', 'pianos', 'intakes', 'assessments', 'stage_moves', 'work_plans', 'work_items', 'time_entries', 'time_entry_corrections', 'climate_readings', 'disclosures', 'disclosure_links'];
 
 describe('the demo scenario', () => {
   it('seeds a consistent story, and a second run adds nothing', async () => {
@@ -26,6 +26,16 @@ describe('the demo scenario', () => {
       const floor = await db.knex('pianos').where('stage', 'on_floor').leftJoin('disclosures', 'disclosures.piano_id', 'pianos.id').select('pianos.asking_price_minor', 'disclosures.version');
       expect(floor.length).toBeGreaterThan(0);
       for (const f of floor) expect(f).toEqual({ asking_price_minor: expect.any(Number), version: 1 });
+      // each case of the grade is in the demo: ready, provisional, sold as it stands with its reason, re-measured after the work
+      const grades = await db.knex('assessments').join('pianos', 'pianos.id', 'assessments.piano_id').select('pianos.stock_number', 'assessments.grade', 'assessments.kind', 'assessments.remeasured_fields');
+      const of = (stock: string) => grades.filter((g) => g.stock_number === stock);
+      expect(of('FW-0003')[0].grade).toMatchObject({ readiness: 'floor', provisional: false });
+      expect(of('FW-0004')[0].grade).toMatchObject({ provisional: true, readiness: 'work_first' });
+      expect(of('FW-0011')[0].grade).toMatchObject({ notRecommendedForRetail: true, readiness: 'wholesale' });
+      expect(of('FW-0010').find((g) => g.kind === 'post_workshop').remeasured_fields).not.toContain('hammerGrooveDepthMm');
+      expect(of('FW-0008').find((g) => g.kind === 'post_workshop').remeasured_fields).toContain('hammerGrooveDepthMm');
+      const asIs = await db.knex('stage_moves').join('pianos', 'pianos.id', 'stage_moves.piano_id').where({ 'pianos.stock_number': 'FW-0011', action: 'sell_as_is' }).first('why');
+      expect(asIs.why.length).toBeGreaterThanOrEqual(10);
       // pianos in the workshop have open work for the technician
       const open = await db.knex('work_items').join('pianos', 'pianos.id', 'work_items.piano_id').where('pianos.stage', 'in_workshop').whereNot('status', 'done').count('* as n').first();
       expect(open!.n).toBeGreaterThan(0);

@@ -61,6 +61,22 @@ describe('the decision and the plan', () => {
     expect(history[2]).toMatchObject({ by: 'Mara Quillfeather', byRole: 'manager', why: 'Worth reconditioning for the floor' });
   });
 
+  it('selling as it stands a piano not recommended for retail needs a manager’s reason, kept in the stage history', async () => {
+    const out = await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ measurements: buildMeasurements({ overallImpression: 2 }) }) });
+    const pianoId = out.submitIntake.pianoId;
+    expect(out.submitIntake.grade).toMatchObject({ notRecommendedForRetail: true, readiness: 'wholesale' });
+    for (const why of [null, '', '   ', 'cheap']) {
+      const res = await api.gql(await api.tokenFor('manager'), 'mutation($why: String) { decidePiano(pianoId: ' + pianoId + ', decision: "sell_as_is", why: $why) }', { why });
+      expect(res.body.errors[0]).toMatchObject({ extensions: { code: 'CONFLICT', field: 'why' } });
+      expect(res.body.errors[0].message).toBe('This piano is not recommended for retail as it stands (its play test). Selling it as it stands needs your reason, of at least 10 characters: it is kept in the stage history.');
+    }
+    expect(await stageOf(pianoId)).toBe('assessed');
+    const why = 'Sold to a restorer who was told what it needs.';
+    await call('manager', 'mutation($why: String) { decidePiano(pianoId: ' + pianoId + ', decision: "sell_as_is", why: $why) }', { why });
+    expect(await stageOf(pianoId)).toBe('ready');
+    expect((await historyOf(pianoId)).at(-1)).toMatchObject({ action: 'sell_as_is', why, by: 'Mara Quillfeather' });
+  });
+
   it.each([
     ['sell_as_is', 'ready'],
     ['wholesale', 'wholesaled'],
@@ -185,20 +201,115 @@ describe('the bench', () => {
   it('becomes ready only when every item is done and the post-workshop assessment is in', async () => {
     const early = await refused('technician', `mutation { finishWorkshop(pianoId: ${pianoId}) { stage } }`);
     expect(early.message).toBe('Not yet: some work items are not done yet; the post-workshop assessment has not been submitted.');
-    for (const item of items) await call('technician', `mutation { setWorkItemDone(itemId: ${item.id}, done: true) }`);
+    for (const item of items) await call('technician', `mutation { setWorkItemDone(itemId: ${item.id}, done: true, reason: "Done with the voicing, on the same timer") }`);
     const noAssessment = await refused('technician', `mutation { finishWorkshop(pianoId: ${pianoId}) { stage } }`);
     expect(noAssessment.message).toBe('Not yet: the post-workshop assessment has not been submitted.');
 
     const re = await call('technician', 'mutation($i: JSON!) { submitRemeasurement(input: $i) }', { i: { pianoId, measurements: { hammerGrooveDepthMm: 0.5, keyLevelDeviationMm: 0.3, a4Hz: 440 }, changeNote: 'After voicing and regulation' } });
-    expect(re.submitRemeasurement.grade.findings.find((f: Json) => f.check === 'hammers.wear').severity).toBe('sound');
+    expect(re.submitRemeasurement.grade.findings.find((f: Json) => f.check === 'hammers.wear').mark).toBe('fine');
     const history = (await call('technician', `{ assessmentHistory(pianoId: ${pianoId}) }`)).assessmentHistory;
-    expect(history.at(-1)).toMatchObject({ kind: 'post_workshop', changeNote: 'After voicing and regulation' });
+    expect(history.at(-1)).toMatchObject({ kind: 'post_workshop', changeNote: 'After voicing and regulation', remeasured: ['a4Hz', 'hammerGrooveDepthMm', 'keyLevelDeviationMm'] });
     expect(history.at(-1).measurements.keySidePlayMm).toBe(buildMeasurements().keySidePlayMm);
 
     await call('technician', `mutation { finishWorkshop(pianoId: ${pianoId}) { stage } }`);
     expect(await stageOf(pianoId)).toBe('ready');
     await call('floor', `mutation { movePiano(pianoId: ${pianoId}, action: "put_on_floor") { stage } }`);
     expect(await stageOf(pianoId)).toBe('on_floor');
+  });
+});
+
+describe('done, and time that needs correcting', () => {
+  let items: Json[];
+  let techId: number;
+  beforeAll(async () => {
+    const pianoId = await assessedPiano();
+    await call('manager', `mutation { decidePiano(pianoId: ${pianoId}, decision: "recondition") }`);
+    items = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan.items;
+    await call('manager', `mutation { approvePlan(pianoId: ${pianoId}) { stage } }`);
+    techId = (await api.knex('users').where({ email: 'tech@feltwire.test' }).first()).id;
+  });
+  const done = (itemId: number, reason?: string) => `mutation { setWorkItemDone(itemId: ${itemId}, done: true${reason != null ? `, reason: ${JSON.stringify(reason)}` : ''}) }`;
+
+  it('refuses done with no time logged unless a reason is given, and keeps the reason for staff', async () => {
+    const item = items[0];
+    for (const reason of [undefined, '', '  ']) {
+      const err = await refused('technician', done(item.id, reason));
+      expect(err).toMatchObject({ message: `No time is logged on “${item.title}”: log the time it took, or give the reason it took none.`, extensions: { code: 'CONFLICT', field: 'reason' } });
+    }
+    expect((await api.knex('work_items').where({ id: item.id }).first()).status).not.toBe('done');
+    await call('technician', done(item.id, 'Done by the visiting tuner, on his own invoice'));
+    const detail = (await call('manager', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail;
+    expect(detail).toMatchObject({ status: 'done', doneReason: 'Done by the visiting tuner, on his own invoice' });
+    expect(detail.notes.map((n: Json) => n.body)).toEqual(['Marked done with no time logged: Done by the visiting tuner, on his own invoice']);
+    const plan = (await call('manager', `{ workPlan(pianoId: ${item.pianoId}) }`)).workPlan;
+    expect(plan.items.find((i: Json) => i.id === item.id).doneReason).toBe('Done by the visiting tuner, on his own invoice');
+    // Reopened, the reason no longer stands on the item; the note keeps it.
+    await call('technician', `mutation { setWorkItemDone(itemId: ${item.id}, done: false) }`);
+    expect((await call('manager', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail.doneReason).toBeNull();
+  });
+
+  it('takes done without a reason once time is logged', async () => {
+    const item = items[1];
+    await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 45 } });
+    await call('technician', done(item.id));
+    expect((await call('manager', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail).toMatchObject({ status: 'done', doneReason: null, loggedMinutes: 45 });
+  });
+
+  it('refuses negative minutes with a message, and stores nothing', async () => {
+    const before = await api.knex('time_entries').count('* as n').first();
+    const err = await refused('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: items[2].id, minutes: -30 } });
+    expect(err).toMatchObject({ message: 'minutes: cannot be negative: give the minutes worked; an entry logged by mistake is corrected instead', extensions: { code: 'BAD_INPUT', field: 'minutes' } });
+    expect(await api.knex('time_entries').count('* as n').first()).toEqual(before);
+  });
+
+  it('lets the technician who logged an entry, or a manager, correct it, with the history of who, when, old, new and why', async () => {
+    const item = items[2];
+    const entry = (await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 120, note: 'Pitch raise' } })).logTime;
+    const send = async (role: Role, c: Json) => api.gql(await api.tokenFor(role), 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c });
+    const first = await send('technician', { timeEntryId: entry.id, minutes: 90, why: 'Left the timer in my head over lunch' });
+    expect(first.body.errors).toBeUndefined();
+    expect(first.body.data.correctTimeEntry.minutes).toBe(90);
+    const second = await send('manager', { timeEntryId: entry.id, minutes: 95, why: 'Checked against the job sheet' });
+    expect(second.body.errors).toBeUndefined();
+
+    // Refused: no reason, negative, the same value, another technician, and floor staff.
+    const noWhy = await send('technician', { timeEntryId: entry.id, minutes: 80, why: ' ' });
+    expect(noWhy.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field: 'why' });
+    const negative = await send('technician', { timeEntryId: entry.id, minutes: -5, why: 'x' });
+    expect(negative.body.errors[0]).toMatchObject({ message: 'minutes: cannot be negative: 0 stands for an entry logged by mistake', extensions: { field: 'minutes' } });
+    const same = await send('technician', { timeEntryId: entry.id, minutes: 95, why: 'again' });
+    expect(same.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field: 'minutes' });
+    await call('manager', 'mutation { createUser(email: "tech2@feltwire.test", name: "Odo Pellmark", role: "technician", password: "a-long-password") { id } }');
+    const login = await api.http.post('/auth/login').send({ email: 'tech2@feltwire.test', password: 'a-long-password' });
+    const other = await api.gql(login.body.token, 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c: { timeEntryId: entry.id, minutes: 10, why: 'mine now' } });
+    expect(other.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
+    const floor = await send('floor', { timeEntryId: entry.id, minutes: 10, why: 'x' });
+    expect(floor.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
+
+    const detail = (await call('technician', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail;
+    const shown = detail.entries.find((e: Json) => e.id === entry.id);
+    expect(shown.minutes).toBe(95);
+    expect(shown.corrections).toEqual([
+      { by: 'Tomas Reyval', byId: techId, at: expect.any(String), oldMinutes: 120, newMinutes: 90, why: 'Left the timer in my head over lunch' },
+      { by: 'Mara Quillfeather', byId: expect.any(Number), at: expect.any(String), oldMinutes: 90, newMinutes: 95, why: 'Checked against the job sheet' },
+    ]);
+    expect(detail.loggedMinutes).toBe(95);
+    await expect(api.knex('time_entry_corrections').where({ time_entry_id: entry.id }).update({ why: 'rewritten' })).rejects.toThrow(/append-only/);
+  });
+
+  it('refuses to correct a running timer, or to leave a done item with no time and no reason', async () => {
+    const item = items[3];
+    const timer = (await call('technician', `mutation { startTimer(itemId: ${item.id}) }`)).startTimer;
+    const send = async (c: Json) => api.gql(await api.tokenFor('technician'), 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c });
+    const running = await send({ timeEntryId: timer.id, minutes: 30, why: 'x' });
+    expect(running.body.errors[0].extensions.code).toBe('CONFLICT');
+    await call('technician', `mutation { stopTimer(itemId: ${item.id}) }`);
+    const entry = (await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 20 } })).logTime;
+    await call('technician', `mutation { setWorkItemDone(itemId: ${item.id}, done: true) }`);
+    // the stopped timer counts 0 minutes; the manual entry holds the only time
+    const empty = await send({ timeEntryId: entry.id, minutes: 0, why: 'Logged on the wrong item' });
+    expect(empty.body.errors[0]).toMatchObject({ extensions: { code: 'CONFLICT', field: 'minutes' } });
+    expect((await api.knex('time_entries').where({ id: entry.id }).first()).minutes).toBe(20);
   });
 });
 

@@ -25,13 +25,17 @@ export function buildMeasurements(over: Partial<Measurements> = {}): Measurement
   };
 }
 
+// Each built intake is a piano of its own: the same serial twice is the same piano taken in again.
+let serial = 777000;
+
 export function buildIntake(over: Record<string, unknown> = {}) {
+  serial += 1;
   return {
     seller: { name: 'Rosalind Vantongeren', phone: '+1 555 0100', email: 'rosalind@example.test', address: '12 Quince Row, Millbrook' },
     acquisition: 'trade_in',
     receivedOn: '2026-11-28',
     inspectedAt: 'customer_home',
-    piano: { maker: 'Almsbury', model: 'Parlour 118', serialNumber: 'AL-777001', kind: 'upright', sizeCm: 118, finish: 'satin walnut', yearFrom: 1978, yearTo: 1984, caseCondition: 'good' },
+    piano: { maker: 'Almsbury', model: 'Parlour 118', serialNumber: `AL-${serial}`, kind: 'upright', sizeCm: 118, finish: 'satin walnut', yearFrom: 1978, yearTo: 1984, caseCondition: 'good' },
     notes: 'Seller wants it gone before the holidays.',
     measurements: buildMeasurements(),
     photoIds: [],

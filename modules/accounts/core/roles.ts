@@ -24,13 +24,16 @@ export type Ability =
   // The local demo inbox of e-mails the server sent (development and tests only).
   | 'readDemoInbox'
   // See the jobs that failed or stalled, and run one again.
-  | 'tendBackgroundWork';
+  | 'tendBackgroundWork'
+  // Correct a time entry one logged oneself, or one anyone logged.
+  | 'correctOwnTime'
+  | 'correctAnyTime';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults'],
-  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults'],
+  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults', 'correctOwnTime'],
   floor: ['readPianos', 'recordTone', 'readToneResults'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -23,8 +23,8 @@ export interface GradeRules {
   /** A play-test rating at or below this sets "not recommended for retail as it stands". */
   playPoorAtOrBelow: number;
   playGoodAtOrAbove: number;
-  scorePenalty: { watch: number; needsWork: number; serious: number };
-  bands: { excellent: number; good: number; fair: number };
+  /** A grade over fewer inspected areas than this (of the six) is provisional: no readiness verdict of quality, no disclosure. */
+  minInspectedAreas: number;
 }
 
 export const defaultRules: GradeRules = {
@@ -42,6 +42,13 @@ export const defaultRules: GradeRules = {
   pitchRaiseCents: 15,
   playPoorAtOrBelow: 2,
   playGoodAtOrAbove: 4,
-  scorePenalty: { watch: 3, needsWork: 10, serious: 25 },
-  bands: { excellent: 85, good: 70, fair: 50 },
+  // Shop default: one area may be left for later (an upright's soundboard seen from the back, say).
+  minInspectedAreas: 5,
 };
+
+/** Rules as stored in an older version (with fields since dropped, without ones since added): complete and trimmed. */
+export function completeRules(stored: object): GradeRules {
+  const known = Object.keys(defaultRules) as (keyof GradeRules)[];
+  const given = stored as Partial<GradeRules>;
+  return Object.fromEntries(known.map((k) => [k, given[k] ?? defaultRules[k]])) as unknown as GradeRules;
+}

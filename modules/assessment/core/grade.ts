@@ -4,14 +4,34 @@ import { defaultRules, type GradeRules } from './grade-rules';
 import type { Crack, Measurements } from './measurements';
 import type { WorkItem } from './work-tasks';
 
-export const SEVERITIES = ['sound', 'watch', 'needs_work', 'serious'] as const;
-export type Severity = (typeof SEVERITIES)[number];
-export const SEVERITY_LABELS: Record<Severity, string> = {
-  sound: 'Sound',
-  watch: 'Watch',
-  needs_work: 'Needs work',
-  serious: 'Serious',
+/**
+ * Feltwire's marks: one set for staff, buyers and paper. A finding is fine, noted (worth knowing,
+ * nothing to do), needs work, or major work; an area nobody looked at is not inspected.
+ */
+export const MARKS = ['fine', 'noted', 'work', 'major'] as const;
+export type Mark = (typeof MARKS)[number];
+export type AreaMark = Mark | 'unseen';
+export const MARK_WORDS: Record<AreaMark, string> = {
+  fine: 'Fine',
+  noted: 'Noted',
+  work: 'Needs work',
+  major: 'Major work',
+  unseen: 'Not inspected',
 };
+/** What each mark means, in words for anyone reading it: the key beside the marks. */
+export const MARK_MEANINGS: Record<AreaMark, string> = {
+  fine: 'nothing to do',
+  noted: 'worth knowing; no work needed',
+  work: 'work the piano calls for',
+  major: 'a large repair or a structural concern',
+  unseen: 'nobody measured it, so nothing is claimed',
+};
+const MARK_RANK: Record<Mark, number> = { fine: 0, noted: 1, work: 2, major: 3 };
+
+/** The worst of some marks; null when there are none. */
+export function worstMark(marks: readonly Mark[]): Mark | null {
+  return marks.reduce<Mark | null>((w, m) => (w == null || MARK_RANK[m] > MARK_RANK[w] ? m : w), null);
+}
 
 export const AREAS = ['keys', 'hammers', 'strings', 'soundboard', 'tuning', 'play'] as const;
 export type Area = (typeof AREAS)[number];
@@ -24,25 +44,72 @@ export const AREA_LABELS: Record<Area, string> = {
   play: 'Play test',
 };
 
-export type Band = 'excellent' | 'good' | 'fair' | 'poor';
-export const BAND_LABELS: Record<Band, string> = { excellent: 'Excellent', good: 'Good', fair: 'Fair', poor: 'Poor' };
+export type MeasureField = keyof Measurements;
+
+/** The area each measurement belongs to: an area is inspected when one of its measurements is given. */
+export const FIELD_AREAS: Record<MeasureField, Area> = {
+  keySidePlayMm: 'keys',
+  keyTouchesNeighbour: 'keys',
+  keysTouchingNeighbour: 'keys',
+  keyLevelDeviationMm: 'keys',
+  keytopDamage: 'keys',
+  stickingKeys: 'keys',
+  deadKeys: 'keys',
+  hammerGrooveDepthMm: 'hammers',
+  hammerFelt: 'hammers',
+  hammerFeltLeft: 'hammers',
+  steelCorrosion: 'strings',
+  bassWinding: 'strings',
+  brokenStrings: 'strings',
+  soundboardCracks: 'soundboard',
+  ribsSeparated: 'soundboard',
+  a4Hz: 'tuning',
+  tuningPins: 'tuning',
+  bassEvenness: 'play',
+  middleEvenness: 'play',
+  trebleEvenness: 'play',
+  dynamicRange: 'play',
+  notesStickingOut: 'play',
+  overallImpression: 'play',
+};
+
+/** The readiness verdict a dealer acts on. */
+export const READINESS = ['floor', 'work_first', 'wholesale', 'unjudged'] as const;
+export type Readiness = (typeof READINESS)[number];
+export const READINESS_WORDS: Record<Readiness, string> = {
+  floor: 'Ready for the floor',
+  work_first: 'Needs work first',
+  wholesale: 'For wholesale',
+  unjudged: 'Not judged yet',
+};
+/** Each verdict wears the mark of what it means: nothing to do, work, not for retail, not looked at enough. */
+export const READINESS_MARKS: Record<Readiness, AreaMark> = { floor: 'fine', work_first: 'work', wholesale: 'major', unjudged: 'unseen' };
 
 export interface Finding {
   area: Area;
   /** A stable name for the check, e.g. `keys.sidePlay` or `soundboard.crack.2`. */
   check: string;
-  severity: Severity;
+  mark: Mark;
   /** Plain words a buyer could read. */
   finding: string;
   work: WorkItem[];
   mustDisclose: boolean;
+  /** The measurements the finding rests on: re-measuring all of them after the work replaces it. */
+  fields: MeasureField[];
 }
 
 export interface Grade {
+  /** The shape of this record: 2 since marks and readiness replaced the score. */
+  format: 2;
   rulesVersion: string;
   findings: Finding[];
-  score: number;
-  band: Band;
+  /** Areas with at least one measurement, in area order. */
+  inspectedAreas: Area[];
+  /** The shop's rule in force: fewer inspected areas than this make the grade provisional. */
+  minInspectedAreas: number;
+  provisional: boolean;
+  playTested: boolean;
+  readiness: Readiness;
   referToTechnician: boolean;
   notRecommendedForRetail: boolean;
   /** Cents of the measured A4 from 440 Hz, when A4 was measured. */
@@ -52,9 +119,17 @@ export interface Grade {
 const fmt = (n: number, digits = 1) => String(Number(n.toFixed(digits)));
 const keyList = (keys: number[]) => keys.map((k) => `${k}`).join(', ');
 
-function finding(area: Area, check: string, severity: Severity, text: string, work: WorkItem[] = []): Finding {
-  // Everything short of sound goes on the buyer's disclosure.
-  return { area, check, severity, finding: text, work, mustDisclose: severity !== 'sound' };
+function finding(area: Area, check: string, mark: Mark, text: string, fields: MeasureField[], work: WorkItem[] = []): Finding {
+  // Everything short of fine goes on the buyer's disclosure.
+  return { area, check, mark, finding: text, work, mustDisclose: mark !== 'fine', fields };
+}
+
+const given = (v: unknown) => v != null && !(Array.isArray(v) && v.length === 0);
+
+/** The areas an inspection looked at: each with at least one measurement given. */
+export function inspectedAreas(m: Measurements): Area[] {
+  const seen = new Set((Object.keys(m) as MeasureField[]).filter((f) => FIELD_AREAS[f] && given(m[f])).map((f) => FIELD_AREAS[f]));
+  return AREAS.filter((a) => seen.has(a));
 }
 
 /** Regulation hours for a key-level deviation: light up to the light limit, rising to a full regulation. */
@@ -66,11 +141,15 @@ export function regulationHours(deviationMm: number, rules: GradeRules = default
   return Math.round(hours * 2) / 2;
 }
 
+const SIDE_PLAY: MeasureField[] = ['keySidePlayMm', 'keyTouchesNeighbour', 'keysTouchingNeighbour'];
+
 function gradeKeys(m: Measurements, r: GradeRules): Finding[] {
   const out: Finding[] = [];
   if (m.keyTouchesNeighbour) {
+    const keys = m.keysTouchingNeighbour ?? [];
+    const which = keys.length === 1 ? `Key ${keys[0]} can be pushed sideways until it touches its neighbour` : keys.length ? `Keys ${keyList(keys)} can be pushed sideways until they touch their neighbours` : 'A key can be pushed sideways until it touches its neighbour';
     out.push(
-      finding('keys', 'keys.sidePlay', 'needs_work', 'A key can be pushed sideways until it touches its neighbour: the key bushings are worn.', [
+      finding('keys', 'keys.sidePlay', 'work', `${which}: the key bushings are worn.`, SIDE_PLAY, [
         { task: 'rebush_keys' },
         { task: 'ease_front_rail_pins', alternativeTo: 'rebush_keys', note: 'cheaper partial fix' },
       ]),
@@ -79,32 +158,32 @@ function gradeKeys(m: Measurements, r: GradeRules): Finding[] {
     const mm = m.keySidePlayMm;
     out.push(
       mm <= r.keySidePlayNormalMm
-        ? finding('keys', 'keys.sidePlay', 'sound', `Keys move ${fmt(mm)} mm sideways at the front, within the normal range.`)
-        : finding('keys', 'keys.sidePlay', 'watch', `Keys move ${fmt(mm)} mm sideways at the front, more than usual: the key bushings are wearing.`, [
+        ? finding('keys', 'keys.sidePlay', 'fine', `Keys move ${fmt(mm)} mm sideways at the front, within the normal range.`, SIDE_PLAY)
+        : finding('keys', 'keys.sidePlay', 'noted', `Keys move ${fmt(mm)} mm sideways at the front, more than usual: the key bushings are wearing.`, SIDE_PLAY, [
             { task: 'ease_front_rail_pins' },
           ]),
     );
+  } else if (m.keyTouchesNeighbour === false) {
+    out.push(finding('keys', 'keys.sidePlay', 'fine', 'No key can be pushed sideways against its neighbour.', SIDE_PLAY));
   }
   if (m.keyLevelDeviationMm != null) {
     const mm = m.keyLevelDeviationMm;
     if (mm <= r.keyLevelSoundMm) {
-      out.push(finding('keys', 'keys.level', 'sound', `Keys rest level (within ${fmt(mm)} mm).`));
+      out.push(finding('keys', 'keys.level', 'fine', `Keys rest level (within ${fmt(mm)} mm).`, ['keyLevelDeviationMm']));
     } else {
       const hours = regulationHours(mm, r);
-      const severity: Severity = mm <= r.keyLevelLightRegulationMm ? 'watch' : 'needs_work';
+      const mark: Mark = mm <= r.keyLevelLightRegulationMm ? 'noted' : 'work';
       const text =
-        severity === 'watch'
+        mark === 'noted'
           ? `Keys rest up to ${fmt(mm)} mm out of level: a light regulation will even them.`
           : `Keys rest up to ${fmt(mm)} mm out of level: the action needs regulation.`;
-      out.push(finding('keys', 'keys.level', severity, text, [{ task: 'regulation', hours }]));
+      out.push(finding('keys', 'keys.level', mark, text, ['keyLevelDeviationMm'], [{ task: 'regulation', hours }]));
     }
   }
   const damage = m.keytopDamage ?? [];
   if (damage.length) {
-    const severity: Severity = damage.includes('missing') ? 'needs_work' : 'watch';
-    out.push(
-      finding('keys', 'keys.keytops', severity, `Keytops: ${damage.join(', ')}.`, severity === 'needs_work' || damage.includes('chipped') ? [{ task: 'replace_keytops' }] : []),
-    );
+    const mark: Mark = damage.includes('missing') ? 'work' : 'noted';
+    out.push(finding('keys', 'keys.keytops', mark, `Keytops: ${damage.join(', ')}.`, ['keytopDamage'], mark === 'work' || damage.includes('chipped') ? [{ task: 'replace_keytops' }] : []));
   }
   const stuck = [...(m.stickingKeys ?? []), ...(m.deadKeys ?? [])];
   if (stuck.length) {
@@ -112,10 +191,13 @@ function gradeKeys(m: Measurements, r: GradeRules): Finding[] {
       m.stickingKeys?.length ? `sticking keys ${keyList(m.stickingKeys)}` : '',
       m.deadKeys?.length ? `silent keys ${keyList(m.deadKeys)}` : '',
     ].filter(Boolean);
-    out.push(finding('keys', 'keys.sticking', 'needs_work', `Keys that do not play freely: ${parts.join('; ')}.`, [{ task: 'ease_sticking_keys' }]));
+    out.push(finding('keys', 'keys.sticking', 'work', `Keys that do not play freely: ${parts.join('; ')}.`, ['stickingKeys', 'deadKeys'], [{ task: 'ease_sticking_keys' }]));
   }
   return out;
 }
+
+const HAMMER_FIELDS: MeasureField[] = ['hammerGrooveDepthMm', 'hammerFelt', 'hammerFeltLeft'];
+const FELT_WORDS: Record<string, string> = { soft: 'soft', firm: 'firm' };
 
 function gradeHammers(m: Measurements, r: GradeRules): Finding[] {
   const endOfLife = m.hammerFelt === 'chemically_hardened' || m.hammerFeltLeft === 'none';
@@ -126,50 +208,56 @@ function gradeHammers(m: Measurements, r: GradeRules): Finding[] {
       m.hammerFelt === 'chemically_hardened' ? 'felt hardened by chemicals' : '',
       m.hammerFeltLeft === 'none' ? 'no felt left to shape' : '',
     ].filter(Boolean);
-    return [finding('hammers', 'hammers.wear', 'serious', `Hammers are at the end of their life (${why.join(', ')}); they cannot be revoiced and must be replaced.`, [{ task: 'replace_hammers' }])];
+    return [finding('hammers', 'hammers.wear', 'major', `Hammers are at the end of their life (${why.join(', ')}); they cannot be revoiced and must be replaced.`, HAMMER_FIELDS, [{ task: 'replace_hammers' }])];
   }
   const out: Finding[] = [];
   if (groove != null) {
     out.push(
       groove <= r.hammerGrooveNormalMm
-        ? finding('hammers', 'hammers.wear', 'sound', `Hammer string grooves are shallow (${fmt(groove)} mm), as is normal.`)
-        : finding('hammers', 'hammers.wear', 'needs_work', `Hammer string grooves are ${fmt(groove)} mm deep: the hammers need reshaping and voicing.`, [{ task: 'reshape_voice_hammers' }]),
+        ? finding('hammers', 'hammers.wear', 'fine', `Hammer string grooves are shallow (${fmt(groove)} mm), as is normal.`, ['hammerGrooveDepthMm'])
+        : finding('hammers', 'hammers.wear', 'work', `Hammer string grooves are ${fmt(groove)} mm deep: the hammers need reshaping and voicing.`, ['hammerGrooveDepthMm'], [{ task: 'reshape_voice_hammers' }]),
     );
   }
+  const felt: MeasureField[] = ['hammerFelt', 'hammerFeltLeft'];
   if (m.hammerFelt === 'hard' || m.hammerFeltLeft === 'thin') {
     const why = [m.hammerFelt === 'hard' ? 'the felt is hard, which brightens the tone' : '', m.hammerFeltLeft === 'thin' ? 'little felt is left to shape' : ''].filter(Boolean);
-    out.push(finding('hammers', 'hammers.felt', 'watch', `Hammer felt: ${why.join('; ')}.`, [{ task: 'voicing' }]));
+    out.push(finding('hammers', 'hammers.felt', 'noted', `Hammer felt: ${why.join('; ')}.`, felt, [{ task: 'voicing' }]));
+  } else if (m.hammerFelt || m.hammerFeltLeft) {
+    const parts = [m.hammerFelt ? `the felt is ${FELT_WORDS[m.hammerFelt]}` : '', m.hammerFeltLeft === 'ample' ? 'ample felt is left to shape' : ''].filter(Boolean);
+    out.push(finding('hammers', 'hammers.felt', 'fine', `Hammer felt: ${parts.join('; ')}.`, felt));
   }
   return out;
 }
 
-// What each observed string state means: severity and the buyer's words; the worst state asks for restringing.
-const STEEL_STATES: Record<NonNullable<Measurements['steelCorrosion']>, [Severity, string]> = {
-  none: ['sound', 'Treble (steel) strings are clean.'],
-  light: ['sound', 'Treble (steel) strings show light surface rust, usual for their age.'],
-  moderate: ['watch', 'Treble (steel) strings show moderate rust: a sign of age.'],
-  heavy: ['needs_work', 'Treble (steel) strings are heavily rusted and pitted: they should be replaced.'],
+// What each observed string state means: the mark and the buyer's words; the worst state asks for restringing.
+const STEEL_STATES: Record<NonNullable<Measurements['steelCorrosion']>, [Mark, string]> = {
+  none: ['fine', 'Treble (steel) strings are clean.'],
+  light: ['fine', 'Treble (steel) strings show light surface rust, usual for their age.'],
+  moderate: ['noted', 'Treble (steel) strings show moderate rust: a sign of age.'],
+  heavy: ['work', 'Treble (steel) strings are heavily rusted and pitted: they should be replaced.'],
 };
-const BASS_STATES: Record<NonNullable<Measurements['bassWinding']>, [Severity, string]> = {
-  bright: ['sound', 'Bass (copper-wound) strings are bright.'],
-  dull: ['sound', 'Bass (copper-wound) strings are dulled, usual for their age.'],
-  dark: ['watch', 'Bass (copper-wound) strings are dark with oxidation: a sign of age.'],
-  green: ['needs_work', 'Bass (copper-wound) strings show green oxidation: they should be replaced.'],
+const BASS_STATES: Record<NonNullable<Measurements['bassWinding']>, [Mark, string]> = {
+  bright: ['fine', 'Bass (copper-wound) strings are bright.'],
+  dull: ['fine', 'Bass (copper-wound) strings are dulled, usual for their age.'],
+  dark: ['noted', 'Bass (copper-wound) strings are dark with oxidation: a sign of age.'],
+  green: ['work', 'Bass (copper-wound) strings show green oxidation: they should be replaced.'],
 };
 
-function stringSection(check: string, state: [Severity, string], section: string): Finding {
-  const [severity, text] = state;
-  return finding('strings', check, severity, text, severity === 'needs_work' ? [{ task: 'restring_section', note: section }] : []);
+function stringSection(check: string, field: MeasureField, state: [Mark, string], section: string): Finding {
+  const [mark, text] = state;
+  return finding('strings', check, mark, text, [field], mark === 'work' ? [{ task: 'restring_section', note: section }] : []);
 }
 
 function gradeStrings(m: Measurements): Finding[] {
   const out: Finding[] = [];
-  if (m.steelCorrosion) out.push(stringSection('strings.steel', STEEL_STATES[m.steelCorrosion], 'treble section'));
-  if (m.bassWinding) out.push(stringSection('strings.bass', BASS_STATES[m.bassWinding], 'bass section'));
+  if (m.steelCorrosion) out.push(stringSection('strings.steel', 'steelCorrosion', STEEL_STATES[m.steelCorrosion], 'treble section'));
+  if (m.bassWinding) out.push(stringSection('strings.bass', 'bassWinding', BASS_STATES[m.bassWinding], 'bass section'));
   if (m.brokenStrings) {
     const n = m.brokenStrings;
     const strings = `${n} string${n === 1 ? '' : 's'}`;
-    out.push(finding('strings', 'strings.broken', 'needs_work', `${n} broken string${n === 1 ? '' : 's'}.`, [{ task: 'replace_broken_strings', quantity: n, note: strings }]));
+    out.push(finding('strings', 'strings.broken', 'work', `${n} broken string${n === 1 ? '' : 's'}.`, ['brokenStrings'], [{ task: 'replace_broken_strings', quantity: n, note: strings }]));
+  } else if (m.brokenStrings === 0) {
+    out.push(finding('strings', 'strings.broken', 'fine', 'No broken strings.', ['brokenStrings']));
   }
   return out;
 }
@@ -187,13 +275,13 @@ function gradeSoundboard(m: Measurements, r: GradeRules): Finding[] {
   const cracks = m.soundboardCracks ?? [];
   const out = cracks.map((c, i) => {
     const serious = c.crossesRib || c.buzzes || c.hurtsTuning;
-    return finding('soundboard', `soundboard.crack.${i + 1}`, serious ? 'serious' : 'watch', describeCrack(c, r), serious ? [{ task: 'soundboard_repair' }] : []);
+    return finding('soundboard', `soundboard.crack.${i + 1}`, serious ? 'major' : 'noted', describeCrack(c, r), ['soundboardCracks'], serious ? [{ task: 'soundboard_repair' }] : []);
   });
   if (m.ribsSeparated) {
-    out.push(finding('soundboard', 'soundboard.ribs', 'needs_work', 'A soundboard rib has come away from the board and needs regluing.', [{ task: 'reglue_ribs' }]));
+    out.push(finding('soundboard', 'soundboard.ribs', 'work', 'A soundboard rib has come away from the board and needs regluing.', ['ribsSeparated'], [{ task: 'reglue_ribs' }]));
   }
   if (!cracks.length && m.ribsSeparated === false) {
-    out.push(finding('soundboard', 'soundboard.cracks', 'sound', 'No soundboard cracks found; the ribs are sound.'));
+    out.push(finding('soundboard', 'soundboard.cracks', 'fine', 'No soundboard cracks found; the ribs are sound.', ['soundboardCracks', 'ribsSeparated']));
   }
   return out;
 }
@@ -206,22 +294,23 @@ function gradeTuning(m: Measurements, r: GradeRules): { findings: Finding[]; cen
     const where = `A4 measured at ${fmt(m.a4Hz, 1)} Hz, ${fmt(Math.abs(c), 0)} cents ${c < 0 ? 'below' : 'above'} standard pitch (440 Hz)`;
     // Compared at 0.01-cent resolution, far finer than any measurement, so limits hold exactly.
     const at = Math.round(c * 100) / 100;
-    if (Math.abs(at) <= r.pitchSoundCents) {
-      out.push(finding('tuning', 'tuning.pitch', 'sound', `A4 measured at ${fmt(m.a4Hz, 1)} Hz, within ${r.pitchSoundCents} cents of standard pitch (440 Hz).`));
-    }
-    else if (at < -r.pitchRaiseCents) out.push(finding('tuning', 'tuning.pitch', 'needs_work', `${where}: it needs a pitch raise before a fine tuning.`, [{ task: 'pitch_raise' }, { task: 'fine_tuning' }]));
-    else if (at > r.pitchRaiseCents) out.push(finding('tuning', 'tuning.pitch', 'needs_work', `${where}: it needs a rough pass to bring the pitch down before a fine tuning.`, [{ task: 'fine_tuning', note: 'two passes' }]));
-    else out.push(finding('tuning', 'tuning.pitch', 'watch', `${where}: a fine tuning brings it to pitch.`, [{ task: 'fine_tuning' }]));
+    const pitch = (mark: Mark, text: string, work: WorkItem[] = []) => finding('tuning', 'tuning.pitch', mark, text, ['a4Hz'], work);
+    if (Math.abs(at) <= r.pitchSoundCents) out.push(pitch('fine', `A4 measured at ${fmt(m.a4Hz, 1)} Hz, within ${r.pitchSoundCents} cents of standard pitch (440 Hz).`));
+    else if (at < -r.pitchRaiseCents) out.push(pitch('work', `${where}: it needs a pitch raise before a fine tuning.`, [{ task: 'pitch_raise' }, { task: 'fine_tuning' }]));
+    else if (at > r.pitchRaiseCents) out.push(pitch('work', `${where}: it needs a rough pass to bring the pitch down before a fine tuning.`, [{ task: 'fine_tuning', note: 'two passes' }]));
+    else out.push(pitch('noted', `${where}: a fine tuning brings it to pitch.`, [{ task: 'fine_tuning' }]));
   }
   if (m.tuningPins === 'loose') {
-    out.push(finding('tuning', 'tuning.pins', 'serious', 'Tuning pins are loose: the piano will not hold a tuning until the pins or pin block are repaired.', [{ task: 'tuning_pin_repair' }]));
+    out.push(finding('tuning', 'tuning.pins', 'major', 'Tuning pins are loose: the piano will not hold a tuning until the pins or pin block are repaired.', ['tuningPins'], [{ task: 'tuning_pin_repair' }]));
   } else if (m.tuningPins === 'some_loose') {
-    out.push(finding('tuning', 'tuning.pins', 'watch', 'Some tuning pins turn too easily; the tuning may not hold as long as it should.'));
+    out.push(finding('tuning', 'tuning.pins', 'noted', 'Some tuning pins turn too easily; the tuning may not hold as long as it should.', ['tuningPins']));
   } else if (m.tuningPins === 'firm') {
-    out.push(finding('tuning', 'tuning.pins', 'sound', 'Tuning pins hold firmly.'));
+    out.push(finding('tuning', 'tuning.pins', 'fine', 'Tuning pins hold firmly.', ['tuningPins']));
   }
   return { findings: out, centsFromStandard: c };
 }
+
+const TONE_FIELDS: MeasureField[] = ['bassEvenness', 'middleEvenness', 'trebleEvenness', 'overallImpression'];
 
 function gradePlay(m: Measurements, r: GradeRules): { findings: Finding[]; poor: boolean } {
   const out: Finding[] = [];
@@ -237,30 +326,56 @@ function gradePlay(m: Measurements, r: GradeRules): { findings: Finding[]; poor:
     const fair = ratings.filter(([, v]) => v > r.playPoorAtOrBelow && v < r.playGoodAtOrAbove).map(([k]) => k);
     if (low.length) {
       poor = true;
-      out.push(finding('play', 'play.tone', 'serious', `Plays poorly in the play test (${low.join(', ')}). However well the rest checks out, it is not ready to sell as it stands.`, [{ task: 'regulation' }, { task: 'voicing' }]));
+      out.push(finding('play', 'play.tone', 'major', `Plays poorly in the play test (${low.join(', ')}). However well the rest checks out, it is not ready to sell as it stands.`, TONE_FIELDS, [{ task: 'regulation' }, { task: 'voicing' }]));
     } else if (fair.length) {
-      out.push(finding('play', 'play.tone', 'watch', `Tone is uneven in places (${fair.join(', ')}); voicing will even it out.`, [{ task: 'voicing' }]));
+      out.push(finding('play', 'play.tone', 'noted', `Tone is uneven in places (${fair.join(', ')}); voicing will even it out.`, TONE_FIELDS, [{ task: 'voicing' }]));
     } else {
-      out.push(finding('play', 'play.tone', 'sound', 'Tone is even from key to key across the bass, middle and treble.'));
+      out.push(finding('play', 'play.tone', 'fine', 'Tone is even from key to key across the bass, middle and treble.', TONE_FIELDS));
     }
   }
   if (m.dynamicRange != null) {
     const d = m.dynamicRange;
-    if (d <= r.playPoorAtOrBelow) out.push(finding('play', 'play.dynamics', 'needs_work', 'Little difference between soft and loud playing.', [{ task: 'voicing' }]));
-    else if (d < r.playGoodAtOrAbove) out.push(finding('play', 'play.dynamics', 'watch', 'The range from soft to loud is fair.'));
-    else out.push(finding('play', 'play.dynamics', 'sound', 'A good range from soft to loud.'));
+    if (d <= r.playPoorAtOrBelow) out.push(finding('play', 'play.dynamics', 'work', 'Little difference between soft and loud playing.', ['dynamicRange'], [{ task: 'voicing' }]));
+    else if (d < r.playGoodAtOrAbove) out.push(finding('play', 'play.dynamics', 'noted', 'The range from soft to loud is fair.', ['dynamicRange']));
+    else out.push(finding('play', 'play.dynamics', 'fine', 'A good range from soft to loud.', ['dynamicRange']));
   }
   if (m.notesStickingOut?.length) {
-    out.push(finding('play', 'play.notes', 'watch', `Notes that stand out from their neighbours: keys ${keyList(m.notesStickingOut)}.`, [{ task: 'voicing', note: `keys ${keyList(m.notesStickingOut)}` }]));
+    out.push(finding('play', 'play.notes', 'noted', `Notes that stand out from their neighbours: keys ${keyList(m.notesStickingOut)}.`, ['notesStickingOut'], [{ task: 'voicing', note: `keys ${keyList(m.notesStickingOut)}` }]));
   }
   return { findings: out, poor };
 }
 
-export function bandFor(score: number, rules: GradeRules = defaultRules): Band {
-  if (score >= rules.bands.excellent) return 'excellent';
-  if (score >= rules.bands.good) return 'good';
-  if (score >= rules.bands.fair) return 'fair';
-  return 'poor';
+/** The rule that makes a grade provisional, in words for the screens. */
+export function provisionalRule(minInspectedAreas: number): string {
+  return `A grade is provisional until at least ${minInspectedAreas} of the ${AREAS.length} areas are inspected (the shop’s rule).`;
+}
+
+/** Whether a finding asks for work that counts (a cheaper alternative alone does not). */
+export const callsForWork = (f: Finding) => f.work.some((w) => !w.alternativeTo);
+
+/**
+ * The verdict: wholesale when the play test finds it plays poorly; work first when any finding
+ * calls for work; ready for the floor only over a full grade with the play test; otherwise not judged.
+ */
+export function readinessOf(findings: readonly Finding[], provisional: boolean, playTested: boolean, notRecommendedForRetail: boolean): Readiness {
+  if (notRecommendedForRetail) return 'wholesale';
+  if (findings.some(callsForWork)) return 'work_first';
+  if (provisional || !playTested) return 'unjudged';
+  return 'floor';
+}
+
+/** Why the verdict is what it is, in plain sentences a dealer reads beside it. */
+export function readinessReasons(g: Pick<Grade, 'readiness' | 'provisional' | 'playTested' | 'inspectedAreas' | 'minInspectedAreas' | 'findings'>): string[] {
+  const n = g.inspectedAreas.length;
+  const out: string[] = [];
+  const working = g.findings.filter(callsForWork).length;
+  if (g.readiness === 'wholesale') out.push('The play test found it plays poorly: not recommended for retail as it stands.');
+  if (g.readiness === 'work_first') out.push(`${working === 1 ? 'One finding calls' : `${working} findings call`} for work before it goes on the floor.`);
+  if (g.readiness === 'floor') out.push('Every inspected area is fine or noted, with no work called for.');
+  if (n === 0) out.push('Nothing has been inspected yet.');
+  else if (g.provisional) out.push(`Provisional: ${n} of ${AREAS.length} areas inspected; the shop asks for ${g.minInspectedAreas}.`);
+  if (n > 0 && !g.playTested) out.push('The play test has not been done: it outranks every visual check.');
+  return out;
 }
 
 /** Grades an inspection from its measurements. Pure: the screen runs it live, the server again on submit. */
@@ -268,16 +383,55 @@ export function gradeAssessment(m: Measurements, rules: GradeRules = defaultRule
   const tuning = gradeTuning(m, rules);
   const play = gradePlay(m, rules);
   const findings = [...gradeKeys(m, rules), ...gradeHammers(m, rules), ...gradeStrings(m), ...gradeSoundboard(m, rules), ...tuning.findings, ...play.findings];
-  const p = rules.scorePenalty;
-  const penalty = findings.reduce((sum, f) => sum + (f.severity === 'watch' ? p.watch : f.severity === 'needs_work' ? p.needsWork : f.severity === 'serious' ? p.serious : 0), 0);
-  const score = Math.max(0, 100 - penalty);
+  const inspected = inspectedAreas(m);
+  const minInspectedAreas = rules.minInspectedAreas ?? defaultRules.minInspectedAreas;
+  const provisional = inspected.length < minInspectedAreas;
+  const playTested = inspected.includes('play');
   return {
+    format: 2,
     rulesVersion: rules.version,
     findings,
-    score,
-    band: bandFor(score, rules),
-    referToTechnician: findings.some((f) => f.severity === 'serious'),
+    inspectedAreas: inspected,
+    minInspectedAreas,
+    provisional,
+    playTested,
+    readiness: readinessOf(findings, provisional, playTested, play.poor),
+    referToTechnician: findings.some((f) => f.mark === 'major'),
     notRecommendedForRetail: play.poor,
     centsFromStandard: tuning.centsFromStandard,
   };
+}
+
+// The checks in the words a technician or a buyer reads: "for key side play", "not measured again: hammer felt".
+const CHECK_WORDS: Record<string, string> = {
+  'keys.sidePlay': 'key side play',
+  'keys.level': 'key level',
+  'keys.keytops': 'keytops',
+  'keys.sticking': 'sticking or silent keys',
+  'hammers.wear': 'hammer wear',
+  'hammers.felt': 'hammer felt',
+  'strings.broken': 'broken strings',
+  'strings.steel': 'treble string corrosion',
+  'strings.bass': 'bass string winding',
+  'soundboard.cracks': 'soundboard cracks',
+  'soundboard.ribs': 'soundboard ribs',
+  'tuning.pitch': 'pitch',
+  'tuning.pins': 'tuning pins',
+  'play.tone': 'evenness of tone',
+  'play.dynamics': 'dynamic range',
+  'play.notes': 'notes that stand out',
+};
+
+export function checkWords(check: string): string {
+  if (CHECK_WORDS[check]) return CHECK_WORDS[check];
+  const crack = /^soundboard\.crack\.(\d+)$/.exec(check);
+  if (crack) return `soundboard crack ${Number(crack[1])}`;
+  const area = check.split('.')[0] as Area;
+  return AREA_LABELS[area] ? AREA_LABELS[area].toLowerCase() : check;
+}
+
+/** The area a check belongs to (`soundboard.crack.2` is the soundboard's). */
+export function areaOfCheck(check: string): Area | null {
+  const area = check.split('.')[0];
+  return (AREAS as readonly string[]).includes(area) ? (area as Area) : null;
 }

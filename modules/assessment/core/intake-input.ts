@@ -43,6 +43,8 @@ export const intakeInput = z
     recordingIds: z.array(z.number().int().positive()).max(20).default([]),
     /** A piano already in stock in stage received (logged before its inspection): assess it instead of adding one. */
     pianoId: z.number().int().positive().optional(),
+    /** The earlier record with the same maker, model and serial: intake staff say it is the same piano coming back. */
+    samePianoAs: z.number().int().positive().optional(),
   })
   .strict();
 export type IntakeInput = z.infer<typeof intakeInput>;
@@ -67,3 +69,14 @@ export const remeasureInput = z
     changeNote: multiLineText().trim().max(500).nullish(),
   })
   .strict();
+
+/** A piano already on record with the same maker, model and serial number: what the server answers, the screen shows. */
+export interface SamePiano {
+  id: number;
+  stockNumber: string;
+  stage: string;
+  maker: string;
+  model: string | null;
+  serialNumber: string | null;
+  createdAt: string;
+}

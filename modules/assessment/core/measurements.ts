@@ -16,6 +16,7 @@ export const FIELD_LABELS: Record<string, string> = {
   hammerGrooveDepthMm: 'hammer groove depth',
   brokenStrings: 'broken strings',
   a4Hz: 'measured A4',
+  keysTouchingNeighbour: 'keys that touch a neighbour',
   lengthCm: 'crack length',
   widestGapMm: 'crack gap',
 };
@@ -39,6 +40,8 @@ export const measurementsInput = z
   .object({
     keySidePlayMm: mm(10).nullish(),
     keyTouchesNeighbour: z.boolean().nullish(),
+    /** The keys that can be pushed against a neighbour, when any can. */
+    keysTouchingNeighbour: keyList.nullish(),
     keyLevelDeviationMm: mm(15).nullish(),
     keytopDamage: z.array(z.enum(KEYTOP_DAMAGE)).max(4).nullish(),
     stickingKeys: keyList.nullish(),
@@ -61,7 +64,12 @@ export const measurementsInput = z
     notesStickingOut: keyList.nullish(),
     overallImpression: rating.nullish(),
   })
-  .strict();
+  .strict()
+  .superRefine((m, ctx) => {
+    const keys = m.keysTouchingNeighbour ?? [];
+    if (m.keyTouchesNeighbour === true && !keys.length) ctx.addIssue({ code: 'custom', path: ['keysTouchingNeighbour'], message: 'is needed: name the keys that touch a neighbour' });
+    if (m.keyTouchesNeighbour !== true && keys.length) ctx.addIssue({ code: 'custom', path: ['keysTouchingNeighbour'], message: 'is only for a key that touches its neighbour: answer that question yes first' });
+  });
 export type Measurements = z.infer<typeof measurementsInput>;
 
 export const MM_PER_INCH = 25.4;

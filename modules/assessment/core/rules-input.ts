@@ -5,7 +5,6 @@ import type { GradeRules } from './grade-rules';
 const mm = z.number().min(0).max(15);
 const hours = z.number().min(0).max(200);
 const rating = z.number().int().min(1).max(5);
-const points = z.number().int().min(0).max(100);
 
 /** A manager's edit of the shop's grading rules; the version is given by the server. */
 export const gradeRulesInput = z
@@ -23,8 +22,7 @@ export const gradeRulesInput = z
     pitchRaiseCents: z.number().min(1).max(300),
     playPoorAtOrBelow: rating,
     playGoodAtOrAbove: rating,
-    scorePenalty: z.object({ watch: points, needsWork: points, serious: points }).strict(),
-    bands: z.object({ excellent: points, good: points, fair: points }).strict(),
+    minInspectedAreas: z.number().int('must be a whole number of areas').min(1, 'must be from 1 to 6 areas').max(6, 'must be from 1 to 6 areas'),
   })
   .strict()
   .superRefine((r, ctx) => {
@@ -37,8 +35,6 @@ export const gradeRulesInput = z
     order(r.hammerGrooveNormalMm, r.hammerGrooveReplaceMm, 'hammerGrooveReplaceMm', 'must not be below hammerGrooveNormalMm');
     order(r.pitchSoundCents, r.pitchRaiseCents, 'pitchRaiseCents', 'must not be below pitchSoundCents');
     order(r.playPoorAtOrBelow + 1, r.playGoodAtOrAbove, 'playGoodAtOrAbove', 'must be above playPoorAtOrBelow');
-    order(r.bands.fair, r.bands.good, 'bands.good', 'must not be below bands.fair');
-    order(r.bands.good, r.bands.excellent, 'bands.excellent', 'must not be below bands.good');
   });
 
 export type GradeRulesInput = z.infer<typeof gradeRulesInput>;

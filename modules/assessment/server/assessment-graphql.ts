@@ -1,4 +1,4 @@
-import { GraphQLInt, GraphQLList, GraphQLNonNull } from 'graphql';
+import { GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLString } from 'graphql';
 
 import { can } from '@/modules/accounts/core/roles';
 import { notAllowed } from '@/server/errors';
@@ -6,7 +6,7 @@ import type { GraphDomain } from '@/server/graphql/domain';
 import { GraphQLJSON } from '@/server/graphql/json-scalar';
 
 import { Assessment } from './assessment-models';
-import { assessmentHistory, correctAssessment, currentRules, intakeRecord, setGradeRules, submitIntake } from './assessment-service';
+import { assessmentHistory, correctAssessment, currentRules, findSamePianos, intakeRecord, setGradeRules, submitIntake } from './assessment-service';
 
 const pianoId = { pianoId: { type: new GraphQLNonNull(GraphQLInt) } };
 
@@ -32,6 +32,12 @@ export const assessmentGraph: GraphDomain = {
       description: 'Every version of a piano’s assessment, oldest first, each with what it changed.',
       args: pianoId,
       resolve: (_root, args: { pianoId: number }, ctx) => assessmentHistory(ctx.user, args.pianoId),
+    },
+    samePianos: {
+      type: new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(GraphQLJSON))),
+      description: 'Pianos already on record with this maker, model and serial number: the same piano taken in before.',
+      args: { maker: { type: new GraphQLNonNull(GraphQLString) }, model: { type: GraphQLString }, serialNumber: { type: new GraphQLNonNull(GraphQLString) }, exceptPianoId: { type: GraphQLInt } },
+      resolve: (_root, args: Record<string, unknown>, ctx) => findSamePianos(ctx.user, args),
     },
     intake: {
       type: GraphQLJSON,

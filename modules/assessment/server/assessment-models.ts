@@ -16,6 +16,7 @@ export class Intake extends BaseModel {
   receivedOn!: string;
   inspectedAt!: string;
   notes!: string | null;
+  samePianoAsId!: number | null;
   createdById!: number;
   createdAt!: string;
 }
@@ -29,9 +30,10 @@ export class Assessment extends BaseModel {
   version!: number;
   kind!: 'intake' | 'post_workshop';
   measurements!: Measurements;
+  /** As stored: format 2, or an older shape the service regrades from the measurements when read. */
   grade!: Grade;
-  score!: number;
-  band!: Grade['band'];
+  /** The fields a re-measurement measured again; null before the column existed. */
+  remeasuredFields!: string[] | null;
   referToTechnician!: boolean;
   notRecommendedForRetail!: boolean;
   rulesVersion!: string;
@@ -48,8 +50,6 @@ export class Assessment extends BaseModel {
       pianoId: { type: 'integer' },
       version: { type: 'integer' },
       kind: { type: 'string', enum: ['intake', 'post_workshop'] },
-      score: { type: 'integer', minimum: 0, maximum: 100 },
-      band: { type: 'string', enum: ['excellent', 'good', 'fair', 'poor'] },
       referToTechnician: { type: 'boolean' },
       notRecommendedForRetail: { type: 'boolean' },
       rulesVersion: { type: 'string' },

@@ -3,13 +3,14 @@ import { UniqueViolationError } from 'objection';
 
 import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
-import { gradeAssessment } from '@/modules/assessment/core/grade';
-import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
-import { correctionInput, intakeInput, remeasureInput } from '@/modules/assessment/core/intake-input';
+import { gradeAssessment, inspectedAreas, type Grade, type MeasureField } from '@/modules/assessment/core/grade';
+import { completeRules, defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
+import { correctionInput, intakeInput, remeasureInput, type SamePiano } from '@/modules/assessment/core/intake-input';
 import { diffMeasurements, type FieldChange } from '@/modules/assessment/core/measurement-diff';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-input';
 import { Photo } from '@/modules/photos/server/photo-model';
+import { serialKey } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano, recordArrival } from '@/modules/pianos/server/stage-service';
 import { attachRecordings } from '@/modules/tone/server/tone-attach';
@@ -20,7 +21,75 @@ import { Assessment, GradeRuleSet, Intake } from './assessment-models';
 
 export async function currentRules(trx?: Knex.Transaction): Promise<GradeRules> {
   const latest = await GradeRuleSet.query(trx).orderBy('id', 'desc').first();
-  return latest ? latest.rules : defaultRules;
+  return latest ? completeRules({ ...latest.rules, version: latest.version }) : defaultRules;
+}
+
+/** The rules of each version named, as they were saved (completed with defaults for rules added since). */
+async function rulesByVersion(trx: Knex.Transaction | undefined, versions: string[]): Promise<Map<string, GradeRules>> {
+  const wanted = [...new Set(versions)].filter((v) => v !== defaultRules.version);
+  const rows = wanted.length ? await GradeRuleSet.query(trx).whereIn('version', wanted) : [];
+  const out = new Map<string, GradeRules>([[defaultRules.version, defaultRules]]);
+  for (const r of rows) out.set(r.version, completeRules({ ...r.rules, version: r.version }));
+  return out;
+}
+
+/**
+ * An assessment as Feltwire reads it today. A grade stored in format 2 is the one given on submit;
+ * an older one (score and bands) is graded again from its own measurements with the rules of its
+ * own version, so nothing is claimed that those measurements do not support.
+ */
+export type GradedAssessment = Assessment & { grade: Grade };
+
+export async function withCurrentGrades(rows: Assessment[], trx?: Knex.Transaction): Promise<GradedAssessment[]> {
+  const old = rows.filter((r) => (r.grade as { format?: number } | null)?.format !== 2);
+  const rules = old.length ? await rulesByVersion(trx, old.map((r) => r.rulesVersion)) : new Map<string, GradeRules>();
+  for (const r of old) r.grade = gradeAssessment(r.measurements, rules.get(r.rulesVersion) ?? defaultRules);
+  return rows as GradedAssessment[];
+}
+
+/** Every version of a piano's assessment, oldest first, graded as Feltwire reads them. */
+export async function gradedAssessments(pianoId: number, trx?: Knex.Transaction): Promise<GradedAssessment[]> {
+  return withCurrentGrades(await Assessment.query(trx).where('piano_id', pianoId).orderBy('version'), trx);
+}
+
+export async function latestGradedAssessment(pianoId: number, trx?: Knex.Transaction): Promise<GradedAssessment | null> {
+  const row = await Assessment.query(trx).where('piano_id', pianoId).orderBy('version', 'desc').first();
+  return row ? (await withCurrentGrades([row], trx))[0] : null;
+}
+
+/**
+ * The fields a post-workshop version measured again: stored with it, or for rows from before that
+ * was kept, the ones whose values changed (an unchanged value may not have been measured again).
+ */
+export function remeasuredFieldsOf(row: Assessment, before: Assessment | undefined): MeasureField[] {
+  if (row.kind !== 'post_workshop') return [];
+  if (row.remeasuredFields) return row.remeasuredFields as MeasureField[];
+  return before ? (diffMeasurements(before.measurements, row.measurements).map((c) => c.field) as MeasureField[]) : [];
+}
+
+/** Records with the same maker, model and serial number: the same piano, taken in before. */
+export async function samePianos(trx: Knex.Transaction | undefined, p: { maker: string; model?: string | null; serialNumber?: string | null }, exceptId?: number | null): Promise<SamePiano[]> {
+  const serial = serialKey(p.serialNumber ?? '');
+  if (!serial || !p.maker.trim()) return [];
+  const q = Piano.query(trx)
+    .whereRaw('lower(trim(maker)) = ?', [p.maker.trim().toLowerCase()])
+    .whereRaw("lower(trim(coalesce(model, ''))) = ?", [(p.model ?? '').trim().toLowerCase()])
+    .whereRaw("regexp_replace(lower(serial_number), '[^a-z0-9]', '', 'g') = ?", [serial])
+    .orderBy('id');
+  if (exceptId != null) q.whereNot('id', exceptId);
+  const rows = await q;
+  return rows.map((r) => ({ id: r.id, stockNumber: r.stockNumber, stage: r.stage, maker: r.maker, model: r.model, serialNumber: r.serialNumber, createdAt: r.createdAt }));
+}
+
+export async function findSamePianos(actor: Actor, raw: { maker?: unknown; model?: unknown; serialNumber?: unknown; exceptPianoId?: unknown }): Promise<SamePiano[]> {
+  if (!can(actor.role, 'assess')) throw notAllowed('look up earlier intakes');
+  const text = (v: unknown, field: string, max: number) => {
+    if (v == null) return null;
+    if (typeof v !== 'string' || v.length > max) throw badInput(field, `must be text of at most ${max} characters`);
+    return v;
+  };
+  const except = raw.exceptPianoId == null ? null : Number(raw.exceptPianoId);
+  return samePianos(undefined, { maker: text(raw.maker, 'maker', 80) ?? '', model: text(raw.model, 'model', 80), serialNumber: text(raw.serialNumber, 'serialNumber', 40) }, except);
 }
 
 export async function setGradeRules(actor: Actor, raw: unknown): Promise<GradeRules> {
@@ -56,7 +125,19 @@ export interface SubmittedIntake {
 export async function submitIntake(actor: Actor, raw: unknown): Promise<SubmittedIntake> {
   if (!can(actor.role, 'assess')) throw notAllowed('log intakes');
   const input = intakeInput.parse(raw);
+  // An intake that measured nothing would move the piano on as if it had been inspected.
+  if (!inspectedAreas(input.measurements).length) throw badInput('measurements', 'has nothing measured yet: measure at least one area before submitting');
   return Piano.transaction(async (trx) => {
+    const same = await samePianos(trx, input.piano, input.pianoId);
+    if (same.length && !same.some((s) => s.id === input.samePianoAs)) {
+      const names = same.map((s) => s.stockNumber).join(', ');
+      throw new AppError(
+        'CONFLICT',
+        `${names} ${same.length === 1 ? 'has' : 'have'} the same maker, model and serial number. If this is the same piano coming back, say so and submit again; otherwise check the serial number.`,
+        'samePianoAs',
+      );
+    }
+    if (input.samePianoAs != null && !same.some((s) => s.id === input.samePianoAs)) throw badInput('samePianoAs', 'is not a piano with the same maker, model and serial number');
     const rules = await currentRules(trx);
     const grade = gradeAssessment(input.measurements, rules);
     const p = input.piano;
@@ -97,6 +178,7 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       receivedOn: input.receivedOn,
       inspectedAt: input.inspectedAt,
       notes: input.notes ?? null,
+      samePianoAsId: input.samePianoAs ?? null,
       createdById: actor.id,
     });
     const assessment = await insertAssessment(trx, actor, piano.id, 1, input.measurements, grade, null);
@@ -117,6 +199,7 @@ function insertAssessment(
   grade: SubmittedIntake['grade'],
   changeNote: string | null,
   kind: Assessment['kind'] = 'intake',
+  remeasuredFields: string[] | null = null,
 ) {
   return Assessment.query(trx).insertAndFetch({
     pianoId,
@@ -124,8 +207,7 @@ function insertAssessment(
     kind,
     measurements,
     grade,
-    score: grade.score,
-    band: grade.band,
+    remeasuredFields,
     referToTechnician: grade.referToTechnician,
     notRecommendedForRetail: grade.notRecommendedForRetail,
     rulesVersion: grade.rulesVersion,
@@ -138,6 +220,7 @@ function insertAssessment(
 export async function correctAssessment(actor: Actor, raw: unknown): Promise<SubmittedIntake> {
   if (!can(actor.role, 'assess')) throw notAllowed('correct assessments');
   const input = correctionInput.parse(raw);
+  if (!inspectedAreas(input.measurements).length) throw badInput('measurements', 'has nothing measured: a correction keeps at least one measured area');
   try {
     return await Piano.transaction(async (trx) => {
       const piano = await Piano.query(trx).findById(input.pianoId);
@@ -176,7 +259,7 @@ export async function submitRemeasurement(actor: Actor, raw: unknown): Promise<S
       const grade = gradeAssessment(measurements, await currentRules(trx));
       const version = latest.version + 1;
       const note = input.changeNote || 'Re-measured after workshop work.';
-      const assessment = await insertAssessment(trx, actor, piano.id, version, measurements, grade, note, 'post_workshop');
+      const assessment = await insertAssessment(trx, actor, piano.id, version, measurements, grade, note, 'post_workshop', Object.keys(input.measurements).sort());
       return { pianoId: piano.id, stockNumber: piano.stockNumber, assessmentId: assessment.id, version, grade };
     });
   } catch (err) {
@@ -197,11 +280,13 @@ export interface AssessmentVersion {
   submittedAt: string;
   /** What this version changed from the one before it. */
   changes: FieldChange[];
+  /** A re-measurement: the fields measured again after the work. */
+  remeasured: string[];
 }
 
 export async function assessmentHistory(actor: Actor, pianoId: number): Promise<AssessmentVersion[]> {
   if (!can(actor.role, 'readPianos')) throw notAllowed('read assessments');
-  const rows = await Assessment.query().where('piano_id', pianoId).withGraphFetched('submittedBy').orderBy('version');
+  const rows = await withCurrentGrades(await Assessment.query().where('piano_id', pianoId).withGraphFetched('submittedBy').orderBy('version'));
   return rows.map((a, i) => ({
     id: a.id,
     version: a.version,
@@ -213,6 +298,7 @@ export async function assessmentHistory(actor: Actor, pianoId: number): Promise<
     submittedBy: a.submittedBy?.name ?? 'unknown',
     submittedAt: a.submittedAt,
     changes: i === 0 ? [] : diffMeasurements(rows[i - 1].measurements, a.measurements),
+    remeasured: remeasuredFieldsOf(a, rows[i - 1]),
   }));
 }
 
@@ -221,7 +307,15 @@ export async function intakeRecord(actor: Actor, pianoId: number): Promise<Recor
   if (!can(actor.role, 'readPianos')) throw notAllowed('read intakes');
   const intake = await Intake.query().findOne({ piano_id: pianoId });
   if (!intake) return null;
-  const base = { pianoId, acquisition: intake.acquisition, receivedOn: intake.receivedOn, inspectedAt: intake.inspectedAt, createdAt: intake.createdAt };
+  const earlier = intake.samePianoAsId != null ? await Piano.query().findById(intake.samePianoAsId) : null;
+  const base = {
+    pianoId,
+    acquisition: intake.acquisition,
+    receivedOn: intake.receivedOn,
+    inspectedAt: intake.inspectedAt,
+    createdAt: intake.createdAt,
+    samePianoAs: earlier ? { id: earlier.id, stockNumber: earlier.stockNumber } : null,
+  };
   if (!can(actor.role, 'readSellerDetails')) return base;
   return {
     ...base,

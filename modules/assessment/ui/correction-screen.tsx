@@ -5,6 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
+import { READINESS_WORDS } from '@/modules/assessment/core/grade';
 import { setPianoFlash } from '@/modules/pianos/ui/piano-flash';
 import { usePiano } from '@/modules/pianos/ui/use-piano';
 import { Button } from '@/modules/theme/ui/button';
@@ -95,7 +96,7 @@ function CorrectionForm({ userId, pianoId, latest, stockNumber, banner, onConfli
   const onSubmitted = useCallback(
     (result: SubmittedAssessment) => {
       forget();
-      setPianoFlash(result.pianoId, `Correction saved as version ${result.version}, graded ${result.grade.score} of 100.`);
+      setPianoFlash(result.pianoId, `Correction saved as version ${result.version}, ${READINESS_WORDS[result.grade.readiness].toLowerCase()}${result.grade.provisional ? ' (provisional)' : ''}.`);
       router.replace(`/pianos/${result.pianoId}`);
     },
     [forget, router],

@@ -2,13 +2,16 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem, problemWithoutField } from '@/modules/accounts/ui/graph-error';
-import { BAND_LABELS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
+import { AREAS, MARKS, MARK_WORDS, READINESS_WORDS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
 import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, type GradeRulesInput } from '@/modules/assessment/core/rules-input';
 import { CellInput } from '@/modules/shop/ui/components/cell-input';
 import { Feedback, type FeedbackState } from '@/modules/shop/ui/components/feedback';
 import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { useRateCard } from '@/modules/shop/ui/use-rate-card';
+import { conditionReport } from '@/modules/shop/core/condition-report';
+import type { RateCard } from '@/modules/shop/core/rate-card';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -19,14 +22,11 @@ import { Body, Heading } from '@/modules/theme/ui/text';
 import { TextField } from '@/modules/theme/ui/text-field';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { GradeSummary } from './components/grade-summary';
+import { ConditionSummary } from './components/condition-summary';
 import { useGradeRulesInForce, useSaveGradeRules } from './use-grade-rules-editor';
 
-/** A field of the rules by its path in `GradeRules` ("bands.good"), as the schema and the server name it. */
-type RuleKey =
-  | Exclude<keyof GradeRulesInput, 'scorePenalty' | 'bands'>
-  | `scorePenalty.${keyof GradeRules['scorePenalty']}`
-  | `bands.${keyof GradeRules['bands']}`;
+/** A field of the rules by its name in `GradeRules`, as the schema and the server name it. */
+type RuleKey = keyof GradeRulesInput;
 
 interface RuleField {
   key: RuleKey;
@@ -47,7 +47,6 @@ interface RuleGroup {
 const MM = { unit: 'mm', min: 0, max: 15 } as const;
 const HOURS = { unit: 'h', min: 0, max: 200 } as const;
 const RATING = { unit: 'of 5', min: 1, max: 5, whole: true } as const;
-const POINTS = { unit: 'points', min: 0, max: 100, whole: true } as const;
 
 const GROUPS: readonly RuleGroup[] = [
   {
@@ -102,22 +101,9 @@ const GROUPS: readonly RuleGroup[] = [
     ],
   },
   {
-    title: 'Score',
-    description: 'Every piano starts at 100; each finding takes points off by its severity.',
-    fields: [
-      { key: 'scorePenalty.watch', label: 'Points off per “watch” finding', ...POINTS },
-      { key: 'scorePenalty.needsWork', label: 'Points off per “needs work” finding', ...POINTS },
-      { key: 'scorePenalty.serious', label: 'Points off per “serious” finding', ...POINTS },
-    ],
-  },
-  {
-    title: 'Bands',
-    description: 'The lowest score of each band; below “fair” a piano is poor.',
-    fields: [
-      { key: 'bands.excellent', label: 'Excellent from a score of', ...POINTS },
-      { key: 'bands.good', label: 'Good from a score of', ...POINTS },
-      { key: 'bands.fair', label: 'Fair from a score of', ...POINTS },
-    ],
+    title: 'Provisional grades',
+    description: `A grade over too few areas claims too much: it is provisional, gives no readiness verdict of quality, and no disclosure is published from it. There are ${AREAS.length} areas.`,
+    fields: [{ key: 'minInspectedAreas', label: 'A grade is final from this many inspected areas', unit: 'areas', min: 1, max: AREAS.length, whole: true }],
   },
 ];
 
@@ -127,9 +113,7 @@ const LABELS = Object.fromEntries(FIELDS.map((f) => [f.key, f.label])) as Record
 type Draft = Record<RuleKey, string>;
 
 function valueAt(rules: GradeRules, key: RuleKey): number {
-  const [head, tail] = key.split('.') as [keyof GradeRules, string | undefined];
-  const value = rules[head];
-  return tail ? (value as Record<string, number>)[tail] : (value as number);
+  return rules[key];
 }
 
 function draftOf(rules: GradeRules): Draft {
@@ -150,8 +134,7 @@ function numbersOf(d: Draft): GradeRulesInput | null {
     if (v == null) return null;
     n[f.key] = v;
   }
-  const { 'scorePenalty.watch': watch, 'scorePenalty.needsWork': needsWork, 'scorePenalty.serious': serious, 'bands.excellent': excellent, 'bands.good': good, 'bands.fair': fair, ...flat } = n;
-  return { ...flat, scorePenalty: { watch, needsWork, serious }, bands: { excellent, good, fair } };
+  return n;
 }
 
 /** "must not be below keyLevelSoundMm" reads "must not be below “Key level is sound up to”". */
@@ -220,6 +203,7 @@ function GradeRulesLoader() {
 function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () => void }) {
   const wide = useWide();
   const save = useSaveGradeRules();
+  const { card } = useRateCard();
   const [d, setD] = useState<Draft>(() => draftOf(rules));
   const [errors, setErrors] = useState<Partial<Record<RuleKey, string>>>({});
   const [feedback, setFeedback] = useState<FeedbackState>(null);
@@ -263,8 +247,8 @@ function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () =
     <Card role="region" accessibilityLabel="Preview on a sample inspection" testID="grading-preview">
       <Heading level={2}>Preview</Heading>
       <Body tone="secondary">{SAMPLE_WORDS}</Body>
-      <InForceLine grade={inForce} preview={preview} />
-      {preview ? <GradeSummary grade={preview} scoreTestID="grading-preview-score" /> : <Notice tone="info">Fill in every value with a number to see the preview.</Notice>}
+      <InForceLine grade={inForce} preview={preview} card={card} />
+      {preview ? <ConditionSummary grade={preview} card={card} testID="grading-preview-condition" /> : <Notice tone="info">Fill in every value with a number to see the preview.</Notice>}
     </Card>
   );
 
@@ -345,16 +329,24 @@ function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () =
   );
 }
 
-/** What the sample scores under the rules in force, beside what it scores with the draft. */
-function InForceLine({ grade, preview }: { grade: Grade; preview: Grade | null }) {
-  const same = preview != null && preview.score === grade.score && preview.band === grade.band && preview.findings.length === grade.findings.length;
+/** The sample in words: its verdict, its findings by mark, and the hours of work they call for. */
+function sampleWords(grade: Grade, card: RateCard | null): string {
+  const counts = MARKS.map((m) => [m, grade.findings.filter((f) => f.mark === m).length] as const).filter(([, n]) => n > 0);
+  const work = card ? `, ${String(Number(conditionReport(grade, card).workHours.toFixed(2)))} h of work` : '';
+  return `${READINESS_WORDS[grade.readiness]}${grade.provisional ? ' (provisional)' : ''}; ${counts.map(([m, n]) => `${n} ${MARK_WORDS[m].toLowerCase()}`).join(', ')}${work}`;
+}
+
+/** How the sample stands under the rules in force, beside how it stands with the draft. */
+function InForceLine({ grade, preview, card }: { grade: Grade; preview: Grade | null; card: RateCard | null }) {
+  const now = sampleWords(grade, card);
+  const next = preview ? sampleWords(preview, card) : null;
   return (
     <View style={styles.inForce} testID="grading-preview-compare">
-      <Body variant="small" tone="secondary">
-        Under the rules in force: {grade.score} of 100, {BAND_LABELS[grade.band]}, {grade.findings.length} findings.
+      <Body variant="small" tone="secondary" testID="grading-in-force">
+        Under the rules in force: {now}.
       </Body>
-      <Body variant="small" tone={same ? 'quiet' : 'accent'}>
-        {preview == null ? 'With your changes: not yet a number in every field.' : same ? 'Your changes do not move this sample.' : `With your changes: ${preview.score} of 100, ${BAND_LABELS[preview.band]}.`}
+      <Body variant="small" tone={next === now ? 'quiet' : 'accent'} testID="grading-with-changes">
+        {next == null ? 'With your changes: not yet a number in every field.' : next === now ? 'Your changes do not move this sample.' : `With your changes: ${next}.`}
       </Body>
     </View>
   );

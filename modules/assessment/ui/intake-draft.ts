@@ -12,6 +12,7 @@ import {
   type STEEL_CORROSION,
   type TUNING_PINS,
 } from '@/modules/assessment/core/measurements';
+import { FIELD_AREAS, type MeasureField } from '@/modules/assessment/core/grade';
 import type { PhotoArea } from '@/modules/photos/core/photo-rules';
 import type { CaseCondition, PianoFacts, PianoKind } from '@/modules/pianos/core/piano';
 import type { PlayTestFill } from '@/modules/tone/core/keyboard-report';
@@ -58,6 +59,8 @@ export interface CrackDraft {
 export interface MeasureDraft {
   keySidePlayMm: string;
   keyTouchesNeighbour: boolean | null;
+  /** the keys that touch a neighbour, as typed: "23, 24, 61" */
+  keysTouchingNeighbour: string;
   keyLevelDeviationMm: string;
   keytopDamage: (typeof KEYTOP_DAMAGE)[number][];
   stickingKeys: string;
@@ -128,6 +131,8 @@ export interface AssessmentDraft {
   pianoId: number | null;
   /** correction only: the version the form started from */
   baseVersion: number | null;
+  /** an earlier record of the same maker, model and serial, confirmed as the same piano coming back */
+  samePianoAs: number | null;
   changeNote: string;
   /** submit was pressed while offline: send as soon as the connection is back */
   pendingSubmit: boolean;
@@ -138,6 +143,7 @@ export interface AssessmentDraft {
 export const EMPTY_MEASUREMENTS: MeasureDraft = {
   keySidePlayMm: '',
   keyTouchesNeighbour: null,
+  keysTouchingNeighbour: '',
   keyLevelDeviationMm: '',
   keytopDamage: [],
   stickingKeys: '',
@@ -208,6 +214,7 @@ export function newIntakeDraft(now: Date): AssessmentDraft {
     recordingIds: [],
     pianoId: null,
     baseVersion: null,
+    samePianoAs: null,
     changeNote: '',
     pendingSubmit: false,
     changedAt: null,
@@ -259,6 +266,7 @@ export function measureDraftFrom(m: Measurements): MeasureDraft {
   return {
     keySidePlayMm: numText(m.keySidePlayMm),
     keyTouchesNeighbour: m.keyTouchesNeighbour ?? null,
+    keysTouchingNeighbour: keysText(m.keysTouchingNeighbour),
     keyLevelDeviationMm: numText(m.keyLevelDeviationMm),
     keytopDamage: m.keytopDamage ?? [],
     stickingKeys: keysText(m.stickingKeys),
@@ -361,6 +369,7 @@ export type FieldErrors = Record<string, string>;
 const NOT_A_NUMBER = 'must be a number, such as 2.5';
 const NOT_WHOLE = 'must be a whole number';
 const NOT_KEYS = 'must list key numbers from 1 to 88, separated by commas';
+const NOTHING_MEASURED = 'has nothing measured yet: measure at least one area before submitting';
 
 function put(raw: Record<string, unknown>, errors: FieldErrors, path: string, key: string, value: Parsed | number[] | typeof BAD, bad: string) {
   if (value === BAD) errors[path] = bad;
@@ -374,6 +383,8 @@ export function measurementsFromDraft(m: MeasureDraft): { raw: Record<string, un
   const p = (field: keyof MeasureDraft) => `measurements.${field}`;
   put(raw, errors, p('keySidePlayMm'), 'keySidePlayMm', parseDecimal(m.keySidePlayMm), NOT_A_NUMBER);
   if (m.keyTouchesNeighbour != null) raw.keyTouchesNeighbour = m.keyTouchesNeighbour;
+  // The keys go with a yes only: answering no afterwards leaves them typed but not sent.
+  if (m.keyTouchesNeighbour) put(raw, errors, p('keysTouchingNeighbour'), 'keysTouchingNeighbour', parseKeyList(m.keysTouchingNeighbour), NOT_KEYS);
   put(raw, errors, p('keyLevelDeviationMm'), 'keyLevelDeviationMm', parseDecimal(m.keyLevelDeviationMm), NOT_A_NUMBER);
   if (m.keytopDamage.length) raw.keytopDamage = m.keytopDamage;
   put(raw, errors, p('stickingKeys'), 'stickingKeys', parseKeyList(m.stickingKeys), NOT_KEYS);
@@ -497,8 +508,10 @@ export function buildIntakeInput(d: AssessmentDraft): BuildResult {
   };
   if (text(d.notes)) input.notes = text(d.notes);
   if (d.pianoId != null) input.pianoId = d.pianoId;
+  if (d.samePianoAs != null) input.samePianoAs = d.samePianoAs;
   const parsed = intakeInput.safeParse(input);
   if (!parsed.success) addIssues(errors, parsed.error.issues);
+  if (!Object.keys(measurements.raw).length && !Object.keys(measurements.errors).length) errors.measurements = NOTHING_MEASURED;
   // A question left unanswered reads better than the schema's list of allowed values.
   if (!d.acquisition) errors.acquisition = 'is needed: pick one';
   if (!d.inspectedAt) errors.inspectedAt = 'is needed: pick one';
@@ -521,6 +534,7 @@ export function buildCorrectionInput(d: AssessmentDraft): BuildResult {
   };
   const parsed = correctionInput.safeParse(input);
   if (!parsed.success) addIssues(errors, parsed.error.issues);
+  if (!Object.keys(measurements.raw).length && !Object.keys(measurements.errors).length) errors.measurements = NOTHING_MEASURED;
   return Object.keys(errors).length ? { ok: false, errors } : { ok: true, input };
 }
 
@@ -536,6 +550,8 @@ export function liveMeasurements(m: MeasureDraft): Measurements {
     if (parsed.success) return parsed.data;
     for (const issue of parsed.error.issues) {
       const [field, index] = issue.path;
+      // Keys that touch a neighbour and the yes they go with stand or fall together.
+      if (field === 'keysTouchingNeighbour') delete raw.keyTouchesNeighbour;
       if (field === 'soundboardCracks' && typeof index === 'number') {
         const cracks = raw.soundboardCracks as unknown[];
         cracks.splice(index, 1);
@@ -554,11 +570,9 @@ export function stepOfPath(path: string): StepKey {
   if (head === 'photoIds') return 'photos';
   if (head === 'changeNote') return 'review';
   if (head !== 'measurements') return 'piano';
-  if (['keySidePlayMm', 'keyTouchesNeighbour', 'keyLevelDeviationMm', 'keytopDamage', 'stickingKeys', 'deadKeys'].includes(field)) return 'keys';
-  if (['hammerGrooveDepthMm', 'hammerFelt', 'hammerFeltLeft'].includes(field)) return 'hammers';
-  if (['steelCorrosion', 'bassWinding', 'brokenStrings'].includes(field)) return 'strings';
-  if (['soundboardCracks', 'ribsSeparated'].includes(field)) return 'soundboard';
-  return 'play';
+  if (!field) return 'review';
+  const area = FIELD_AREAS[field as MeasureField];
+  return area === 'tuning' || area === 'play' || !area ? 'play' : area;
 }
 
 export function errorsOfStep(errors: FieldErrors, step: StepKey): FieldErrors {

@@ -5,6 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
+import { READINESS_WORDS } from '@/modules/assessment/core/grade';
 import { setPianoFlash } from '@/modules/pianos/ui/piano-flash';
 import { usePiano } from '@/modules/pianos/ui/use-piano';
 import type { PianoRecord } from '@/modules/pianos/ui/use-pianos';
@@ -142,7 +143,7 @@ function IntakeForm({ userId, piano }: { userId: number; piano: PianoRecord | nu
     (result: SubmittedAssessment) => {
       forget();
       const recorded = tied ? `Intake recorded for ${result.stockNumber}` : `Intake recorded as ${result.stockNumber}`;
-      setPianoFlash(result.pianoId, `${recorded}, graded ${result.grade.score} of 100.`);
+      setPianoFlash(result.pianoId, `${recorded}, ${READINESS_WORDS[result.grade.readiness].toLowerCase()}${result.grade.provisional ? ' (provisional)' : ''}.`);
       router.replace(`/pianos/${result.pianoId}`);
     },
     [forget, router, tied],

@@ -22,6 +22,7 @@ export type MeasureField = keyof Measurements;
 export const MEASURE_LABELS: Record<MeasureField, string> = {
   keySidePlayMm: 'Key side play',
   keyTouchesNeighbour: 'A key can be pushed until it touches its neighbour',
+  keysTouchingNeighbour: 'Keys that touch a neighbour',
   keyLevelDeviationMm: 'Key level deviation',
   keytopDamage: 'Keytop damage',
   stickingKeys: 'Sticking keys',
@@ -76,12 +77,14 @@ const INPUT_LABELS: Record<string, string> = {
   notes: 'Internal notes',
   photoIds: 'Photos',
   changeNote: 'Reason for the correction',
+  samePianoAs: 'The same piano taken in before',
+  measurements: 'The inspection',
 };
 
 /** The words for an input path such as `measurements.keySidePlayMm` or `measurements.soundboardCracks.0.widestGapMm`. */
 export function labelForPath(path: string): string {
   const parts = path.split('.');
-  if (parts[0] === 'measurements') {
+  if (parts[0] === 'measurements' && parts.length > 1) {
     if (parts[1] === 'soundboardCracks' && parts.length >= 4) return `Crack ${Number(parts[2]) + 1}: ${CRACK_LABELS[parts[3]] ?? parts[3]}`;
     return MEASURE_LABELS[parts[1] as MeasureField] ?? parts[1];
   }

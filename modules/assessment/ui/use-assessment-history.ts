@@ -17,6 +17,8 @@ export interface AssessmentVersion {
   submittedBy: string;
   submittedAt: string;
   changes: FieldChange[];
+  /** a re-measurement after the work: the fields measured again */
+  remeasured?: string[];
 }
 
 // JSON answers carry no type names: say which records they come from, so a correction refreshes them.

@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useQuery } from 'urql';
 
-import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
+import { completeRules, defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
 
 export const GRADE_RULES_QUERY = 'query GradeRules { gradeRules }';
 
@@ -9,14 +9,15 @@ const CACHE_KEY = 'feltwire.grade-rules';
 
 function looksLikeRules(value: unknown): value is GradeRules {
   const r = value as Partial<GradeRules> | null;
-  return !!r && typeof r.version === 'string' && typeof r.keySidePlayNormalMm === 'number' && !!r.scorePenalty && !!r.bands;
+  return !!r && typeof r.version === 'string' && typeof r.keySidePlayNormalMm === 'number';
 }
 
 function cachedRules(): GradeRules | null {
   try {
     const raw = typeof localStorage === 'undefined' ? null : localStorage.getItem(CACHE_KEY);
     const parsed: unknown = raw ? JSON.parse(raw) : null;
-    return looksLikeRules(parsed) ? parsed : null;
+    // A copy kept before a rule was added is completed with the shop default for it.
+    return looksLikeRules(parsed) ? completeRules(parsed) : null;
   } catch {
     return null;
   }

@@ -12,6 +12,8 @@ export interface IntakeRecord {
   inspectedAt: InspectionPlace;
   createdAt: string;
   seller?: { name: string; phone: string | null; email: string | null; address: string | null };
+  /** the earlier record intake staff matched it with: the same piano taken in again */
+  samePianoAs?: { id: number; stockNumber: string } | null;
   notes?: string | null;
 }
 

@@ -2,7 +2,21 @@ import { z } from '@/modules/input/core/zod';
 
 import { lineText, multiLineText } from '@/modules/input/core/text';
 
-import { AREAS, AREA_LABELS, type Area, type Finding, type Grade, type Severity } from '@/modules/assessment/core/grade';
+import {
+  AREAS,
+  AREA_LABELS,
+  MARK_WORDS,
+  areaOfCheck,
+  callsForWork,
+  checkWords,
+  worstMark,
+  type Area,
+  type AreaMark,
+  type Finding,
+  type Grade,
+  type Mark,
+  type MeasureField,
+} from '@/modules/assessment/core/grade';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { describeSize, describeYear, type CaseCondition, type PianoFacts, type PianoKind } from '@/modules/pianos/core/piano';
@@ -13,55 +27,113 @@ export const DISCLOSURE_AREAS = [...AREAS, 'case'] as const;
 export type DisclosureArea = (typeof DISCLOSURE_AREAS)[number];
 export const DISCLOSURE_AREA_LABELS: Record<DisclosureArea, string> = { ...AREA_LABELS, case: 'Case and finish' };
 
-/** A buyer's words for how an area stands. */
-export const CONDITION_WORDS: Record<Severity, string> = {
-  sound: 'In good order',
-  watch: 'Worth knowing',
-  needs_work: 'Needs attention',
-  serious: 'Significant',
+const CASE_WORDS: Record<CaseCondition, [Mark, string]> = {
+  excellent: ['fine', 'The case and finish are in excellent condition.'],
+  good: ['fine', 'The case and finish are in good condition, with light signs of use.'],
+  worn: ['noted', 'The case and finish show wear: marks and scratches from years of use.'],
+  damaged: ['work', 'The case or finish is damaged.'],
 };
-const RANK: Record<Severity, number> = { sound: 0, watch: 1, needs_work: 2, serious: 3 };
 
-
-const CASE_WORDS: Record<CaseCondition, [Severity, string]> = {
-  excellent: ['sound', 'The case and finish are in excellent condition.'],
-  good: ['sound', 'The case and finish are in good condition, with light signs of use.'],
-  worn: ['watch', 'The case and finish show wear: marks and scratches from years of use.'],
-  damaged: ['needs_work', 'The case or finish is damaged.'],
-};
+/** An inspection as the disclosure needs it. */
+export interface InspectionFacts {
+  measurements: Measurements;
+  grade: Grade;
+  submittedAt: string;
+}
 
 export interface DisclosureInput {
   piano: PianoFacts;
   askingPriceMinor: number | null;
   currency: string;
-  assessment: { kind: 'intake' | 'post_workshop'; measurements: Measurements; grade: Grade; submittedAt: string };
-  workDone: { task: string; title: string }[];
+  /** the inspection the piano came in with (or its latest correction) */
+  intake: InspectionFacts;
+  /** the newest inspection after workshop work, and every field measured again since the intake */
+  after: (InspectionFacts & { remeasured: MeasureField[] }) | null;
+  /** work items marked done, with the checks that called for them */
+  workDone: { task: string; title: string; because: string[] }[];
+  /** the manager chose to sell it without reconditioning */
+  soldAsItStands: boolean;
   photos: { id: number; area: string; caption: string | null }[];
   texts: { dealerName: string; warranty: string };
+}
+
+export interface DisclosureFinding {
+  mark: Mark;
+  text: string;
 }
 
 export interface DisclosureAreaContent {
   area: DisclosureArea;
   label: string;
+  /** how the area stands now, as far as what was measured shows */
+  mark: AreaMark;
   condition: string;
-  severity: Severity;
-  findings: { severity: Severity; text: string }[];
+  /** what the inspection at intake found */
+  found: DisclosureFinding[];
+  /** work was done in this area: what was found describes it before the work */
+  foundBeforeWork: boolean;
   workDone: string[];
+  /** what was measured again after the work */
+  measuredAfter: DisclosureFinding[];
+  /** checks found at intake in an area worked on and not measured again since */
+  notMeasuredAgain: string[];
+  /** work the findings call for that was not done */
+  notDone: string[];
   photoIds: number[];
 }
 
+export interface DisclosurePitch {
+  a4Hz: number;
+  cents: number;
+  text: string;
+  measuredOn: string;
+  /** at intake; after the work; or at intake in an area worked on since and not measured again */
+  when: 'intake' | 'after_work' | 'before_work';
+}
+
+/** The buyer's disclosure, format 2: found at intake, work done and measured after the work kept apart. */
 export interface DisclosureContent {
+  format: 2;
   dealerName: string;
   piano: { stockNumber: string; maker: string; model: string | null; serialNumber: string | null; year: string; kind: PianoKind; size: string; finish: string | null };
   askingPrice: { minor: number; currency: string } | null;
-  assessedOn: string;
-  assessedAfterWorkshop: boolean;
-  pitch: { a4Hz: number; cents: number; text: string } | null;
+  /** YYYY-MM-DD of the intake inspection */
+  inspectedOn: string;
+  /** YYYY-MM-DD of the newest measurements after the work, if any */
+  measuredAfterOn: string | null;
+  soldAsItStands: boolean;
+  /** every piece of work the findings call for that was not done */
+  notDone: string[];
+  /** work done that belongs to no one area */
+  otherWorkDone: string[];
+  pitch: DisclosurePitch | null;
   areas: DisclosureAreaContent[];
   photos: { id: number; area: string; caption: string | null }[];
   warranty: string;
   notices: { title: string; text: string }[];
 }
+
+/** The first shape of the content, published before format 2: read back and shown as it was published. */
+export interface DisclosureContentV1 {
+  format?: undefined;
+  dealerName: string;
+  piano: DisclosureContent['piano'];
+  askingPrice: { minor: number; currency: string } | null;
+  assessedOn: string;
+  assessedAfterWorkshop: boolean;
+  pitch: { a4Hz: number; cents: number; text: string } | null;
+  areas: { area: string; label: string; condition: string; severity: V1Severity; findings: { severity: V1Severity; text: string }[]; workDone: string[]; photoIds: number[] }[];
+  photos: { id: number; area: string; caption: string | null }[];
+  warranty: string;
+  notices: { title: string; text: string }[];
+}
+export type V1Severity = 'sound' | 'watch' | 'needs_work' | 'serious';
+/** The words format 1 printed beside a finding, and the mark each reads as today. */
+export const V1_SEVERITY_WORDS: Record<V1Severity, string> = { sound: 'In good order', watch: 'Worth knowing', needs_work: 'Needs attention', serious: 'Significant' };
+export const V1_MARKS: Record<V1Severity, Mark> = { sound: 'fine', watch: 'noted', needs_work: 'work', serious: 'major' };
+
+export type AnyDisclosureContent = DisclosureContent | DisclosureContentV1;
+export const isFormat2 = (c: AnyDisclosureContent): c is DisclosureContent => c.format === 2;
 
 const NOTICES = [
   {
@@ -82,41 +154,108 @@ const NOTICES = [
   },
 ];
 
-function worst(findings: { severity: Severity }[]): Severity {
-  return findings.reduce<Severity>((w, f) => (RANK[f.severity] > RANK[w] ? f.severity : w), 'sound');
+const given = (v: unknown) => v != null && !(Array.isArray(v) && v.length === 0);
+/** The fields a finding rests on that the inspection actually gave. */
+const givenFields = (f: Finding, m: Measurements) => f.fields.filter((field) => given(m[field]));
+const toShown = (f: Finding): DisclosureFinding => ({ mark: f.mark, text: f.finding });
+const unique = (xs: string[]) => [...new Set(xs)];
+const day = (iso: string) => iso.slice(0, 10);
+
+function taskArea(task: string): DisclosureArea | null {
+  return (WORK_TASK_AREAS as Record<string, DisclosureArea | undefined>)[task] ?? null;
 }
 
-/** The buyer-facing content of a disclosure. Pure: the same input always gives the same content. */
+/** The areas a done item worked on: its task's area, and the areas of the checks that called for it. */
+function workedAreas(w: DisclosureInput['workDone'][number]): DisclosureArea[] {
+  return unique([taskArea(w.task), ...w.because.map(areaOfCheck)].filter((a): a is DisclosureArea => !!a)) as DisclosureArea[];
+}
+
+const taskLabel = (task: WorkTask) => WORK_TASK_LABELS[task] ?? task;
+
+/**
+ * The buyer-facing content of a disclosure. Pure: the same input always gives the same content.
+ * A finding in an area worked on stands only once measured again after the work; until then it is
+ * shown as found before the work, and the area says what was not measured again.
+ */
 export function buildDisclosure(input: DisclosureInput): DisclosureContent {
-  const { piano, assessment } = input;
-  const byArea = new Map<DisclosureArea, Finding[]>();
-  // Every finding the grade marks for disclosure appears; sound findings appear as good news.
-  for (const f of assessment.grade.findings) byArea.set(f.area, [...(byArea.get(f.area) ?? []), f]);
+  const { piano, intake, after } = input;
+  const remeasured = new Set<MeasureField>(after?.remeasured ?? []);
+  const doneTasks = new Set(input.workDone.map((w) => w.task));
   const areas: DisclosureAreaContent[] = [];
   for (const area of DISCLOSURE_AREAS) {
-    const findings: { severity: Severity; text: string }[] = (byArea.get(area as Area) ?? []).map((f) => ({ severity: f.severity, text: f.finding }));
-    if (area === 'case' && piano.caseCondition) {
-      const [severity, text] = CASE_WORDS[piano.caseCondition];
-      findings.push({ severity, text: piano.caseNotes ? `${text} ${piano.caseNotes}` : text });
-    }
-    const workDone = input.workDone.filter((w) => WORK_TASK_AREAS[w.task as WorkTask] === area).map((w) => w.title || WORK_TASK_LABELS[w.task as WorkTask]);
+    const worked = input.workDone.filter((w) => workedAreas(w).includes(area));
+    const workDone = worked.map((w) => w.title || taskLabel(w.task as WorkTask));
     const photoIds = input.photos.filter((p) => p.area === area).map((p) => p.id);
-    if (!findings.length && !workDone.length && !photoIds.length) continue;
-    const severity = worst(findings);
-    areas.push({ area, label: DISCLOSURE_AREA_LABELS[area], condition: findings.length ? CONDITION_WORDS[severity] : 'Not inspected', severity, findings, workDone, photoIds });
+    if (area === 'case') {
+      const found: DisclosureFinding[] = [];
+      if (piano.caseCondition) {
+        const [mark, text] = CASE_WORDS[piano.caseCondition];
+        found.push({ mark, text: piano.caseNotes ? `${text} ${piano.caseNotes}` : text });
+      }
+      // The workshop does not grade the case again: after work on it, what was found is history.
+      const stale = worked.length > 0 && found.length > 0;
+      const mark: AreaMark = found.length && !stale ? found[0].mark : 'unseen';
+      areas.push({
+        area,
+        label: DISCLOSURE_AREA_LABELS.case,
+        mark,
+        condition: stale ? 'Not looked at again after the work' : MARK_WORDS[mark],
+        found,
+        foundBeforeWork: worked.length > 0,
+        workDone,
+        measuredAfter: [],
+        notMeasuredAgain: stale ? ['case and finish'] : [],
+        notDone: !stale && piano.caseCondition === 'damaged' && !doneTasks.has('cabinet_touch_up') ? [taskLabel('cabinet_touch_up')] : [],
+        photoIds,
+      });
+      continue;
+    }
+    const a = area as Area;
+    const atIntake = intake.grade.findings.filter((f) => f.area === a);
+    const measuredAfter = after
+      ? after.grade.findings.filter((f) => {
+          const fields = givenFields(f, after.measurements);
+          return f.area === a && fields.length > 0 && fields.every((x) => remeasured.has(x));
+        })
+      : [];
+    const touched = (f: Finding) => givenFields(f, intake.measurements).some((x) => remeasured.has(x));
+    const fullyRemeasured = (f: Finding) => givenFields(f, intake.measurements).every((x) => remeasured.has(x));
+    // Still true: found at intake, in an area nobody worked on, not measured again since.
+    const standing = atIntake.filter((f) => !worked.length && !touched(f));
+    const notMeasuredAgain = worked.length ? unique(atIntake.filter((f) => !fullyRemeasured(f)).map((f) => checkWords(f.check))) : [];
+    const now = [...standing, ...measuredAfter];
+    const inspected = intake.grade.inspectedAreas.includes(a) || measuredAfter.length > 0;
+    const worst = worstMark(now.map((f) => f.mark));
+    const mark: AreaMark = worst ?? 'unseen';
+    // Only what was measured again speaks for the area after the work; the words say when that is part of it.
+    const condition = worst ? (notMeasuredAgain.length ? `${MARK_WORDS[worst]} where measured again` : MARK_WORDS[worst]) : inspected ? 'Not measured after the work' : MARK_WORDS.unseen;
+    const notDone = unique(now.flatMap((f) => (callsForWork(f) ? f.work.filter((w) => !w.alternativeTo && !doneTasks.has(w.task)).map((w) => taskLabel(w.task)) : [])));
+    areas.push({
+      area,
+      label: DISCLOSURE_AREA_LABELS[area],
+      mark,
+      condition,
+      found: atIntake.map(toShown),
+      foundBeforeWork: worked.length > 0,
+      workDone,
+      measuredAfter: measuredAfter.map(toShown),
+      notMeasuredAgain,
+      notDone,
+      photoIds,
+    });
   }
-  const a4 = assessment.measurements.a4Hz;
-  const day = assessment.submittedAt.slice(0, 10);
-  const pitch =
-    a4 != null
-      ? (() => {
-          const c = cents(a4);
-          const rounded = Math.round(Math.abs(c));
-          const where = rounded === 0 ? 'at standard pitch' : `${rounded} cents ${c < 0 ? 'below' : 'above'} standard pitch`;
-          return { a4Hz: a4, cents: Math.round(c * 10) / 10, text: `A4 measured at ${a4.toFixed(1)} Hz, ${where}, on ${day}.` };
-        })()
-      : null;
+  const otherWorkDone = input.workDone.filter((w) => !workedAreas(w).length).map((w) => w.title || taskLabel(w.task as WorkTask));
+  const pitchFrom = after && remeasured.has('a4Hz') && after.measurements.a4Hz != null ? { hz: after.measurements.a4Hz, on: after.submittedAt, when: 'after_work' as const } : intake.measurements.a4Hz != null ? { hz: intake.measurements.a4Hz, on: intake.submittedAt, when: areas.find((x) => x.area === 'tuning')!.foundBeforeWork ? ('before_work' as const) : ('intake' as const) } : null;
+  const pitch: DisclosurePitch | null = pitchFrom
+    ? (() => {
+        const c = cents(pitchFrom.hz);
+        const rounded = Math.round(Math.abs(c));
+        const where = rounded === 0 ? 'at standard pitch' : `${rounded} cents ${c < 0 ? 'below' : 'above'} standard pitch`;
+        return { a4Hz: pitchFrom.hz, cents: Math.round(c * 10) / 10, text: `A4 measured at ${pitchFrom.hz.toFixed(1)} Hz, ${where}.`, measuredOn: day(pitchFrom.on), when: pitchFrom.when };
+      })()
+    : null;
   return {
+    format: 2,
     dealerName: input.texts.dealerName,
     piano: {
       stockNumber: piano.stockNumber,
@@ -129,14 +268,27 @@ export function buildDisclosure(input: DisclosureInput): DisclosureContent {
       finish: piano.finish,
     },
     askingPrice: input.askingPriceMinor != null ? { minor: input.askingPriceMinor, currency: input.currency } : null,
-    assessedOn: day,
-    assessedAfterWorkshop: assessment.kind === 'post_workshop',
+    inspectedOn: day(intake.submittedAt),
+    measuredAfterOn: after ? day(after.submittedAt) : null,
+    soldAsItStands: input.soldAsItStands,
+    notDone: unique(areas.flatMap((x) => x.notDone)),
+    otherWorkDone,
     pitch,
     areas,
     photos: input.photos.map((p) => ({ id: p.id, area: p.area, caption: p.caption })),
     warranty: input.texts.warranty,
     notices: NOTICES,
   };
+}
+
+/** Why a disclosure cannot be published from this grade yet; empty when it can. */
+export function publishBlockers(grade: Pick<Grade, 'provisional' | 'playTested' | 'inspectedAreas' | 'minInspectedAreas'>): string[] {
+  const out: string[] = [];
+  if (grade.provisional) {
+    out.push(`The grade is provisional: ${grade.inspectedAreas.length} of ${AREAS.length} areas are inspected and the shop asks for ${grade.minInspectedAreas}. Correct the assessment with the missing areas first.`);
+  }
+  if (!grade.playTested) out.push('The play test is missing, and a disclosure needs it: add it by correcting the assessment, or as a re-measurement in the workshop.');
+  return out;
 }
 
 /** JSON with keys in a fixed order, so equal content always gives equal bytes (and an equal digest). */
@@ -178,3 +330,54 @@ export const textsInput = z
     warranty: multiLineText().trim().min(1).max(4000),
   })
   .strict();
+/** One part of an area as a reader meets it: what was found, what was done, what was measured after. */
+export interface AreaSection {
+  kind: 'found' | 'work' | 'after' | 'unmeasured' | 'not_done';
+  title: string;
+  items: { mark: AreaMark | 'done' | null; text: string }[];
+}
+
+const capital = (t: string) => t.charAt(0).toUpperCase() + t.slice(1);
+
+/**
+ * The sections of one area, in the order they happened, for the web page, the printable page and
+ * the signed copy alike. `day` writes a YYYY-MM-DD day for the reader.
+ */
+export function areaSections(a: DisclosureAreaContent, c: DisclosureContent, day: (isoDay: string) => string): AreaSection[] {
+  const out: AreaSection[] = [];
+  const intakeDay = day(c.inspectedOn);
+  if (a.found.length) {
+    out.push({ kind: 'found', title: a.foundBeforeWork ? `Found at intake on ${intakeDay}, before the work` : `Found at intake on ${intakeDay}`, items: a.found.map((f) => ({ mark: f.mark, text: f.text })) });
+  } else if (!a.measuredAfter.length) {
+    out.push({ kind: 'found', title: `At intake on ${intakeDay}`, items: [{ mark: 'unseen', text: 'Nothing in this area was measured or looked at.' }] });
+  }
+  if (a.workDone.length) out.push({ kind: 'work', title: 'Work done in our workshop', items: a.workDone.map((w) => ({ mark: 'done', text: w })) });
+  if (a.measuredAfter.length && c.measuredAfterOn) {
+    out.push({ kind: 'after', title: `Measured after the work on ${day(c.measuredAfterOn)}`, items: a.measuredAfter.map((f) => ({ mark: f.mark, text: f.text })) });
+  }
+  // Measured at intake, so not "not inspected": the section's title says what is missing.
+  if (a.notMeasuredAgain.length) out.push({ kind: 'unmeasured', title: 'Not measured again after the work', items: a.notMeasuredAgain.map((t) => ({ mark: null, text: capital(t) })) });
+  if (a.notDone.length) out.push({ kind: 'not_done', title: 'Recommended and not done', items: a.notDone.map((t) => ({ mark: null, text: t })) });
+  return out;
+}
+
+/** What the buyer is told up front about work not done; null when all the work called for was done. */
+export function notDoneSummary(c: DisclosureContent): { title: string; text: string } | null {
+  const list = c.notDone.join('; ');
+  if (c.soldAsItStands) {
+    return {
+      title: 'Sold as it stands',
+      text: c.notDone.length
+        ? `This piano has not been reconditioned in our workshop. Our inspection called for this work, which was not done: ${list}.`
+        : 'This piano has not been reconditioned in our workshop; our inspection called for no work.',
+    };
+  }
+  return c.notDone.length ? { title: 'Work not done', text: `Our inspection called for this work, which was not done: ${list}.` } : null;
+}
+
+/** When the pitch on the disclosure was measured, in words. */
+export function pitchWhen(p: DisclosurePitch, day: (isoDay: string) => string): string {
+  if (p.when === 'after_work') return `Measured after the work on ${day(p.measuredOn)}.`;
+  if (p.when === 'before_work') return `Measured at intake on ${day(p.measuredOn)}, before the tuning work; not measured again since.`;
+  return `Measured at intake on ${day(p.measuredOn)}.`;
+}

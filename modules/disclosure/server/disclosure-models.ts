@@ -1,4 +1,4 @@
-import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import type { AnyDisclosureContent } from '@/modules/disclosure/core/disclosure';
 import { BaseModel } from '@/server/db/base-model';
 
 export class Disclosure extends BaseModel {
@@ -8,7 +8,8 @@ export class Disclosure extends BaseModel {
   id!: number;
   pianoId!: number;
   version!: number;
-  content!: DisclosureContent;
+  /** Frozen as published: format 2, or the first shape for versions published before it. */
+  content!: AnyDisclosureContent;
   html!: string;
   digest!: string;
   publishedById!: number;

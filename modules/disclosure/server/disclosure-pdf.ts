@@ -3,7 +3,11 @@ import fs from 'node:fs';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
 
-import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import type { AreaMark } from '@/modules/assessment/core/grade';
+import { areaSections, isFormat2, notDoneSummary, pitchWhen, type AnyDisclosureContent, type DisclosureContent, type DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
+import { MARK_LOOKS, PALETTE } from '@/modules/theme/core/palette';
+
+import { markWord, paperDay } from './disclosure-paper';
 
 // The app's own font, shipped in an npm package, loaded once and subsetted into each PDF.
 const FONT_REGULAR = fs.readFileSync(require.resolve('@expo-google-fonts/source-sans-3/400Regular/SourceSans3_400Regular.ttf'));
@@ -38,22 +42,77 @@ export interface SignedCopyMeta {
   countersignedAt: string;
 }
 
+/** A mark drawn at the start of a line: the same shapes as on screen, its word printed after it. */
+function drawMark(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, x: number, y: number): void {
+  if (mark == null) return;
+  const s = 8;
+  doc.save();
+  if (mark === 'done') {
+    doc.lineWidth(1.6).strokeColor(PALETTE.moss).moveTo(x, y + s * 0.55).lineTo(x + s * 0.4, y + s * 0.95).lineTo(x + s, y + s * 0.1).stroke();
+  } else {
+    const { shape, ink } = MARK_LOOKS[mark];
+    if (shape === 'circle') doc.circle(x + s / 2, y + s / 2, s / 2).fill(ink);
+    if (shape === 'bar') doc.rect(x, y + s * 0.33, s, s * 0.34).fill(ink);
+    if (shape === 'square') doc.rect(x, y, s, s).fill(ink);
+    if (shape === 'triangle') doc.polygon([x + s / 2, y], [x + s, y + s], [x, y + s]).fill(ink);
+    if (shape === 'dashed-ring') doc.lineWidth(1.2).dash(1.6, { space: 1.2 }).circle(x + s / 2, y + s / 2, s / 2 - 0.6).stroke(ink).undash();
+  }
+  doc.restore();
+}
+
+/** One line led by a mark and its word; work not done by an open box. */
+function markedLine(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, text: string, openBox = false): void {
+  const x = doc.page.margins.left + 8;
+  if (openBox) doc.save().lineWidth(1).rect(x + 0.5, doc.y + 3.5, 7, 7).stroke(PALETTE.walnut).restore();
+  else drawMark(doc, mark, x, doc.y + 3);
+  const word = markWord(mark);
+  doc.fillColor('#1d1a16');
+  if (word) doc.font('bold').text(`${word}: `, x + 14, doc.y, { continued: true }).font('body').text(text);
+  else doc.text(text, x + 14, doc.y);
+  doc.x = doc.page.margins.left;
+}
+
+function areasV2(doc: PDFKit.PDFDocument, c: DisclosureContent): void {
+  doc.text(`Inspected at intake on ${paperDay(c.inspectedOn)}${c.measuredAfterOn ? `; measured again after the work in our workshop on ${paperDay(c.measuredAfterOn)}` : ''}.`);
+  const notDone = notDoneSummary(c);
+  if (notDone) doc.moveDown(0.4).font('bold').text(`${notDone.title}. `, { continued: true }).font('body').text(notDone.text);
+  if (c.pitch) doc.moveDown(0.4).text(`${c.pitch.text} ${pitchWhen(c.pitch, paperDay)}`);
+  for (const area of c.areas) {
+    doc.moveDown(0.8).font('bold').fontSize(13).fillColor('#1d1a16').text(`${area.label}: `, { continued: true }).text(area.condition).font('body').fontSize(11);
+    for (const section of areaSections(area, c, paperDay)) {
+      doc.moveDown(0.3).font('bold').fontSize(10).fillColor('#4a4238').text(section.title.toUpperCase(), { characterSpacing: 0.4 }).font('body').fontSize(11);
+      for (const item of section.items) markedLine(doc, item.mark, item.text, section.kind === 'not_done');
+    }
+  }
+  if (c.otherWorkDone.length) {
+    doc.moveDown(0.8).font('bold').fontSize(13).text('Other work done in our workshop').font('body').fontSize(11);
+    for (const w of c.otherWorkDone) markedLine(doc, 'done', w);
+  }
+}
+
+// Format 1, as it was published: its own words, each line led by the mark it reads as today.
+function areasV1(doc: PDFKit.PDFDocument, c: DisclosureContentV1): void {
+  doc.text(`Assessed on ${c.assessedOn}${c.assessedAfterWorkshop ? ', after reconditioning in the workshop' : ''}.`);
+  if (c.pitch) doc.text(c.pitch.text);
+  for (const area of c.areas) {
+    doc.moveDown(0.8).font('bold').fontSize(13).text(`${area.label}: ${area.condition}`).font('body').fontSize(11);
+    for (const f of area.findings) doc.text(`• ${f.text}`, { indent: 8 });
+    if (area.workDone.length) doc.text(`Work done: ${area.workDone.join('; ')}.`, { indent: 8 });
+  }
+}
+
 /** The signed copy: the disclosure as the buyer read it, its version and digest, and both signatures. */
-export function signedCopyPdf(content: DisclosureContent, meta: SignedCopyMeta): Promise<Buffer> {
+export function signedCopyPdf(content: AnyDisclosureContent, meta: SignedCopyMeta): Promise<Buffer> {
   const doc = newDoc(`Condition disclosure ${content.piano.stockNumber} v${meta.version}`);
   const p = content.piano;
   doc.fontSize(10).fillColor('#4a4238').text(`${content.dealerName} · condition disclosure · signed copy`);
   doc.moveDown(0.5).font('bold').fontSize(20).fillColor('#1d1a16').text(`${p.maker}${p.model ? ` ${p.model}` : ''}`);
   doc.font('body').fontSize(11).text(`Stock number ${p.stockNumber}${p.serialNumber ? ` · serial ${p.serialNumber}` : ''} · ${p.year} · ${p.size}${p.finish ? ` · ${p.finish}` : ''}`);
   if (meta.price) doc.font('bold').text(`Asking price: ${meta.price}`).font('body');
-  doc.text(`Version ${meta.version}. Assessed on ${content.assessedOn}${content.assessedAfterWorkshop ? ', after reconditioning in the workshop' : ''}.`);
-  if (content.pitch) doc.text(content.pitch.text);
-  for (const area of content.areas) {
-    doc.moveDown(0.8).font('bold').fontSize(13).text(`${area.label}: ${area.condition}`).font('body').fontSize(11);
-    for (const f of area.findings) doc.text(`• ${f.text}`, { indent: 8 });
-    if (area.workDone.length) doc.text(`Work done: ${area.workDone.join('; ')}.`, { indent: 8 });
-  }
-  doc.moveDown(0.8).font('bold').fontSize(13).text('Warranty').font('body').fontSize(11).text(content.warranty);
+  doc.text(`Version ${meta.version}.`);
+  if (isFormat2(content)) areasV2(doc, content);
+  else areasV1(doc, content);
+  doc.moveDown(0.8).font('bold').fontSize(13).fillColor('#1d1a16').text('Warranty').font('body').fontSize(11).text(content.warranty);
   for (const n of content.notices) doc.moveDown(0.4).font('bold').text(`${n.title}. `, { continued: true }).font('body').text(n.text);
   doc.moveDown(1).font('bold').fontSize(13).text('Signatures').font('body').fontSize(11);
   doc.text(`Buyer: ${meta.buyerName} (${meta.buyerEmail}) acknowledged reading version ${meta.version} on ${meta.acknowledgedAt}.`);

@@ -7,17 +7,19 @@ import type { Knex } from 'knex';
 
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
-import { Assessment } from '@/modules/assessment/server/assessment-models';
-import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import { gradedAssessments, remeasuredFieldsOf } from '@/modules/assessment/server/assessment-service';
+import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, publishBlockers, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
 import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import { Piano } from '@/modules/pianos/server/piano-model';
+import { StageMove } from '@/modules/pianos/server/stage-move-model';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
 import { WorkItem } from '@/modules/shop/server/shop-models';
 import { AppError, notAllowed, notFound } from '@/server/errors';
 
 import { contentDigest } from './digest';
+import { paperDay, paperView } from './disclosure-paper';
 import { floorTagPdf, signedCopyPdf } from './disclosure-pdf';
 import { Acknowledgement, Disclosure, DisclosureLink, ShopSetting } from './disclosure-models';
 
@@ -64,27 +66,43 @@ export async function setAskingPrice(actor: Actor, raw: unknown): Promise<Piano>
   return piano.$query().patchAndFetch({ askingPriceMinor: input.askingPriceMinor, priceCurrency: input.currency });
 }
 
-/** Gathers only public facts about a piano and builds its disclosure content. */
+/**
+ * Gathers only public facts about a piano and builds its disclosure content: the newest inspection of
+ * kind intake (or its correction), the re-measurements after the work since then, the work done, and
+ * whether the manager chose to sell it as it stands.
+ */
 async function contentFor(pianoId: number): Promise<DisclosureContent> {
   const piano = await Piano.query().findById(pianoId);
   if (!piano) throw notFound(`piano ${pianoId}`);
-  const assessment = await Assessment.query().where('piano_id', pianoId).orderBy('version', 'desc').first();
-  if (!assessment) throw new AppError('CONFLICT', `${piano.stockNumber} has no assessment to disclose yet.`);
+  const versions = await gradedAssessments(pianoId);
+  if (!versions.length) throw new AppError('CONFLICT', `${piano.stockNumber} has no assessment to disclose yet.`);
+  const latest = versions[versions.length - 1];
+  const blockers = publishBlockers(latest.grade);
+  if (blockers.length) throw new AppError('CONFLICT', `${piano.stockNumber} cannot be published yet. ${blockers.join(' ')}`);
+  const baseAt = versions.map((v) => v.kind).lastIndexOf('intake');
+  const base = versions[Math.max(0, baseAt)];
+  const afterVersions = versions.slice(baseAt + 1).filter((v) => v.kind === 'post_workshop');
+  const remeasured = [...new Set(afterVersions.flatMap((v) => remeasuredFieldsOf(v, versions[versions.indexOf(v) - 1])))];
+  const newestAfter = afterVersions[afterVersions.length - 1];
   const work = await WorkItem.query().where({ piano_id: pianoId, status: 'done' }).orderBy('id');
   const photos = await Photo.query().where('piano_id', pianoId).where((q) => q.whereNull('phase').orWhere('phase', 'after')).orderBy('id');
+  // Sold as it stands: the newest decision between the workshop and the floor was to skip the workshop.
+  const decision = await StageMove.query().where('piano_id', pianoId).whereIn('action', ['sell_as_is', 'approve_plan']).orderBy([{ column: 'at', order: 'desc' }, { column: 'id', order: 'desc' }]).first();
   return buildDisclosure({
     piano,
     askingPriceMinor: piano.askingPriceMinor,
     currency: piano.priceCurrency ?? 'USD',
-    assessment: { kind: assessment.kind, measurements: assessment.measurements, grade: assessment.grade, submittedAt: assessment.submittedAt },
-    workDone: work.map((w) => ({ task: w.task, title: w.title })),
+    intake: { measurements: base.measurements, grade: base.grade, submittedAt: base.submittedAt },
+    after: newestAfter ? { measurements: newestAfter.measurements, grade: newestAfter.grade, submittedAt: newestAfter.submittedAt, remeasured } : null,
+    workDone: work.map((w) => ({ task: w.task, title: w.title, because: w.because ?? [] })),
+    soldAsItStands: decision?.action === 'sell_as_is',
     photos: photos.map((ph) => ({ id: ph.id, area: ph.area, caption: ph.caption })),
     texts: await shopTexts(),
   });
 }
 
 function renderHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
-  return DISCLOSURE_HTML({ content, version, digest, publishedOn: publishedAt.slice(0, 10), price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null) });
+  return DISCLOSURE_HTML({ content, paper: paperView(content), version, digest, publishedOn: paperDay(publishedAt), price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null) });
 }
 
 export interface Published {

@@ -1,4 +1,3 @@
-import type { Severity } from '@/modules/assessment/core/grade';
 import { CURRENCY_DIGITS, formatMoney, type Currency } from '@/modules/shop/core/money';
 
 import type { DisclosureView } from './public-disclosure';
@@ -48,11 +47,3 @@ export function pianoLine(piano: DisclosureView['piano']): string {
   const year = known ? (/^\d{4}$/.test(piano.year) ? `made in ${piano.year}` : `made ${piano.year}`) : 'year of making not known';
   return [capital(piano.size), year, piano.finish].filter(Boolean).join(' · ');
 }
-
-/** How a finding reads beside its mark, for someone who cannot see the colour. */
-export const SEVERITY_WORDS: Record<Severity, string> = {
-  sound: 'In good order',
-  watch: 'Worth knowing',
-  needs_work: 'Needs attention',
-  serious: 'Significant',
-};

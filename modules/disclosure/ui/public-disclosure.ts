@@ -1,5 +1,5 @@
 // The buyer's side of a disclosure: the public JSON behind an unguessable link, read without signing in.
-import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import type { DisclosureContent, DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
 
 export interface DisclosurePhoto {
   id: number;
@@ -9,7 +9,8 @@ export interface DisclosurePhoto {
   url: string | null;
 }
 
-export type DisclosureView = Omit<DisclosureContent, 'photos'> & { photos: DisclosurePhoto[] };
+/** Published content as the buyer's page receives it: either format, with a link to each photo. */
+export type DisclosureView = (Omit<DisclosureContent, 'photos'> | Omit<DisclosureContentV1, 'photos'>) & { photos: DisclosurePhoto[] };
 
 export interface PublicDisclosure {
   version: number;

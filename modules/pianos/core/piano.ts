@@ -104,3 +104,8 @@ export function describeSize(kind: PianoKind, sizeCm: number | null | undefined)
   if (sizeCm == null) return kind === 'grand' ? 'grand' : 'upright';
   return kind === 'grand' ? `grand, ${sizeCm} cm long` : `upright, ${sizeCm} cm tall`;
 }
+
+/** A serial number as compared between records: case, spaces and punctuation do not make another piano. */
+export function serialKey(serial: string): string {
+  return serial.toLowerCase().replace(/[^a-z0-9]/g, '');
+}

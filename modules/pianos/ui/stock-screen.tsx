@@ -3,11 +3,12 @@ import { StyleSheet, Text, View } from 'react-native';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { BackgroundWorkPanel } from '@/modules/jobs/ui/background-work-panel';
 import { STAGES, STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
-import { PALETTE, RADIUS, SPACE, STAGE_TONES, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { PALETTE, SPACE, STAGE_TONES, TYPE_SCALE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Screen } from '@/modules/theme/ui/screen';
+import { Eyelet } from '@/modules/theme/ui/stage-badge';
 import { Section } from '@/modules/theme/ui/section';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
@@ -50,10 +51,15 @@ function StageCounts() {
       ))}
       <View role="listitem" style={[styles.cell, wide ? styles.cellWide : styles.cellPhone]}>
         <View style={[styles.tile, styles.totalTile]}>
-          <Text style={[TYPE_SCALE.title, styles.count]}>{total}</Text>
-          <Body variant="label" tone="secondary">
-            In all
-          </Body>
+          <View style={[styles.strip, styles.totalStrip]}>
+            <Eyelet size={8} />
+          </View>
+          <View style={styles.tileBody}>
+            <Text style={[TYPE_SCALE.title, styles.count]}>{total}</Text>
+            <Body variant="label" tone="secondary">
+              In all
+            </Body>
+          </View>
         </View>
       </View>
     </View>
@@ -68,12 +74,17 @@ function StageTile({ stage, count }: { stage: Stage; count: number }) {
       href={{ pathname: '/pianos', params: { stage } }}
       accessibilityLabel={`${STAGE_LABELS[stage]}: ${shown} ${count === 1 ? 'piano' : 'pianos'}`}
       testID={`stage-count-${stage}`}
-      style={({ hovered }) => [styles.tile, { borderTopColor: tone.edge }, hovered && styles.tileHover]}
+      style={({ hovered }) => [styles.tile, hovered && styles.tileHover]}
     >
-      <Text style={[TYPE_SCALE.title, styles.count, count === 0 && styles.countNone]}>{shown}</Text>
-      <Body variant="label" tone="secondary">
-        {STAGE_LABELS[stage]}
-      </Body>
+      <View style={[styles.strip, { backgroundColor: tone.edge }]}>
+        <Eyelet size={8} />
+      </View>
+      <View style={styles.tileBody}>
+        <Text style={[TYPE_SCALE.title, styles.count, count === 0 && styles.countNone]}>{shown}</Text>
+        <Body variant="label" tone="secondary">
+          {STAGE_LABELS[stage]}
+        </Body>
+      </View>
     </LinkPressable>
   );
 }
@@ -83,19 +94,21 @@ const styles = StyleSheet.create({
   cell: { padding: SPACE.xs },
   cellPhone: { width: '50%' },
   cellWide: { width: '16.66%', minWidth: 140 },
+  // A stock tag: a coloured strip with its eyelet, then the count and the stage.
   tile: {
     minHeight: 88,
+    flexDirection: 'row',
     backgroundColor: PALETTE.vellum,
     borderWidth: 1,
     borderColor: PALETTE.linen,
-    borderTopWidth: 4,
-    borderRadius: RADIUS.sm,
-    paddingHorizontal: SPACE.md,
-    paddingVertical: SPACE.sm,
-    justifyContent: 'space-between',
+    borderRadius: 3,
+    overflow: 'hidden',
   },
+  strip: { width: 18, alignItems: 'center', paddingTop: SPACE.md },
+  totalStrip: { backgroundColor: PALETTE.brass },
+  tileBody: { flex: 1, paddingHorizontal: SPACE.md, paddingVertical: SPACE.sm, justifyContent: 'space-between' },
   tileHover: { backgroundColor: PALETTE.feltMist },
-  totalTile: { backgroundColor: PALETTE.ivory, borderTopColor: PALETTE.brass, borderStyle: 'solid' },
+  totalTile: { backgroundColor: PALETTE.ivory },
   count: { color: PALETTE.ebony },
   countNone: { color: PALETTE.pinGrey },
 });

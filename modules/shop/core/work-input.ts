@@ -8,6 +8,9 @@ import { WORK_TASKS } from '@/modules/assessment/core/work-tasks';
 export const DECISIONS = ['recondition', 'sell_as_is', 'wholesale', 'decline'] as const;
 export type Decision = (typeof DECISIONS)[number];
 
+/** The shortest reason a manager gives for selling as it stands a piano not recommended for retail. */
+export const SELL_AS_IS_REASON_MIN = 10;
+
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'must be a date, YYYY-MM-DD');
 const hours = z.number().min(0, 'cannot be negative').max(200, 'must be at most 200 hours');
 const minor = z.number().int('must be whole minor units').min(0, 'cannot be negative').max(100_000_000);
@@ -30,8 +33,31 @@ export const workItemPatch = workItemInput.partial().omit({ task: true }).strict
 export const timeEntryInput = z
   .object({
     workItemId: z.number().int().positive(),
-    minutes: z.number().int('must be whole minutes').min(1, 'must be at least 1 minute').max(1440, 'must be at most 24 hours'),
+    minutes: z
+      .number()
+      .int('must be whole minutes')
+      .min(0, 'cannot be negative: give the minutes worked; an entry logged by mistake is corrected instead')
+      .min(1, 'must be at least 1 minute')
+      .max(1440, 'must be at most 24 hours'),
     note: multiLineText().trim().max(500).nullish(),
+  })
+  .strict();
+
+/** A correction of a logged time entry: the minutes it should have been (0 for one logged by mistake) and why. */
+export const timeCorrectionInput = z
+  .object({
+    timeEntryId: z.number().int().positive(),
+    minutes: z.number().int('must be whole minutes').min(0, 'cannot be negative: 0 stands for an entry logged by mistake').max(1440, 'must be at most 24 hours'),
+    why: multiLineText().trim().min(1, 'is required: say why the time changes').max(500),
+  })
+  .strict();
+
+/** Marking a work item done; a reason is needed when no time is logged on it. */
+export const doneInput = z
+  .object({
+    itemId: z.number().int().positive(),
+    done: z.boolean(),
+    reason: multiLineText().trim().max(500).nullish(),
   })
   .strict();
 

@@ -5,6 +5,8 @@ export interface WorkItemView {
   task: string;
   title: string;
   status: 'planned' | 'in_progress' | 'done';
+  /** marked done with no time logged: the reason given */
+  doneReason: string | null;
   priority: number;
   dueOn: string | null;
   assignedToId: number | null;

@@ -46,6 +46,8 @@ export class WorkItem extends BaseModel {
   dueOn!: string | null;
   status!: WorkStatus;
   doneAt!: string | null;
+  /** Marked done with no time logged: why, for staff. */
+  doneReason!: string | null;
   createdAt!: string;
 
   static jsonSchema = {
@@ -64,6 +66,7 @@ export class WorkItem extends BaseModel {
       dueOn: { type: ['string', 'null'] },
       status: { type: 'string', enum: [...WORK_STATUSES] },
       doneAt: { type: ['string', 'null'] },
+      doneReason: { type: ['string', 'null'] },
       createdAt: { type: 'string' },
       updatedAt: { type: 'string' },
     },
@@ -80,6 +83,19 @@ export class TimeEntry extends BaseModel {
   endedAt!: string | null;
   minutes!: number | null;
   note!: string | null;
+}
+
+/** One correction of a time entry; append-only. */
+export class TimeEntryCorrection extends BaseModel {
+  static tableName = 'time_entry_corrections';
+  static hasUpdatedAt = false;
+  id!: number;
+  timeEntryId!: number;
+  correctedById!: number;
+  correctedAt!: string;
+  oldMinutes!: number;
+  newMinutes!: number;
+  why!: string;
 }
 
 export class PartUse extends BaseModel {

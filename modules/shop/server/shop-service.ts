@@ -6,6 +6,7 @@ import { User } from '@/modules/accounts/server/user-model';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { Assessment } from '@/modules/assessment/server/assessment-models';
+import { latestGradedAssessment } from '@/modules/assessment/server/assessment-service';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { cautionsFor } from '@/modules/shop/core/cautions';
@@ -14,11 +15,11 @@ import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
 import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
-import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
+import { climateInput, DECISIONS, doneInput, SELL_AS_IS_REASON_MIN, partUseInput, timeCorrectionInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
-import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, WorkItem, WorkNote, WorkPlan } from './shop-models';
+import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, TimeEntryCorrection, WorkItem, WorkNote, WorkPlan } from './shop-models';
 
 const isManager = (a: Actor) => a.role === 'manager';
 const atBench = (a: Actor) => a.role === 'technician' || a.role === 'manager';
@@ -45,15 +46,22 @@ export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard>
 
 // ---- decision and plan ----
 
-async function latestAssessment(trx: Knex.Transaction | undefined, pianoId: number) {
-  return Assessment.query(trx).where('piano_id', pianoId).orderBy('version', 'desc').first();
-}
-
 /** The manager's choice for an assessed piano. Recondition drafts a plan; the others move the piano. */
 export async function decide(actor: Actor, raw: { pianoId: number; decision: string; why?: string | null }): Promise<{ stage: string; planId: number | null }> {
   requireRole(actor, isManager, 'decide what happens to a piano');
   if (!DECISIONS.includes(raw.decision as Decision)) throw badInput('decision', `must be one of ${DECISIONS.join(', ')}`);
   const decision = raw.decision as Decision;
+  if (decision === 'sell_as_is') {
+    // A piano the play test found unfit for retail goes to the floor unreconditioned only on purpose, with the reason on record.
+    const latest = await latestGradedAssessment(raw.pianoId);
+    if (latest?.grade.notRecommendedForRetail && (raw.why ?? '').trim().length < SELL_AS_IS_REASON_MIN) {
+      throw new AppError(
+        'CONFLICT',
+        `This piano is not recommended for retail as it stands (its play test). Selling it as it stands needs your reason, of at least ${SELL_AS_IS_REASON_MIN} characters: it is kept in the stage history.`,
+        'why',
+      );
+    }
+  }
   if (decision !== 'recondition') {
     const piano = await movePiano({ pianoId: raw.pianoId, action: decision, by: actor.role, userId: actor.id, why: raw.why });
     return { stage: piano.stage, planId: null };
@@ -64,7 +72,7 @@ export async function decide(actor: Actor, raw: { pianoId: number; decision: str
     if (piano.stage !== 'assessed') throw new AppError('CONFLICT', `A piano in stage "${piano.stage}" cannot get a reconditioning plan; it must be assessed.`);
     const existing = await WorkPlan.query(trx).findOne({ piano_id: piano.id });
     if (existing) return { stage: piano.stage, planId: existing.id };
-    const assessment = await latestAssessment(trx, piano.id);
+    const assessment = await latestGradedAssessment(piano.id, trx);
     if (!assessment) throw notFound(`an assessment of ${piano.stockNumber}`);
     const card = await currentRateCard(trx);
     const estimate = estimateReconditioning(assessment.grade.findings, card);
@@ -237,12 +245,45 @@ export async function addNote(actor: Actor, itemId: number, body: string): Promi
   return WorkNote.query().insertAndFetch({ workItemId: itemId, authorId: actor.id, body: text });
 }
 
-export async function setWorkItemDone(actor: Actor, itemId: number, done: boolean): Promise<WorkItem> {
+/**
+ * Done needs time logged on the item, or the reason it took none (done by an outside tuner, say):
+ * the reason is kept on the item and in its notes.
+ */
+export async function setWorkItemDone(actor: Actor, raw: unknown): Promise<WorkItem> {
+  const input = doneInput.parse(raw);
   return WorkItem.transaction(async (trx) => {
-    const item = await benchItem(trx, actor, itemId);
+    const item = await benchItem(trx, actor, input.itemId);
     const now = new Date().toISOString();
-    await TimeEntry.query(trx).patch({ endedAt: now }).where({ work_item_id: itemId }).whereNull('ended_at').whereNull('minutes');
-    return item.$query(trx).patchAndFetch(done ? { status: 'done', doneAt: now } : { status: 'in_progress', doneAt: null });
+    await TimeEntry.query(trx).patch({ endedAt: now }).where({ work_item_id: item.id }).whereNull('ended_at').whereNull('minutes');
+    if (!input.done) return item.$query(trx).patchAndFetch({ status: 'in_progress', doneAt: null, doneReason: null });
+    const logged = minutesOf(await TimeEntry.query(trx).where('work_item_id', item.id), Date.parse(now));
+    const reason = input.reason?.trim() || null;
+    if (logged === 0 && !reason) {
+      throw new AppError('CONFLICT', `No time is logged on “${item.title}”: log the time it took, or give the reason it took none.`, 'reason');
+    }
+    if (logged === 0) await WorkNote.query(trx).insert({ workItemId: item.id, authorId: actor.id, body: `Marked done with no time logged: ${reason}` });
+    return item.$query(trx).patchAndFetch({ status: 'done', doneAt: now, doneReason: logged === 0 ? reason : null });
+  });
+}
+
+/** A time entry corrected by the technician who logged it or a manager; each correction is kept. */
+export async function correctTimeEntry(actor: Actor, raw: unknown): Promise<TimeEntry> {
+  requireRole(actor, (a) => can(a.role, 'correctOwnTime'), 'correct logged time');
+  const input = timeCorrectionInput.parse(raw);
+  return TimeEntry.transaction(async (trx) => {
+    const entry = await TimeEntry.query(trx).findById(input.timeEntryId).forUpdate();
+    if (!entry) throw notFound(`time entry ${input.timeEntryId}`);
+    if (entry.technicianId !== actor.id && !can(actor.role, 'correctAnyTime')) throw notAllowed('correct time someone else logged');
+    if (entry.minutes == null && !entry.endedAt) throw new AppError('CONFLICT', 'This timer is still running: stop it before correcting its time.');
+    const old = minutesOf([entry], Date.now());
+    if (old === input.minutes) throw badInput('minutes', `is what the entry already says (${old} min): nothing to correct`);
+    const item = await loadItem(trx, entry.workItemId);
+    if (item.status === 'done' && !item.doneReason) {
+      const others = minutesOf(await TimeEntry.query(trx).where('work_item_id', item.id).whereNot('id', entry.id), Date.now());
+      if (others + input.minutes === 0) throw new AppError('CONFLICT', `“${item.title}” is done: with this correction it would have no time logged. Reopen it first, or mark it done again with the reason.`, 'minutes');
+    }
+    await TimeEntryCorrection.query(trx).insert({ timeEntryId: entry.id, correctedById: actor.id, oldMinutes: old, newMinutes: input.minutes, why: input.why });
+    return entry.$query(trx).patchAndFetch({ minutes: input.minutes });
   });
 }
 
@@ -296,6 +337,7 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
       task: i.task,
       title: i.title,
       status: i.status,
+      doneReason: i.doneReason ?? null,
       priority: i.priority,
       dueOn: i.dueOn,
       assignedToId: i.assignedToId,
@@ -413,7 +455,18 @@ export async function itemDetail(actor: Actor, itemId: number) {
     PartUse.query().where('work_item_id', itemId).orderBy('id'),
     WorkNote.query().where('work_item_id', itemId).orderBy('id'),
   ]);
-  return { ...view, currency: plan.currency, entries, parts, notes };
+  const corrections = entries.length
+    ? ((await TimeEntryCorrection.query()
+        .join('users', 'users.id', 'time_entry_corrections.corrected_by_id')
+        .whereIn('time_entry_id', entries.map((e) => e.id))
+        .orderBy('time_entry_corrections.id')
+        .select('time_entry_corrections.*', 'users.name as corrected_by')) as (TimeEntryCorrection & { correctedBy: string })[])
+    : [];
+  const withHistory = entries.map((e) => ({
+    ...e.$toJson(),
+    corrections: corrections.filter((c) => c.timeEntryId === e.id).map((c) => ({ by: c.correctedBy, byId: c.correctedById, at: c.correctedAt, oldMinutes: c.oldMinutes, newMinutes: c.newMinutes, why: c.why })),
+  }));
+  return { ...view, currency: plan.currency, entries: withHistory, parts, notes };
 }
 
 // ---- climate ----

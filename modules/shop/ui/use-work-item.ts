@@ -4,6 +4,15 @@ import { useClient, useQuery } from 'urql';
 import { SHOP_CONTEXT, useShopMutation } from './use-shop-mutation';
 import type { WorkItemView } from './use-work-queue';
 
+export interface TimeCorrectionView {
+  by: string;
+  byId: number;
+  at: string;
+  oldMinutes: number;
+  newMinutes: number;
+  why: string;
+}
+
 export interface TimeEntryView {
   id: number;
   technicianId: number;
@@ -11,6 +20,8 @@ export interface TimeEntryView {
   endedAt: string | null;
   minutes: number | null;
   note: string | null;
+  /** every correction of the entry, oldest first */
+  corrections?: TimeCorrectionView[];
 }
 
 export interface PartView {
@@ -75,9 +86,13 @@ export function useBenchCommands() {
     'addPart',
   );
   const addNote = useShopMutation<NoteView, { itemId: number; body: string }>('mutation AddWorkNote($itemId: Int!, $body: String!) { addWorkNote(itemId: $itemId, body: $body) }', 'addWorkNote');
-  const setDone = useShopMutation<WorkItemView, { itemId: number; done: boolean }>(
-    'mutation SetWorkItemDone($itemId: Int!, $done: Boolean!) { setWorkItemDone(itemId: $itemId, done: $done) }',
+  const setDone = useShopMutation<WorkItemView, { itemId: number; done: boolean; reason?: string | null }>(
+    'mutation SetWorkItemDone($itemId: Int!, $done: Boolean!, $reason: String) { setWorkItemDone(itemId: $itemId, done: $done, reason: $reason) }',
     'setWorkItemDone',
   );
-  return { start, stop, logTime, addPart, addNote, setDone };
+  const correctTime = useShopMutation<TimeEntryView, { c: { timeEntryId: number; minutes: number; why: string } }>(
+    'mutation CorrectTimeEntry($c: JSON!) { correctTimeEntry(correction: $c) }',
+    'correctTimeEntry',
+  );
+  return { start, stop, logTime, addPart, addNote, setDone, correctTime };
 }

@@ -1,5 +1,5 @@
 // Words and numbers for workshop screens: hours, minutes, priorities, due dates, variances.
-import { AREA_LABELS, type Area } from '@/modules/assessment/core/grade';
+import { checkWords } from '@/modules/assessment/core/grade';
 import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { CURRENCY_DIGITS, formatMoney, type Currency } from '@/modules/shop/core/money';
 
@@ -116,33 +116,8 @@ export function minorToText(minor: number, currency: Currency): string {
   return (minor / 10 ** digits).toFixed(digits);
 }
 
-// The checks of an assessment that call for work, in words a technician reads at the bench.
-const CHECK_LABELS: Record<string, string> = {
-  'keys.sidePlay': 'key side play',
-  'keys.level': 'key level',
-  'keys.keytops': 'keytops',
-  'keys.sticking': 'sticking or silent keys',
-  'hammers.wear': 'hammer wear',
-  'hammers.felt': 'hammer felt',
-  'strings.broken': 'broken strings',
-  'strings.steel': 'treble string corrosion',
-  'strings.bass': 'bass string winding',
-  'soundboard.cracks': 'soundboard cracks',
-  'soundboard.ribs': 'soundboard ribs',
-  'tuning.pitch': 'pitch',
-  'tuning.pins': 'tuning pins',
-  'play.tone': 'evenness of tone',
-  'play.dynamics': 'dynamic range',
-  'play.notes': 'notes that stand out',
-};
-
-export function checkLabel(check: string): string {
-  if (CHECK_LABELS[check]) return CHECK_LABELS[check];
-  const crack = /^soundboard\.crack\.(\d+)$/.exec(check);
-  if (crack) return `soundboard crack ${Number(crack[1]) + 1}`;
-  const area = check.split('.')[0] as Area;
-  return AREA_LABELS[area] ? AREA_LABELS[area].toLowerCase() : check;
-}
+/** The check that called for a piece of work, in words a technician reads at the bench. */
+export const checkLabel = checkWords;
 
 export type VarianceKind = 'over' | 'under' | 'even';
 

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { STAGE_LABELS } from '@/modules/pianos/core/piano';
@@ -13,6 +14,7 @@ import { FactList } from '@/modules/theme/ui/fact-list';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Screen } from '@/modules/theme/ui/screen';
 import { Body, Heading } from '@/modules/theme/ui/text';
+import { TextField } from '@/modules/theme/ui/text-field';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { CautionsNotice } from './components/cautions-notice';
@@ -24,7 +26,7 @@ import { PriorityTag } from './components/priority-tag';
 import { TimerPanel } from './components/timer-panel';
 import { WorkPhotos } from './components/work-photos';
 import type { MutationOutcome } from './use-shop-mutation';
-import { entryMinutes, isRunning, useBenchCommands, useWorkItem, type WorkItemDetail } from './use-work-item';
+import { entryMinutes, isRunning, useBenchCommands, useWorkItem, type TimeEntryView, type WorkItemDetail } from './use-work-item';
 import { useNow } from './use-now';
 import { checkLabel, dueWords, formatDate, formatMinutes, formatWhen, STATUS_LABELS, taskLabel } from './work-format';
 
@@ -60,6 +62,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
   const cmd = useBenchCommands();
   const [timerFeedback, setTimerFeedback] = useState<FeedbackState>(null);
   const [doneFeedback, setDoneFeedback] = useState<FeedbackState>(null);
+  const [doneReason, setDoneReason] = useState('');
 
   const done = item.status === 'done';
   const someoneElses = user?.role === 'technician' && item.assignedToId != null && item.assignedToId !== me;
@@ -118,7 +121,20 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
       onAdd={async (body) => settle(await cmd.addNote.run({ itemId: item.id, body }), 'Note added.')}
     />
   );
+  const mayCorrect = (e: TimeEntryView) => !!user && !isRunning(e) && ((e.technicianId === me && can(user.role, 'correctOwnTime')) || can(user.role, 'correctAnyTime'));
+  const entries = (
+    <TimeEntries
+      item={item}
+      authorName={authorName}
+      mayCorrect={mayCorrect}
+      busy={cmd.correctTime.busy}
+      onCorrect={async (timeEntryId, minutes, why) => settle(await cmd.correctTime.run({ c: { timeEntryId, minutes, why } }), `Corrected to ${formatMinutes(minutes)}.`)}
+    />
+  );
   const photos = <WorkPhotos itemId={item.id} pianoId={item.pianoId} title={item.title} task={item.task} blocked={blockedHard} />;
+  // Done needs time on the item or the reason it took none; a running timer may still bring time.
+  const noTime = !done && item.loggedMinutes === 0 && !item.timerRunningFor.length;
+  const reasonMissing = noTime && !doneReason.trim();
   const finish = (
     <Card role="region" accessibilityLabel="Done">
       <Heading level={3}>{done ? 'Done' : 'Finished?'}</Heading>
@@ -127,17 +143,42 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
           ? 'This item is marked done. Reopen it if more work is needed.'
           : item.timerRunningFor.length
             ? 'Marking it done stops every timer still running on it.'
-            : 'Mark it done when the work is finished and tidied away.'}
+            : noTime
+              ? 'No time is logged on this item. Log the time it took, or say why it took none: the reason is kept on the item for the manager.'
+              : 'Mark it done when the work is finished and tidied away.'}
       </Body>
+      {done && item.doneReason ? (
+        <Body testID="item-done-reason">Done with no time logged: {item.doneReason}</Body>
+      ) : null}
+      {noTime ? (
+        <TextField
+          label="Why no time is logged"
+          hint="For example: done by the visiting tuner on his own invoice."
+          value={doneReason}
+          onChangeText={setDoneReason}
+          multiline
+          maxLength={500}
+          testID="done-reason"
+        />
+      ) : null}
       <Button
         label={done ? 'Reopen the item' : 'Mark done'}
         variant={done ? 'secondary' : 'primary'}
         stretch
         busy={cmd.setDone.busy}
-        disabled={!!blockedHard}
+        disabled={!!blockedHard || reasonMissing}
         testID="item-done"
-        onPress={async () => setDoneFeedback(await settle(await cmd.setDone.run({ itemId: item.id, done: !done }), done ? 'Reopened.' : 'Marked done.'))}
+        onPress={async () => {
+          const outcome = await settle(await cmd.setDone.run({ itemId: item.id, done: !done, reason: noTime ? doneReason.trim() : null }), done ? 'Reopened.' : 'Marked done.');
+          if (outcome?.tone === 'success') setDoneReason('');
+          setDoneFeedback(outcome);
+        }}
       />
+      {reasonMissing && !blockedHard ? (
+        <Body variant="small" tone="secondary" testID="done-needs-reason">
+          Log time, or give the reason above, to mark it done.
+        </Body>
+      ) : null}
       <Feedback state={doneFeedback} testID="done-feedback" />
       {done ? <Button label="Back to the bench" variant="quiet" href="/bench" /> : null}
     </Card>
@@ -169,7 +210,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
           <View style={styles.column}>
             {notes}
             {photos}
-            <TimeEntries item={item} authorName={authorName} />
+            {entries}
           </View>
         </View>
       ) : (
@@ -179,7 +220,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
           {parts}
           {notes}
           {photos}
-          <TimeEntries item={item} authorName={authorName} />
+          {entries}
           {finish}
         </View>
       )}
@@ -226,15 +267,24 @@ function ItemSummary({ item, piano, due, wide }: { item: WorkItemDetail; piano: 
   );
 }
 
-function TimeEntries({ item, authorName }: { item: WorkItemDetail; authorName: (id: number) => string }) {
+interface TimeEntriesProps {
+  item: WorkItemDetail;
+  authorName: (id: number) => string;
+  mayCorrect: (e: TimeEntryView) => boolean;
+  busy: boolean;
+  onCorrect: (timeEntryId: number, minutes: number, why: string) => Promise<FeedbackState>;
+}
+
+function TimeEntries({ item, authorName, mayCorrect, busy, onCorrect }: TimeEntriesProps) {
   const now = useNow(item.entries.some(isRunning), 30_000);
+  const [open, setOpen] = useState<number | null>(null);
   return (
     <Card role="region" accessibilityLabel="Time logged">
       <Heading level={3}>Time logged</Heading>
       {item.entries.length ? (
         <View role="list" testID="entries-list">
           {[...item.entries].reverse().map((e) => (
-            <View role="listitem" key={e.id} style={styles.entry}>
+            <View role="listitem" key={e.id} style={styles.entry} testID={`entry-${e.id}`}>
               <View style={styles.entryTop}>
                 <Body variant="bodyStrong">{isRunning(e) ? `${formatMinutes(entryMinutes(e, now))} so far` : formatMinutes(entryMinutes(e, now))}</Body>
                 <Body variant="small" tone="quiet">
@@ -242,6 +292,24 @@ function TimeEntries({ item, authorName }: { item: WorkItemDetail; authorName: (
                 </Body>
               </View>
               {e.note ? <Body tone="secondary">{e.note}</Body> : null}
+              {e.corrections?.length ? (
+                <View style={styles.corrections} testID={`entry-history-${e.id}`}>
+                  {e.corrections.map((c, i) => (
+                    <Body key={i} variant="small" tone="secondary">
+                      Corrected by {c.by}, {formatWhen(c.at)}: {formatMinutes(c.oldMinutes)} → {formatMinutes(c.newMinutes)}. “{c.why}”
+                    </Body>
+                  ))}
+                </View>
+              ) : null}
+              {mayCorrect(e) ? (
+                open === e.id ? (
+                  <CorrectEntry entry={e} minutesNow={entryMinutes(e, now)} busy={busy} onCancel={() => setOpen(null)} onCorrect={onCorrect} onDone={() => setOpen(null)} />
+                ) : (
+                  <View style={styles.start}>
+                    <Button label="Correct this entry" variant="quiet" onPress={() => setOpen(e.id)} accessibilityLabel={`Correct the entry of ${formatMinutes(entryMinutes(e, now))}`} testID={`entry-correct-${e.id}`} />
+                  </View>
+                )
+              ) : null}
             </View>
           ))}
         </View>
@@ -249,6 +317,39 @@ function TimeEntries({ item, authorName }: { item: WorkItemDetail; authorName: (
         <Body tone="secondary">No time logged yet.</Body>
       )}
     </Card>
+  );
+}
+
+/** A time entry put right: the minutes it should have been (0 for one logged by mistake) and why, kept in its history. */
+function CorrectEntry({ entry, minutesNow, busy, onCorrect, onCancel, onDone }: { entry: TimeEntryView; minutesNow: number; busy: boolean; onCorrect: TimeEntriesProps['onCorrect']; onCancel: () => void; onDone: () => void }) {
+  const [minutes, setMinutes] = useState(String(minutesNow));
+  const [why, setWhy] = useState('');
+  const [errors, setErrors] = useState<{ minutes?: string; why?: string }>({});
+  const [feedback, setFeedback] = useState<FeedbackState>(null);
+  const submit = async () => {
+    const n = Number(minutes.trim());
+    const next: typeof errors = {};
+    if (!minutes.trim() || !Number.isInteger(n)) next.minutes = 'Give whole minutes, from 0 to 1440.';
+    else if (n < 0) next.minutes = 'Minutes cannot be negative: 0 stands for an entry logged by mistake.';
+    else if (n > 1440) next.minutes = 'At most 1440 minutes (24 hours).';
+    else if (n === minutesNow) next.minutes = 'That is what the entry says already.';
+    if (!why.trim()) next.why = 'Say why the time changes: it is kept with the entry.';
+    setErrors(next);
+    if (Object.keys(next).length) return;
+    const outcome = await onCorrect(entry.id, n, why.trim());
+    setFeedback(outcome);
+    if (outcome?.tone === 'success') onDone();
+  };
+  return (
+    <View style={styles.correct} role="form" aria-label="Correct the entry">
+      <TextField label="Minutes it should be" value={minutes} onChangeText={(t) => setMinutes(t.replace(/[^0-9-]/g, ''))} unit="min" inputMode="numeric" error={errors.minutes} short testID={`entry-minutes-${entry.id}`} />
+      <TextField label="Why" hint="Kept in the entry’s history with your name." value={why} onChangeText={setWhy} multiline maxLength={500} error={errors.why} testID={`entry-why-${entry.id}`} />
+      <View style={styles.buttons}>
+        <Button label="Save the correction" onPress={submit} busy={busy} testID={`entry-save-${entry.id}`} />
+        <Button label="Cancel" variant="quiet" onPress={onCancel} />
+      </View>
+      <Feedback state={feedback} testID={`entry-feedback-${entry.id}`} />
+    </View>
   );
 }
 
@@ -260,4 +361,7 @@ const styles = StyleSheet.create({
   summaryTop: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
   entry: { paddingVertical: SPACE.sm, borderBottomWidth: 1, borderBottomColor: PALETTE.linen, gap: SPACE.xxs },
   entryTop: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'baseline', gap: SPACE.sm },
+  corrections: { gap: SPACE.xxs, paddingLeft: SPACE.md, borderLeftWidth: 2, borderLeftColor: PALETTE.linen },
+  correct: { gap: SPACE.md, paddingTop: SPACE.sm },
+  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.sm },
 });

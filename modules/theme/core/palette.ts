@@ -1,4 +1,5 @@
 // Feltwire's look: the greens, woods and papers of a piano workshop. Pure values, no React.
+import type { AreaMark } from '@/modules/assessment/core/grade';
 import type { Stage } from '@/modules/pianos/core/piano';
 
 export const PALETTE = {
@@ -42,26 +43,45 @@ export const PALETTE = {
 
 export type PaletteName = keyof typeof PALETTE;
 
-/** Each stage's badge: a ground and an ink, with a shape so colour is never the only cue. */
+/** Each stage's tag: a ground and an ink, and the strip the tag's eyelet is punched through; the word always goes with it. */
 export interface StageTone {
   ground: string;
   ink: string;
-  /** a strong line in the stage's colour on a light ground (tile edges) */
+  /** the tag's strip and the tile's edge: a strong line in the stage's colour */
   edge: string;
-  mark: 'dot' | 'ring' | 'square' | 'bar';
 }
 
 export const STAGE_TONES: Record<Stage, StageTone> = {
-  received: { ground: '#E3E8EE', ink: '#2E3F52', edge: '#2E3F52', mark: 'ring' },
-  assessed: { ground: '#EFE6D2', ink: '#5E4712', edge: '#5E4712', mark: 'ring' },
-  in_workshop: { ground: '#F3DEC9', ink: '#7A3E12', edge: '#7A3E12', mark: 'square' },
-  ready: { ground: PALETTE.mossMist, ink: '#2D5A33', edge: '#2D5A33', mark: 'dot' },
-  on_floor: { ground: PALETTE.felt, ink: PALETTE.ivory, edge: PALETTE.felt, mark: 'dot' },
-  held: { ground: '#F4E2A8', ink: '#5C4506', edge: '#5C4506', mark: 'square' },
-  sold: { ground: '#D9E3EF', ink: '#1F3D63', edge: '#1F3D63', mark: 'dot' },
-  delivered: { ground: '#E6E6E1', ink: '#3F3F3A', edge: '#3F3F3A', mark: 'bar' },
-  wholesaled: { ground: '#ECE0E6', ink: '#5B2F46', edge: '#5B2F46', mark: 'bar' },
-  returned_to_owner: { ground: '#EDE3DC', ink: '#5A3E2E', edge: '#5A3E2E', mark: 'bar' },
+  received: { ground: '#E3E8EE', ink: '#2E3F52', edge: '#2E3F52' },
+  assessed: { ground: '#EFE6D2', ink: '#5E4712', edge: '#5E4712' },
+  in_workshop: { ground: '#F3DEC9', ink: '#7A3E12', edge: '#7A3E12' },
+  ready: { ground: PALETTE.mossMist, ink: '#2D5A33', edge: '#2D5A33' },
+  on_floor: { ground: PALETTE.felt, ink: PALETTE.ivory, edge: PALETTE.felt },
+  held: { ground: '#F4E2A8', ink: '#5C4506', edge: '#5C4506' },
+  sold: { ground: '#D9E3EF', ink: '#1F3D63', edge: '#1F3D63' },
+  delivered: { ground: '#E6E6E1', ink: '#3F3F3A', edge: '#3F3F3A' },
+  wholesaled: { ground: '#ECE0E6', ink: '#5B2F46', edge: '#5B2F46' },
+  returned_to_owner: { ground: '#EDE3DC', ink: '#5A3E2E', edge: '#5A3E2E' },
+};
+
+/** The shape each mark is drawn with: five shapes apart, so no mark leans on its colour. */
+export type MarkShape = 'circle' | 'bar' | 'square' | 'triangle' | 'dashed-ring';
+
+export interface MarkLook {
+  shape: MarkShape;
+  /** the word and the shape */
+  ink: string;
+  /** the tag behind them */
+  ground: string;
+}
+
+/** Feltwire's marks, one set for staff, buyers and paper: fine, noted, needs work, major work, not inspected. */
+export const MARK_LOOKS: Record<AreaMark, MarkLook> = {
+  fine: { shape: 'circle', ink: '#2D5A33', ground: PALETTE.mossMist },
+  noted: { shape: 'bar', ink: '#5E4712', ground: '#EFE6D2' },
+  work: { shape: 'square', ink: '#7A3E12', ground: '#F3DEC9' },
+  major: { shape: 'triangle', ink: PALETTE.rosewood, ground: PALETTE.rosewoodBlush },
+  unseen: { shape: 'dashed-ring', ink: PALETTE.pinGrey, ground: PALETTE.vellum },
 };
 
 /** Family names as registered with expo-font; the ui layer maps them to the font files. */
@@ -169,6 +189,16 @@ export const TEXT_PAIRS: readonly TextPair[] = [
     background: tone.ground,
     large: isLarge(T.badge),
   })),
+  ...Object.entries(MARK_LOOKS).flatMap(([mark, look]) => [
+    { use: `mark tag: ${mark}`, text: look.ink, background: look.ground, large: isLarge(T.badge) },
+    // the verdict's words stand in the mark's ink on a card, at heading size and at body size for its reasons
+    { use: `mark word on a card: ${mark}`, text: look.ink, background: P.vellum, large: isLarge(T.label) },
+    { use: `mark word on the page: ${mark}`, text: look.ink, background: P.ivory, large: isLarge(T.label) },
+  ]),
+  { use: 'priority tag: urgent', text: P.rosewood, background: P.rosewoodBlush, large: isLarge(T.badge) },
+  { use: 'priority tag', text: P.walnut, background: P.vellum, large: isLarge(T.badge) },
+  { use: 'stage tile label', text: P.walnut, background: P.vellum, large: isLarge(T.label) },
+  { use: 'stage tile count', text: P.ebony, background: P.vellum, large: isLarge(T.title) },
 ];
 
 export interface EdgePair {
@@ -187,4 +217,13 @@ export const EDGE_PAIRS: readonly EdgePair[] = [
   { use: 'focus halo on the felt navigation', edge: P.vellum, background: P.felt },
   { use: 'choice and button outline on a card', edge: P.felt, background: P.vellum },
   { use: 'sign-out outline on felt', edge: P.feltLichen, background: P.felt },
+  // A mark's shape carries meaning beside its word: it must be seen against its tag and on a card (SC 1.4.11).
+  ...Object.entries(MARK_LOOKS).flatMap(([mark, look]) => [
+    { use: `mark shape on its tag: ${mark}`, edge: look.ink, background: look.ground },
+    { use: `mark shape on a card: ${mark}`, edge: look.ink, background: P.vellum },
+  ]),
+  ...Object.entries(STAGE_TONES).map(([stage, tone]) => ({ use: `stage strip beside its eyelet: ${stage}`, edge: tone.edge, background: P.vellum })),
+  { use: 'dashed edge of a not-inspected tag', edge: P.linenDark, background: P.vellum },
+  { use: 'priority chevron, urgent', edge: P.rosewood, background: P.rosewoodBlush },
+  { use: 'priority chevron', edge: P.walnut, background: P.vellum },
 ];

@@ -21,7 +21,7 @@ export function Checkbox({ label, checked, onChange, testID }: CheckboxProps) {
 }
 
 const styles = StyleSheet.create({
-  row: { minHeight: LAYOUT.touchTarget, flexDirection: 'row', alignItems: 'center', gap: SPACE.md, alignSelf: 'flex-start', paddingRight: SPACE.sm },
+  row: { minHeight: LAYOUT.touchTarget, flexDirection: 'row', alignItems: 'center', gap: SPACE.md, alignSelf: 'flex-start', paddingRight: SPACE.sm, maxWidth: '100%' },
   box: {
     width: 24,
     height: 24,
@@ -35,5 +35,5 @@ const styles = StyleSheet.create({
   boxChecked: { backgroundColor: PALETTE.felt },
   // a drawn tick: two borders of a rotated box
   tick: { width: 7, height: 13, borderColor: PALETTE.ivory, borderRightWidth: 3, borderBottomWidth: 3, transform: [{ rotate: '45deg' }], marginTop: -3 },
-  label: { color: PALETTE.ebony },
+  label: { color: PALETTE.ebony, flexShrink: 1 },
 });

@@ -5,13 +5,16 @@ import { ACQUISITION_LABELS, INSPECTION_PLACE_LABELS } from '@/modules/assessmen
 import type { AssessmentVersion } from '@/modules/assessment/ui/use-assessment-history';
 import type { IntakeRecord } from '@/modules/assessment/ui/use-intake-record';
 import { MEASURE_LABELS, formatMeasure, type MeasureField } from '@/modules/assessment/ui/measure-labels';
+import { READINESS_MARKS, READINESS_WORDS } from '@/modules/assessment/core/grade';
+import { useRateCard } from '@/modules/shop/ui/use-rate-card';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
+import { MarkTag } from '@/modules/theme/ui/mark';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
 import { FactList } from '@/modules/theme/ui/fact-list';
 import { Body } from '@/modules/theme/ui/text';
 
-import { GradeSummary } from './grade-summary';
+import { ConditionSummary } from './condition-summary';
 
 const DAY_TIME = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
 const DAY = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
@@ -31,6 +34,7 @@ function versionKind(v: AssessmentVersion): string {
 
 /** The assessment in force: read-only, with the way to correct it for those who may. */
 export function LatestAssessment({ latest, correctHref }: { latest: AssessmentVersion; correctHref: Href | null }) {
+  const { card } = useRateCard();
   return (
     <Card testID="latest-assessment">
       <View style={styles.head}>
@@ -39,7 +43,7 @@ export function LatestAssessment({ latest, correctHref }: { latest: AssessmentVe
         </Body>
         {correctHref ? <Button label="Correct this assessment" variant="secondary" href={correctHref} testID="correct-assessment" /> : null}
       </View>
-      <GradeSummary grade={latest.grade} scoreTestID="assessment-score" />
+      <ConditionSummary grade={latest.grade} card={card} testID="assessment-condition" />
     </Card>
   );
 }
@@ -54,14 +58,17 @@ export function AssessmentHistory({ history }: { history: readonly AssessmentVer
             <Body variant="bodyStrong">
               Version {v.version}: {versionKind(v)}
             </Body>
-            <Body variant="small" tone="secondary">
-              Score {v.grade.score}
-            </Body>
+            <MarkTag mark={READINESS_MARKS[v.grade.readiness]} label={`${READINESS_WORDS[v.grade.readiness]}${v.grade.provisional ? ' (provisional)' : ''}`} />
           </View>
           <Body variant="small" tone="secondary">
             By {v.submittedBy}, {when(v.submittedAt)} · rules “{v.rulesVersion}”
           </Body>
           {v.changeNote ? <Body>Reason: “{v.changeNote}”</Body> : null}
+          {v.kind === 'post_workshop' && v.remeasured?.length ? (
+            <Body variant="small" tone="secondary" testID={`history-remeasured-${v.version}`}>
+              Measured again: {v.remeasured.map((f) => MEASURE_LABELS[f as MeasureField]?.toLowerCase() ?? f).join(', ')}.
+            </Body>
+          ) : null}
           {v.changes.length ? (
             <View style={styles.changes}>
               {v.changes.map((c) => (
@@ -88,10 +95,16 @@ export function IntakeFacts({ intake }: { intake: IntakeRecord }) {
     { label: 'Received', value: day(intake.receivedOn) },
     { label: 'Inspected at', value: INSPECTION_PLACE_LABELS[intake.inspectedAt] ?? intake.inspectedAt },
     { label: 'Logged', value: when(intake.createdAt) },
+    ...(intake.samePianoAs ? [{ label: 'Taken in before as', value: intake.samePianoAs.stockNumber }] : []),
   ];
   return (
     <Card testID="intake-record">
       <FactList facts={facts} dense />
+      {intake.samePianoAs ? (
+        <View style={styles.start}>
+          <Button label={`Open ${intake.samePianoAs.stockNumber}, the earlier record`} variant="quiet" href={`/pianos/${intake.samePianoAs.id}`} testID="intake-same-piano" />
+        </View>
+      ) : null}
       {intake.seller ? (
         <View style={styles.seller} testID="intake-seller">
           <Body variant="label" tone="secondary">
@@ -117,6 +130,7 @@ export function IntakeFacts({ intake }: { intake: IntakeRecord }) {
 
 const styles = StyleSheet.create({
   head: { gap: SPACE.md, alignItems: 'flex-start' },
+  start: { alignItems: 'flex-start' },
   history: { gap: SPACE.md },
   version: { gap: SPACE.xs, backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.md, padding: SPACE.lg, borderLeftWidth: 4, borderLeftColor: PALETTE.brass },
   versionHead: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'baseline', gap: SPACE.sm, flexWrap: 'wrap' },

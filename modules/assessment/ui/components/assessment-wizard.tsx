@@ -2,19 +2,21 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Platform, ScrollView, StyleSheet, View } from 'react-native';
 
 import { graphProblem, problemWithoutField } from '@/modules/accounts/ui/graph-error';
-import { BAND_LABELS, gradeAssessment, type Area } from '@/modules/assessment/core/grade';
+import { AREAS, READINESS_MARKS, READINESS_WORDS, gradeAssessment, type Area } from '@/modules/assessment/core/grade';
 import type { GradeRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { PhotoCapture, type HeldPhoto } from '@/modules/photos/ui/components/photo-capture';
 import { useDraftPhotos } from '@/modules/photos/ui/use-photos';
+import { useRateCard } from '@/modules/shop/ui/use-rate-card';
 import { LAYOUT, PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
+import { MarkTag } from '@/modules/theme/ui/mark';
 import { Notice } from '@/modules/theme/ui/notice';
 import { Body, Eyebrow, Heading } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { DraftConfirm } from './draft-confirm';
-import { GradeSummary } from './grade-summary';
+import { ConditionSummary } from './condition-summary';
 import { HammersStep, KeysStep, PlayStep, SoundboardStep, StringsStep } from './measure-steps';
 import { PianoStep } from './piano-step';
 import { ReviewStep } from './review-step';
@@ -104,6 +106,7 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
   const clientErrors = useMemo<FieldErrors>(() => (built.ok ? {} : built.errors), [built]);
   const measurements = useMemo(() => liveMeasurements(draft.measurements), [draft.measurements]);
   const grade = useMemo(() => gradeAssessment(measurements, rules), [measurements, rules]);
+  const { card } = useRateCard();
 
   // Photo links last ten minutes: a restored draft asks for fresh ones.
   const fresh = useDraftPhotos(draft.draftKey, draft.photos.length === 0);
@@ -236,7 +239,7 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
           Recomputed as you type; the server grades again on submit.
         </Body>
       </View>
-      <GradeSummary grade={grade} scoreTestID="grade-score" showEmpty focus={STEP_AREAS[step]} />
+      <ConditionSummary grade={grade} card={card} focus={STEP_AREAS[step]} testID="live-condition" />
     </View>
   );
 
@@ -251,11 +254,11 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
             {STEP_TITLES[step]}
           </Heading>
         </View>
-        {!wide && grade.findings.length ? (
-          <View style={styles.chip} testID="grade-chip" accessibilityLabel={`Live score ${grade.score} of 100, ${BAND_LABELS[grade.band]}`}>
-            <Body variant="bodyStrong">{grade.score}</Body>
+        {!wide ? (
+          <View style={styles.chip} testID="grade-chip" accessibilityLabel={`So far: ${READINESS_WORDS[grade.readiness]}, ${grade.inspectedAreas.length} of ${AREAS.length} areas inspected`}>
+            <MarkTag mark={READINESS_MARKS[grade.readiness]} label={READINESS_WORDS[grade.readiness]} />
             <Body variant="small" tone="secondary">
-              {BAND_LABELS[grade.band]}
+              {grade.inspectedAreas.length} of {AREAS.length} areas
             </Body>
           </View>
         ) : null}
@@ -422,7 +425,7 @@ const styles = StyleSheet.create({
   header: { gap: SPACE.md, paddingBottom: SPACE.md, borderBottomWidth: 2, borderBottomColor: PALETTE.brass },
   titleRow: { flexDirection: 'row', alignItems: 'flex-end', justifyContent: 'space-between', gap: SPACE.md },
   titles: { gap: SPACE.xs, flexShrink: 1 },
-  chip: { alignItems: 'center', borderWidth: 2, borderColor: PALETTE.brass, borderRadius: RADIUS.md, paddingHorizontal: SPACE.md, paddingVertical: SPACE.xxs, backgroundColor: PALETTE.vellum },
+  chip: { alignItems: 'flex-end', gap: SPACE.xxs, flexShrink: 0 },
   hidden: { display: 'none' },
   panel: { gap: SPACE.lg, backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, padding: SPACE.lg },
   panelWide: { borderRadius: 0, borderWidth: 0, padding: 0, backgroundColor: 'transparent' },

@@ -94,7 +94,7 @@ interface RatingProps {
   testID: string;
 }
 
-/** A rating from 1 (poor) to 5 (excellent) as one row of five large cells. */
+/** A play-test rating from 1 (plays badly) to 5 (a pleasure to play) as one row of five large cells. */
 export function RatingRow({ label, value, onChange, hint, error, testID }: RatingProps) {
   return (
     <ChoiceGroup

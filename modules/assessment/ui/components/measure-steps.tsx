@@ -52,6 +52,16 @@ export function KeysStep({ draft, update, errorAt }: StepProps) {
           error={errorAt(at('keyTouchesNeighbour'))}
           testID="choice-keyTouchesNeighbour"
         />
+        {m.keyTouchesNeighbour ? (
+          <KeyListField
+            label="Which keys touch a neighbour"
+            hint="Key numbers from 1 (the lowest A) to 88, separated by commas."
+            value={m.keysTouchingNeighbour}
+            onChange={set('keysTouchingNeighbour')}
+            error={errorAt(at('keysTouchingNeighbour'))}
+            testID="field-keysTouchingNeighbour"
+          />
+        ) : null}
         <MeasureInput
           label="Key level deviation"
           hint="How far the most uneven key rests above or below its neighbours."
@@ -302,7 +312,7 @@ export function PlayStep({ draft, update, errorAt }: StepProps) {
       <Card>
         <Body variant="subheading">Play test</Body>
         <Body variant="small" tone="secondary">
-          1 poor · 3 fair · 5 excellent. Tap a chosen number again to clear it.
+          From 1, plays badly, to 5, a pleasure to play. Tap a chosen number again to clear it.
         </Body>
         <RatingRow label="Bass: even from key to key" value={m.bassEvenness} onChange={set('bassEvenness')} error={errorAt(at('bassEvenness'))} testID="choice-bassEvenness" />
         <RatingRow label="Middle: even from key to key" value={m.middleEvenness} onChange={set('middleEvenness')} error={errorAt(at('middleEvenness'))} testID="choice-middleEvenness" />

@@ -12,6 +12,7 @@ import { Body } from '@/modules/theme/ui/text';
 import { TextField } from '@/modules/theme/ui/text-field';
 
 import { MeasureInput, UnitSwitch } from './fields';
+import { SamePianoNotice } from './same-piano-notice';
 import type { StepProps } from './step-props';
 
 const YEAR_MODES = ['year', 'range'] as const;
@@ -100,6 +101,7 @@ export function PianoStep({ draft, update, errorAt }: StepProps) {
           autoCapitalize="characters"
           testID="field-serialNumber"
         />
+        <SamePianoNotice draft={draft} update={update} error={errorAt('samePianoAs')} />
         <ChoiceGroup label="Kind" options={PIANO_KINDS} labels={KIND_LABELS} value={p.kind} onChange={setPiano('kind')} error={errorAt('piano.kind')} testID="choice-kind" />
         <UnitSwitch units={draft.units} update={update} />
         <MeasureInput label={sizeLabel} hint={sizeHint} value={p.sizeCm} onChange={setPiano('sizeCm')} unit="cm" units={draft.units} error={errorAt('piano.sizeCm')} testID="field-sizeCm" />

@@ -1,6 +1,8 @@
 import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { AREAS, AREA_LABELS, inspectedAreas, provisionalRule, type Area } from '@/modules/assessment/core/grade';
+import type { GradeRules } from '@/modules/assessment/core/grade-rules';
 import { ACQUISITION_LABELS, INSPECTION_PLACE_LABELS } from '@/modules/assessment/core/intake-input';
 import { diffMeasurements } from '@/modules/assessment/core/measurement-diff';
 import type { Measurements } from '@/modules/assessment/core/measurements';
@@ -13,24 +15,62 @@ import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
 import { FactList, type Fact } from '@/modules/theme/ui/fact-list';
+import { MarkTag } from '@/modules/theme/ui/mark';
+import { Notice } from '@/modules/theme/ui/notice';
 import { Body } from '@/modules/theme/ui/text';
 import { TextField } from '@/modules/theme/ui/text-field';
 
 import { centsText } from './measure-steps';
+import { SamePianoNotice } from './same-piano-notice';
 import type { StepProps } from './step-props';
 
 const MEASURE_STEPS: readonly StepKey[] = ['keys', 'hammers', 'strings', 'soundboard', 'play'];
 const FIELDS_BY_STEP: Record<string, MeasureField[]> = Object.fromEntries(MEASURE_STEPS.map((s) => [s, (Object.keys(MEASURE_LABELS) as MeasureField[]).filter((f) => stepOfPath(`measurements.${f}`) === s)]));
 
-function ReviewGroup({ step, facts, goTo, children }: { step: StepKey; facts: Fact[]; goTo: (s: StepKey) => void; children?: ReactNode }) {
+// The areas each measuring step covers: pitch is measured in the play step.
+const STEP_AREAS: Partial<Record<StepKey, Area[]>> = { keys: ['keys'], hammers: ['hammers'], strings: ['strings'], soundboard: ['soundboard'], play: ['tuning', 'play'] };
+
+function ReviewGroup({ step, facts, goTo, notInspected = [], children }: { step: StepKey; facts: Fact[]; goTo: (s: StepKey) => void; notInspected?: Area[]; children?: ReactNode }) {
   return (
     <Card role="group" accessibilityLabel={STEP_TITLES[step]} testID={`review-${step}`}>
       <View style={styles.groupHead}>
         <Body variant="subheading">{STEP_TITLES[step]}</Body>
         <Button label="Change" variant="quiet" onPress={() => goTo(step)} accessibilityLabel={`Change ${STEP_TITLES[step]}`} testID={`review-change-${step}`} />
       </View>
+      {notInspected.map((a) => (
+        <MarkTag key={a} mark="unseen" label={`${AREA_LABELS[a]}: not inspected`} testID={`review-not-inspected-${a}`} />
+      ))}
       {facts.length ? <FactList facts={facts} dense /> : null}
       {children}
+    </Card>
+  );
+}
+
+/** Which areas the intake measured, against the shop's rule for a grade that is not provisional. */
+function InspectedSummary({ measurements, rules }: { measurements: Measurements; rules: GradeRules }) {
+  const inspected = inspectedAreas(measurements);
+  const missing = AREAS.filter((a) => !inspected.includes(a));
+  const provisional = inspected.length < rules.minInspectedAreas;
+  if (!inspected.length) {
+    return (
+      <Notice tone="caution" title="Nothing is measured yet" testID="review-inspected">
+        No area is inspected yet. An intake with nothing measured cannot be submitted: go back and measure at least one area.
+      </Notice>
+    );
+  }
+  return (
+    <Card role="group" accessibilityLabel="What was inspected" testID="review-inspected">
+      <Body variant="subheading">
+        {inspected.length} of {AREAS.length} areas inspected
+      </Body>
+      <Body>Inspected: {inspected.map((a) => AREA_LABELS[a]).join(', ')}.</Body>
+      {missing.length ? <Body tone="secondary">Not inspected: {missing.map((a) => AREA_LABELS[a]).join(', ')}.</Body> : null}
+      {provisional ? (
+        <Notice tone="caution" title="The grade will be provisional" testID="review-provisional">
+          {`${provisionalRule(rules.minInspectedAreas)} It can be submitted; no readiness verdict of quality is given and no disclosure can be published until the missing areas are measured.`}
+        </Notice>
+      ) : null}
+      {!inspected.includes('play') ? <Body tone="secondary">Without the play test, the disclosure cannot be published.</Body> : null}
     </Card>
   );
 }
@@ -63,6 +103,7 @@ function measureFacts(f: MeasureField, m: Measurements): Fact[] {
 }
 
 const orNone = (t: string, none = 'Not noted') => (t.trim() ? t.trim() : none);
+const given = (v: unknown) => v != null && !(Array.isArray(v) && v.length === 0);
 
 interface ReviewStepProps extends StepProps {
   goTo: (step: StepKey) => void;
@@ -73,11 +114,14 @@ interface ReviewStepProps extends StepProps {
 }
 
 /** Everything entered, by step, each with a way back to change it; a correction also asks why. */
-export function ReviewStep({ draft, update, errorAt, goTo, measurements, base }: ReviewStepProps) {
+export function ReviewStep({ draft, update, errorAt, goTo, measurements, base, rules }: ReviewStepProps) {
   const p = draft.piano;
   const changes = base ? diffMeasurements(canonical(base), canonical(measurements)) : [];
+  const inspected = inspectedAreas(measurements);
   return (
     <View style={styles.step}>
+      <InspectedSummary measurements={measurements} rules={rules} />
+      {draft.mode === 'intake' ? <SamePianoNotice draft={draft} update={update} error={errorAt('samePianoAs')} /> : null}
       {draft.mode === 'correction' ? (
         <Card role="group" accessibilityLabel="The correction">
           <Body variant="subheading">What this correction changes</Body>
@@ -139,7 +183,8 @@ export function ReviewStep({ draft, update, errorAt, goTo, measurements, base }:
           key={step}
           step={step}
           goTo={goTo}
-          facts={FIELDS_BY_STEP[step].flatMap((f) => measureFacts(f, measurements))}
+          notInspected={(STEP_AREAS[step] ?? []).filter((a) => !inspected.includes(a))}
+          facts={FIELDS_BY_STEP[step].filter((f) => given(measurements[f])).flatMap((f) => measureFacts(f, measurements))}
         />
       ))}
 

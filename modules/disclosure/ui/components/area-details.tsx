@@ -1,75 +1,49 @@
 import { Image, Pressable, StyleSheet, View } from 'react-native';
 
-import type { DisclosureAreaContent } from '@/modules/disclosure/core/disclosure';
-import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
+import { MarkLead } from '@/modules/theme/ui/mark';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { SEVERITY_WORDS } from '../disclosure-format';
+import type { ShownArea } from '../disclosure-view';
 import type { DisclosurePhoto } from '../public-disclosure';
-import { SeverityShape } from './condition-mark';
 
 interface AreaDetailsProps {
-  area: DisclosureAreaContent;
+  area: ShownArea;
   photos: readonly DisclosurePhoto[];
   onOpenPhoto: (photoId: number) => void;
-  /** the findings come from the inspection after the workshop work */
-  afterWorkshop: boolean;
   /** the floor tablet's larger type */
   large?: boolean;
 }
 
-/** One area of the piano: what was found, what was done, and its photos. */
-export function AreaDetails({ area, photos, onOpenPhoto, afterWorkshop, large }: AreaDetailsProps) {
+/** One area of the piano, in the order it happened: found at intake, the work done, measured after the work. */
+export function AreaDetails({ area, photos, onOpenPhoto, large }: AreaDetailsProps) {
   const text = large ? styles.largeText : null;
-  const remaining = area.findings.filter((f) => f.severity !== 'sound').length;
   return (
     <View style={[styles.wrap, large && styles.wrapLarge]}>
-      {area.findings.length ? (
-        <View style={styles.part}>
-          <PartTitle large={large}>{afterWorkshop ? 'As it stands now' : 'What we found'}</PartTitle>
+      {area.sections.map((section) => (
+        <View key={section.kind} style={styles.part} testID={`area-section-${area.area}-${section.kind}`}>
+          <PartTitle large={large}>{section.title}</PartTitle>
           <View role="list" style={styles.list}>
-            {area.findings.map((f, i) => (
+            {section.items.map((item, i) => (
               <View role="listitem" key={i} style={styles.finding}>
-                <View style={[styles.markSlot, large && styles.markSlotLarge]}>
-                  <SeverityShape severity={f.severity} size={large ? 14 : 11} />
-                </View>
+                {item.mark ? <MarkLead mark={item.mark} large={large} /> : <View style={[styles.plainSlot, large && styles.plainSlotLarge]}>{section.kind === 'not_done' ? <View style={[styles.openBox, large && styles.openBoxLarge]} /> : null}</View>}
                 <Body style={[styles.findingText, text]}>
-                  {/* good news reads plainly; anything else says what kind of point it is, in words as well as shape */}
-                  {f.severity === 'sound' ? null : (
+                  {item.word ? (
                     <Body variant="bodyStrong" style={text}>
-                      {SEVERITY_WORDS[f.severity]}:{' '}
+                      {item.word}:{' '}
                     </Body>
-                  )}
-                  {f.text}
+                  ) : null}
+                  {item.text}
                 </Body>
               </View>
             ))}
           </View>
         </View>
-      ) : (
-        <Body tone="secondary" style={text}>
-          No findings were recorded in this area.
-        </Body>
-      )}
-      {area.workDone.length ? (
-        <View style={styles.part}>
-          <PartTitle large={large}>What we did</PartTitle>
-          <View role="list" style={styles.list}>
-            {area.workDone.map((w, i) => (
-              <View role="listitem" key={i} style={styles.finding}>
-                <View style={[styles.markSlot, large && styles.markSlotLarge]}>
-                  <View aria-hidden style={[styles.tick, large && styles.tickLarge]} />
-                </View>
-                <Body style={[styles.findingText, text]}>{w}</Body>
-              </View>
-            ))}
-          </View>
-        </View>
-      ) : null}
-      {area.findings.length ? (
+      ))}
+      {area.closing ? (
         <Body variant={large ? 'bodyStrong' : 'label'} tone="secondary" style={text}>
-          {remaining === 0 ? 'Nothing outstanding in this area.' : `${remaining === 1 ? 'One point' : `${remaining} points`} to know about in this area.`}
+          {area.closing}
         </Body>
       ) : null}
       {photos.length ? <PhotoStrip photos={photos} onOpen={onOpenPhoto} size={large ? 184 : undefined} /> : null}
@@ -121,13 +95,13 @@ const styles = StyleSheet.create({
   partTitle: { textTransform: 'uppercase', letterSpacing: 1 },
   list: { gap: SPACE.sm },
   finding: { flexDirection: 'row', alignItems: 'flex-start', gap: SPACE.sm },
-  // the mark sits on the first line of its text
-  markSlot: { width: 16, height: TYPE_SCALE.body.lineHeight, alignItems: 'center', justifyContent: 'center' },
-  markSlotLarge: { width: 22, height: 32 },
   findingText: { flex: 1, minWidth: 0 },
   largeText: { fontSize: 22, lineHeight: 32 },
-  tick: { width: 6, height: 11, borderColor: PALETTE.moss, borderRightWidth: 2.5, borderBottomWidth: 2.5, transform: [{ rotate: '45deg' }], marginTop: -3 },
-  tickLarge: { width: 8, height: 15, borderRightWidth: 3, borderBottomWidth: 3 },
+  // items with no mark of their own: work not done gets an open box, the rest only their place
+  plainSlot: { width: 14, height: 25, alignItems: 'center', justifyContent: 'center' },
+  plainSlotLarge: { width: 20, height: 32 },
+  openBox: { width: 10, height: 10, borderWidth: 1.5, borderColor: PALETTE.walnut },
+  openBoxLarge: { width: 13, height: 13, borderWidth: 2 },
   strip: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.md },
   thumbCell: { gap: SPACE.xs },
   thumbButton: { borderRadius: RADIUS.md, overflow: 'hidden', borderWidth: 1, borderColor: PALETTE.linen },

@@ -1,12 +1,14 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import { useEffect, useMemo, useRef, type ReactNode } from 'react';
 import { Pressable, ScrollView, StyleSheet, Text, View, useWindowDimensions } from 'react-native';
 
 import { LAYOUT, PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
 
-import { calendarDay, money, pianoLine, pianoTitle } from '../disclosure-format';
+import { MarkTag } from '@/modules/theme/ui/mark';
+
+import { money, pianoLine, pianoTitle } from '../disclosure-format';
+import { shownDocument } from '../disclosure-view';
 import type { PublicDisclosure } from '../public-disclosure';
 import { AreaDetails } from './area-details';
-import { ConditionChip } from './condition-mark';
 import { usePhotoViewer } from './disclosure-document';
 
 /** The steps of a walk through a disclosure: the piano, each area, then warranty and notices. */
@@ -27,6 +29,7 @@ interface AreaWalkthroughProps {
 /** One area at a time in large type, with big previous and next controls: a tablet handed to a buyer. */
 export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }: AreaWalkthroughProps) {
   const c = disclosure.content;
+  const shown = useMemo(() => shownDocument(c), [c]);
   const steps = walkSteps(disclosure);
   const at = Math.min(Math.max(step, 0), steps.length - 1);
   const { open, viewer } = usePhotoViewer(c.photos);
@@ -57,7 +60,7 @@ export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }
   }, [at]);
 
   const key = steps[at].key;
-  const area = c.areas.find((a) => a.area === key);
+  const area = shown.areas.find((a) => a.area === key);
   let content: ReactNode;
   if (key === 'overview') {
     content = (
@@ -68,19 +71,22 @@ export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }
         </Text>
         <Text style={styles.lead}>{pianoLine(c.piano)}</Text>
         {c.askingPrice ? <Text style={styles.price}>{money(c.askingPrice.minor, c.askingPrice.currency)}</Text> : null}
-        <Text style={styles.large}>
-          Inspected on {calendarDay(c.assessedOn)}
-          {c.assessedAfterWorkshop ? ', after the work in our workshop' : ''}.
-        </Text>
+        <Text style={styles.large}>{shown.inspected}</Text>
+        {shown.notDone ? (
+          <View style={styles.notice} testID="present-not-done">
+            <Text style={[styles.large, styles.noticeTitle]}>{shown.notDone.title}</Text>
+            <Text style={styles.large}>{shown.notDone.text}</Text>
+          </View>
+        ) : null}
         <View role="list" style={styles.glance}>
-          {c.areas.map((a, i) => (
+          {shown.areas.map((a, i) => (
             <Pressable role="listitem" key={a.area} onPress={() => onStep(i + 1)} style={({ pressed }) => [styles.glanceRow, pressed && styles.glancePressed]} accessibilityLabel={`${a.label}: ${a.condition}. Show this area.`}>
               <Text style={[styles.large, styles.glanceLabel]}>{a.label}</Text>
-              <ConditionChip severity={a.severity} label={a.condition} neutral={!a.findings.length} large />
+              <MarkTag mark={a.mark} label={a.condition} large />
             </Pressable>
           ))}
         </View>
-        {c.pitch ? <Text style={styles.large}>{c.pitch.text}</Text> : null}
+        {shown.pitch ? <Text style={styles.large}>{`${shown.pitch.text}${shown.pitch.when ? ` ${shown.pitch.when}` : ''}`}</Text> : null}
       </View>
     );
   } else if (area) {
@@ -94,9 +100,9 @@ export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }
           <Text role="heading" aria-level={2} style={styles.bigTitle} testID="present-step-title">
             {area.label}
           </Text>
-          <ConditionChip severity={area.severity} label={area.condition} neutral={!area.findings.length} large testID="present-condition" />
+          <MarkTag mark={area.mark} label={area.condition} large testID="present-condition" />
         </View>
-        <AreaDetails area={area} photos={photos} onOpenPhoto={(id) => open(id, photos)} afterWorkshop={c.assessedAfterWorkshop} large />
+        <AreaDetails area={area} photos={photos} onOpenPhoto={(id) => open(id, photos)} large />
       </View>
     );
   } else {

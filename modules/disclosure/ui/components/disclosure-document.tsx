@@ -9,10 +9,14 @@ import { Notice } from '@/modules/theme/ui/notice';
 import { Body, Heading } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { calendarDay, money, pianoLine, pianoTitle } from '../disclosure-format';
+import { money, pianoLine, pianoTitle } from '../disclosure-format';
+import type { ShownDocument } from '../disclosure-view';
 import type { DisclosurePhoto, PublicDisclosure } from '../public-disclosure';
 import { AreaDetails, PhotoStrip } from './area-details';
-import { ConditionChip } from './condition-mark';
+import { MARK_MEANINGS } from '@/modules/assessment/core/grade';
+import { MarkTag } from '@/modules/theme/ui/mark';
+
+import { shownDocument } from '../disclosure-view';
 import { PhotoViewer } from './photo-viewer';
 
 /** The name of a photo's area, whether a disclosure area or one of the photo-only ones ("General"). */
@@ -38,33 +42,47 @@ export function usePhotoViewer(photos: readonly DisclosurePhoto[]) {
 /** What the buyer reads: the piano, its price, each area's condition and work, pitch, photos, warranty and notices. */
 export function DisclosureDocument({ disclosure }: { disclosure: PublicDisclosure }) {
   const c = disclosure.content;
+  const shown = useMemo(() => shownDocument(c), [c]);
   const { open, viewer } = usePhotoViewer(c.photos);
   const areaPhotos = useCallback((ids: readonly number[]) => c.photos.filter((p) => ids.includes(p.id)), [c.photos]);
-  const shownInAreas = useMemo(() => new Set(c.areas.flatMap((a) => a.photoIds)), [c.areas]);
+  const shownInAreas = useMemo(() => new Set(shown.areas.flatMap((a) => a.photoIds)), [shown.areas]);
   const otherPhotos = c.photos.filter((p) => !shownInAreas.has(p.id));
 
   return (
     <View style={styles.doc}>
       <PianoHeading disclosure={disclosure} />
-      <AtAGlance disclosure={disclosure} />
+      {shown.notDone ? (
+        <Notice tone="caution" title={shown.notDone.title} testID="disclosure-not-done">
+          {shown.notDone.text}
+        </Notice>
+      ) : null}
+      <AtAGlance disclosure={disclosure} shown={shown} />
 
       <View role="region" aria-label="Area by area" style={styles.section}>
         <Heading level={2}>Area by area</Heading>
-        {c.areas.map((a) => {
+        {shown.areas.map((a) => {
           const photos = areaPhotos(a.photoIds);
           return (
             <Card key={a.area} testID={`disclosure-area-${a.area}`}>
               <View style={styles.areaHead}>
                 <Heading level={3}>{a.label}</Heading>
-                <ConditionChip severity={a.severity} label={a.condition} neutral={!a.findings.length} />
+                <MarkTag mark={a.mark} label={a.condition} testID={`disclosure-mark-${a.area}`} />
               </View>
-              <AreaDetails area={a} photos={photos} onOpenPhoto={(id) => open(id, photos)} afterWorkshop={c.assessedAfterWorkshop} />
+              <AreaDetails area={a} photos={photos} onOpenPhoto={(id) => open(id, photos)} />
             </Card>
           );
         })}
+        {shown.otherWorkDone.length ? (
+          <Card testID="disclosure-other-work">
+            <Heading level={3}>Other work done in our workshop</Heading>
+            {shown.otherWorkDone.map((w) => (
+              <Body key={w}>{w}</Body>
+            ))}
+          </Card>
+        ) : null}
       </View>
 
-      {c.pitch ? <PitchCard pitch={c.pitch} /> : null}
+      {shown.pitch ? <PitchCard pitch={shown.pitch} /> : null}
 
       {otherPhotos.length ? (
         <View role="region" aria-label="More photos" style={styles.section}>
@@ -130,31 +148,47 @@ function PianoHeading({ disclosure }: { disclosure: PublicDisclosure }) {
   );
 }
 
-function AtAGlance({ disclosure }: { disclosure: PublicDisclosure }) {
-  const c = disclosure.content;
+function AtAGlance({ shown }: { disclosure: PublicDisclosure; shown: ShownDocument }) {
   const wide = useWide();
   return (
     <Card accessibilityLabel="At a glance" role="region">
       <Heading level={2}>At a glance</Heading>
-      <Body tone="secondary">
-        Inspected on {calendarDay(c.assessedOn)}
-        {c.assessedAfterWorkshop ? ', after the work in our workshop' : ''}. Each area says what we found, what we did and what is left to know.
+      <Body tone="secondary" testID="disclosure-inspected">
+        {shown.inspected}
       </Body>
       <View role="list" style={[styles.glance, wide && styles.glanceWide]}>
-        {c.areas.map((a) => (
+        {shown.areas.map((a) => (
           <View role="listitem" key={a.area} style={[styles.glanceRow, wide && styles.glanceRowWide]}>
             <Body variant="bodyStrong" style={styles.glanceLabel}>
               {DISCLOSURE_AREA_LABELS[a.area as DisclosureArea] ?? a.label}
             </Body>
-            <ConditionChip severity={a.severity} label={a.condition} neutral={!a.findings.length} />
+            <MarkTag mark={a.mark} label={a.condition} />
           </View>
         ))}
       </View>
+      {/* the key is in today's words: a version published in the first format keeps its own */}
+      {shown.format === 2 ? <MarkKey /> : null}
     </Card>
   );
 }
 
-function PitchCard({ pitch }: { pitch: NonNullable<PublicDisclosure['content']['pitch']> }) {
+/** What the marks mean, once, in the buyer's words. */
+export function MarkKey() {
+  return (
+    <View style={styles.key} testID="mark-key" role="list" aria-label="What the marks mean">
+      {(Object.keys(MARK_MEANINGS) as (keyof typeof MARK_MEANINGS)[]).map((m) => (
+        <View role="listitem" key={m} style={styles.keyRow}>
+          <MarkTag mark={m} />
+          <Body variant="small" tone="secondary" style={styles.keyText}>
+            {MARK_MEANINGS[m]}
+          </Body>
+        </View>
+      ))}
+    </View>
+  );
+}
+
+function PitchCard({ pitch }: { pitch: NonNullable<ShownDocument['pitch']> }) {
   const off = Math.abs(pitch.cents);
   return (
     <View role="region" aria-label="Measured pitch" style={styles.section}>
@@ -169,6 +203,7 @@ function PitchCard({ pitch }: { pitch: NonNullable<PublicDisclosure['content']['
           </Body>
         </View>
         <Body>{pitch.text}</Body>
+        {pitch.when ? <Body tone="secondary">{pitch.when}</Body> : null}
         <Body variant="small" tone="quiet">
           Standard concert pitch is A4 = 440 Hz (ISO 16). A hundred cents make one semitone; a few cents either way is normal between tunings.
         </Body>
@@ -189,12 +224,16 @@ const styles = StyleSheet.create({
   availability: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm, paddingTop: SPACE.xs },
   availabilityMark: { width: 10, height: 10 },
   availableMark: { backgroundColor: PALETTE.moss, borderRadius: RADIUS.pill },
-  unavailableMark: { backgroundColor: PALETTE.walnut, borderRadius: 1 },
+  // an open ring: apart from the condition marks, which the key explains
+  unavailableMark: { borderWidth: 2, borderColor: PALETTE.walnut, borderRadius: RADIUS.pill },
   areaHead: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: SPACE.sm },
   glance: { gap: 0 },
   glanceWide: { flexDirection: 'row', flexWrap: 'wrap', columnGap: SPACE.xl },
   glanceRow: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: SPACE.md, paddingVertical: SPACE.sm, borderBottomWidth: 1, borderBottomColor: PALETTE.linen },
   glanceRowWide: { width: '47%' },
   glanceLabel: { flexShrink: 1 },
+  key: { paddingTop: SPACE.md, gap: SPACE.xs },
+  keyRow: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm },
+  keyText: { flex: 1, minWidth: 0 },
   pitchRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: SPACE.md },
 });

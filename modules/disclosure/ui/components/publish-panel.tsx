@@ -1,6 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
+import { publishBlockers } from '@/modules/disclosure/core/disclosure';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -22,6 +24,10 @@ export function PublishPanel({ pianoId, versions, onPublished }: PublishPanelPro
   const publish = usePublishDisclosure();
   const [feedback, setFeedback] = useState<{ tone: 'success' | 'info' | 'error'; text: string } | null>(null);
   const newest = versions.versions[versions.versions.length - 1] ?? null;
+  // The same rule the server applies: said here before anyone presses publish.
+  const { history } = useAssessmentHistory(pianoId);
+  const latest = history?.length ? history[history.length - 1] : null;
+  const blockers = latest ? publishBlockers(latest.grade) : [];
 
   const run = async () => {
     setFeedback(null);
@@ -40,8 +46,13 @@ export function PublishPanel({ pianoId, versions, onPublished }: PublishPanelPro
   };
 
   const button = (
-    <Button label="Publish the current disclosure" variant={newest ? 'secondary' : 'primary'} onPress={run} busy={publish.busy} testID="publish-disclosure" />
+    <Button label="Publish the current disclosure" variant={newest ? 'secondary' : 'primary'} onPress={run} busy={publish.busy} disabled={blockers.length > 0} testID="publish-disclosure" />
   );
+  const why = blockers.length ? (
+    <Notice tone="caution" title="Not ready to publish" testID="publish-blocked">
+      {blockers.join(' ')}
+    </Notice>
+  ) : null;
   return (
     <View style={styles.wrap}>
       {newest ? (
@@ -52,6 +63,7 @@ export function PublishPanel({ pianoId, versions, onPublished }: PublishPanelPro
           <Body variant="small" tone="secondary">
             Publishing again makes a new version only if the piano’s record changed since: a new inspection, finished work, photos or the price.
           </Body>
+          {why}
           <View style={styles.buttons}>{button}</View>
         </Card>
       ) : (
@@ -59,6 +71,7 @@ export function PublishPanel({ pianoId, versions, onPublished }: PublishPanelPro
           Buyers have nothing to read for this piano yet. Publishing freezes its inspection, work and photos as version 1.
         </EmptyState>
       )}
+      {newest ? null : why}
       {newest ? null : <View style={styles.buttons}>{button}</View>}
       {feedback ? (
         <Notice tone={feedback.tone} testID="publish-feedback">

@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { BAND_LABELS, type Grade } from '@/modules/assessment/core/grade';
+import { AREAS, READINESS_WORDS, type Grade } from '@/modules/assessment/core/grade';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import type { RateCard } from '@/modules/shop/core/rate-card';
-import { DECISIONS, type Decision } from '@/modules/shop/core/work-input';
+import { DECISIONS, SELL_AS_IS_REASON_MIN, type Decision } from '@/modules/shop/core/work-input';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -43,6 +43,9 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
   const [why, setWhy] = useState('');
   const [feedback, setFeedback] = useState<FeedbackState>(null);
   const estimate = grade && card ? estimateReconditioning(grade.findings, card) : null;
+  // Selling as it stands a piano the play test found unfit for retail is a choice made on purpose, with the reason on record.
+  const unfit = decision === 'sell_as_is' && !!grade?.notRecommendedForRetail;
+  const reasonShort = unfit && why.trim().length < SELL_AS_IS_REASON_MIN;
 
   return (
     <View style={styles.wrap}>
@@ -50,7 +53,8 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
         <Heading level={3}>What reconditioning would cost</Heading>
         {grade ? (
           <Body tone="secondary">
-            Assessed {grade.score} of 100 ({BAND_LABELS[grade.band]}).
+            Assessed: {READINESS_WORDS[grade.readiness].toLowerCase()}
+            {grade.provisional ? `, provisional (${grade.inspectedAreas.length} of ${AREAS.length} areas inspected)` : ''}.
             {grade.referToTechnician ? ' Refer to a technician.' : ''}
             {grade.notRecommendedForRetail ? ' Not recommended for retail as it stands.' : ''}
           </Body>
@@ -99,17 +103,35 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
         <ChoiceGroup label="What happens to this piano" options={DECISIONS} labels={DECISION_LABELS} value={decision} onChange={setDecision} testID="decision" />
         {decision ? <Body tone="secondary">{DECISION_HINTS[decision]}</Body> : null}
         {decision === 'decline' ? <Notice tone="caution">Declining cannot be undone here: the owner collects the piano.</Notice> : null}
-        <TextField label="Reason" hint="Optional: kept in the piano’s history." value={why} onChangeText={setWhy} multiline maxLength={500} testID="decision-why" />
+        {unfit ? (
+          <Notice tone="caution" title="Not recommended for retail as it stands" testID="decision-unfit">
+            {`The play test found it plays poorly. Selling it as it stands puts it on the floor without the work; the buyer’s disclosure says plainly what was not done. Confirm with your reason (at least ${SELL_AS_IS_REASON_MIN} characters), kept in its stage history.`}
+          </Notice>
+        ) : null}
+        <TextField
+          label={unfit ? 'Your reason (required)' : 'Reason'}
+          hint={unfit ? 'Kept in the piano’s stage history with your name.' : 'Optional: kept in the piano’s history.'}
+          value={why}
+          onChangeText={setWhy}
+          multiline
+          maxLength={500}
+          testID="decision-why"
+        />
         <View style={styles.start}>
           <Button
-            label={decision ? (decision === 'recondition' ? 'Draft the plan' : DECISION_LABELS[decision]) : 'Choose first'}
+            label={decision ? (decision === 'recondition' ? 'Draft the plan' : unfit ? 'Confirm: sell as it stands' : DECISION_LABELS[decision]) : 'Choose first'}
             variant={decision === 'decline' ? 'danger' : 'primary'}
-            disabled={!decision}
+            disabled={!decision || reasonShort}
             busy={busy}
             onPress={async () => decision && setFeedback(await onDecide(decision, why.trim() || null))}
             testID="decision-submit"
           />
         </View>
+        {reasonShort ? (
+          <Body variant="small" tone="secondary" testID="decision-needs-reason">
+            Give your reason above to confirm.
+          </Body>
+        ) : null}
         <Feedback state={feedback} testID="decision-feedback" />
       </Card>
     </View>

@@ -29,6 +29,11 @@ export function LogTimeForm({ blocked, busy, onLog }: LogTimeFormProps) {
   const submit = async () => {
     setFeedback(null);
     const n = Number(minutes.trim());
+    // Typed as negative is refused, never turned positive: an entry logged by mistake is corrected instead.
+    if (Number.isFinite(n) && n < 0) {
+      setError('Minutes cannot be negative. To take time off, correct the entry under “Time logged”.');
+      return;
+    }
     if (!minutes.trim() || !Number.isInteger(n) || n < 1 || n > 1440) {
       setError('Give whole minutes, from 1 to 1440 (24 hours).');
       return;
@@ -58,10 +63,10 @@ export function LogTimeForm({ blocked, busy, onLog }: LogTimeFormProps) {
         label="Minutes worked"
         hint="For work done without the timer."
         value={minutes}
-        onChangeText={(t) => setMinutes(t.replace(/[^0-9]/g, ''))}
+        onChangeText={(t) => setMinutes(t.replace(/[^0-9-]/g, ''))}
         unit="min"
         inputMode="numeric"
-        keyboardType="number-pad"
+        keyboardType="numbers-and-punctuation"
         error={error}
         testID="log-minutes"
       />

@@ -232,6 +232,11 @@ function ItemFacts({ item, currency, hourlyRateMinor }: { item: WorkItemView; cu
         {item.quantity > 1 ? ` · quantity ${item.quantity}` : ''}
         {item.partsMinor ? ` · parts used ${money(item.partsMinor, currency)}` : ''}
       </Body>
+      {item.doneReason ? (
+        <Body variant="small" tone="secondary" testID={`plan-item-done-reason-${item.id}`}>
+          Done with no time logged: {item.doneReason}
+        </Body>
+      ) : null}
     </View>
   );
 }

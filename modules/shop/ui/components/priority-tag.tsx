@@ -1,21 +1,28 @@
 import { StyleSheet, Text, View } from 'react-native';
 
-import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
+import { PALETTE, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
 
 import { priorityLabel } from '../work-format';
 
-/** The priority as a word with one to three filled pips, so the order reads without colour. */
+/** One chevron pointing up, drawn from two borders of a turned square. */
+function Chevron({ colour }: { colour: string }) {
+  return <View style={[styles.chevron, { borderColor: colour }]} />;
+}
+
+/**
+ * The priority as its word with a shape of its own: two chevrons for urgent, one for soon, a flat
+ * line for when there is time; so the order reads without colour.
+ */
 export function PriorityTag({ priority, testID }: { priority: number; testID?: string }) {
-  const filled = Math.max(0, 4 - priority);
   const urgent = priority === 1;
+  const ink = urgent ? PALETTE.rosewood : PALETTE.walnut;
   return (
     <View style={[styles.tag, urgent && styles.urgent]} accessibilityLabel={`Priority ${priority}: ${priorityLabel(priority)}`} testID={testID}>
-      <View aria-hidden style={styles.pips}>
-        {[0, 1, 2].map((i) => (
-          <View key={i} style={[styles.pip, i < filled ? (urgent ? styles.pipUrgent : styles.pipOn) : null]} />
-        ))}
+      <View aria-hidden style={styles.mark}>
+        {priority <= 2 ? <Chevron colour={ink} /> : <View style={[styles.flat, { backgroundColor: ink }]} />}
+        {priority === 1 ? <Chevron colour={ink} /> : null}
       </View>
-      <Text style={[TYPE_SCALE.badge, { color: urgent ? PALETTE.rosewood : PALETTE.walnut }]}>{priorityLabel(priority)}</Text>
+      <Text style={[TYPE_SCALE.badge, { color: ink }]}>{priorityLabel(priority)}</Text>
     </View>
   );
 }
@@ -28,14 +35,13 @@ const styles = StyleSheet.create({
     gap: SPACE.xs + 2,
     paddingHorizontal: SPACE.sm,
     paddingVertical: 2,
-    borderRadius: RADIUS.pill,
+    borderRadius: 3,
     borderWidth: 1,
-    borderColor: PALETTE.linen,
+    borderColor: PALETTE.linenDark,
     backgroundColor: PALETTE.vellum,
   },
   urgent: { borderColor: PALETTE.rosewood, backgroundColor: PALETTE.rosewoodBlush },
-  pips: { flexDirection: 'row', gap: 2 },
-  pip: { width: 6, height: 10, borderRadius: 1, borderWidth: 1, borderColor: PALETTE.linenDark },
-  pipOn: { backgroundColor: PALETTE.walnut, borderColor: PALETTE.walnut },
-  pipUrgent: { backgroundColor: PALETTE.rosewood, borderColor: PALETTE.rosewood },
+  mark: { width: 12, height: 14, alignItems: 'center', justifyContent: 'center' },
+  chevron: { width: 7, height: 7, borderTopWidth: 2, borderLeftWidth: 2, transform: [{ rotate: '45deg' }], marginBottom: -3 },
+  flat: { width: 10, height: 2 },
 });

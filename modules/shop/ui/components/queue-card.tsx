@@ -1,6 +1,6 @@
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, Text, View } from 'react-native';
 
-import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
+import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { Body } from '@/modules/theme/ui/text';
 
@@ -78,7 +78,9 @@ export function QueueCard({ item, me, fill }: { item: QueueItem; me: number | nu
           ) : null}
           {item.cautions.length ? (
             <View style={styles.flag}>
-              <View aria-hidden style={styles.caution} />
+              <View aria-hidden style={styles.caution}>
+                <Text style={styles.cautionGlyph}>!</Text>
+              </View>
               <Body variant="label" tone="accent">
                 {item.cautions.length === 1 ? 'Safety caution' : `${item.cautions.length} safety cautions`}
               </Body>
@@ -109,5 +111,7 @@ const styles = StyleSheet.create({
   flags: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.md },
   flag: { flexDirection: 'row', alignItems: 'center', gap: SPACE.xs },
   dot: { width: 10, height: 10, borderRadius: RADIUS.pill, backgroundColor: PALETTE.moss },
-  caution: { width: 0, height: 0, borderLeftWidth: 6, borderRightWidth: 6, borderBottomWidth: 10, borderLeftColor: 'transparent', borderRightColor: 'transparent', borderBottomColor: PALETTE.brass },
+  // a "!" in a ring: apart from the triangle that marks major work
+  caution: { width: 16, height: 16, borderRadius: 8, borderWidth: 1.5, borderColor: PALETTE.brassShade, alignItems: 'center', justifyContent: 'center' },
+  cautionGlyph: { ...TYPE_SCALE.badge, fontSize: 11, lineHeight: 13, color: PALETTE.brassShade },
 });

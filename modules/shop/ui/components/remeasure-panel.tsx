@@ -1,11 +1,15 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { BAND_LABELS, gradeAssessment, type Area, type Grade } from '@/modules/assessment/core/grade';
+import { READINESS_WORDS, gradeAssessment, type Area, type Grade } from '@/modules/assessment/core/grade';
 import type { GradeRules } from '@/modules/assessment/core/grade-rules';
-import { measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
+import { FELT_LEFT, FELT_STATES, TUNING_PINS, measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, type WorkTask } from '@/modules/assessment/core/work-tasks';
-import { GradeSummary } from '@/modules/assessment/ui/components/grade-summary';
+import { ConditionSummary } from '@/modules/assessment/ui/components/condition-summary';
+import { KeyListField } from '@/modules/assessment/ui/components/fields';
+import { parseKeyList } from '@/modules/assessment/ui/intake-draft';
+import { FELT_LEFT_LABELS, FELT_STATE_LABELS, TUNING_PIN_LABELS } from '@/modules/assessment/ui/measure-labels';
+import { useRateCard } from '@/modules/shop/ui/use-rate-card';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -36,6 +40,14 @@ const RATING_FIELDS: { key: RatingKey; label: string }[] = [
   { key: 'overallImpression', label: 'Overall impression' },
 ];
 
+type ChoiceKey = 'hammerFelt' | 'hammerFeltLeft' | 'tuningPins';
+// States seen rather than measured, asked again where the work changed them (new hammers, a pin repair).
+const CHOICE_FIELDS: { key: ChoiceKey; area: Area; label: string; options: readonly string[]; labels: Record<string, string> }[] = [
+  { key: 'hammerFelt', area: 'hammers', label: 'Hammer felt', options: FELT_STATES, labels: FELT_STATE_LABELS },
+  { key: 'hammerFeltLeft', area: 'hammers', label: 'Felt left to shape', options: FELT_LEFT, labels: FELT_LEFT_LABELS },
+  { key: 'tuningPins', area: 'tuning', label: 'Tuning pins', options: TUNING_PINS, labels: TUNING_PIN_LABELS },
+];
+
 const RATINGS = ['1', '2', '3', '4', '5'] as const;
 const RATING_LABELS = { 1: '1', 2: '2', 3: '3', 4: '4', 5: '5' } as Record<(typeof RATINGS)[number], string>;
 const YES_NO = ['yes', 'no'] as const;
@@ -59,6 +71,9 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
   const [numbers, setNumbers] = useState<Partial<Record<NumberKey, string>>>({});
   const [ratings, setRatings] = useState<Partial<Record<RatingKey, (typeof RATINGS)[number]>>>({});
   const [touches, setTouches] = useState<'yes' | 'no' | null>(null);
+  const [touchKeys, setTouchKeys] = useState('');
+  const [choices, setChoices] = useState<Partial<Record<ChoiceKey, string>>>({});
+  const { card } = useRateCard();
   const [note, setNote] = useState('');
   const [feedback, setFeedback] = useState<FeedbackState>(null);
   const [result, setResult] = useState<{ version: number; grade: Grade } | null>(null);
@@ -73,6 +88,14 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
   }
   for (const f of RATING_FIELDS) if (ratings[f.key]) filled[f.key] = Number(ratings[f.key]);
   if (touches) filled.keyTouchesNeighbour = touches === 'yes';
+  // After work on the keys, a no clears the keys named before; a yes names them again.
+  if (touches === 'no') filled.keysTouchingNeighbour = null;
+  if (touches === 'yes') {
+    const keys = parseKeyList(touchKeys);
+    if (Array.isArray(keys)) filled.keysTouchingNeighbour = keys;
+    else if (keys != null) typeErrors.keysTouchingNeighbour = 'Key numbers from 1 to 88, separated by commas.';
+  }
+  for (const f of CHOICE_FIELDS) if (choices[f.key]) (filled as Record<string, unknown>)[f.key] = choices[f.key];
 
   const parsed = measurementsInput.safeParse(filled);
   const errors: Record<string, string> = { ...typeErrors };
@@ -101,6 +124,8 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
     setNumbers({});
     setRatings({});
     setTouches(null);
+    setTouchKeys('');
+    setChoices({});
     setNote('');
     setFeedback({ tone: 'success', text: `Re-measurement saved as assessment version ${outcome.version}.` });
   };
@@ -144,8 +169,25 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
           testID="remeasure-keyTouchesNeighbour"
         />
       ) : null}
+      {visible('keys') && touches === 'yes' ? (
+        <KeyListField label="Which keys touch a neighbour" value={touchKeys} onChange={setTouchKeys} error={errors.keysTouchingNeighbour} testID="remeasure-keysTouchingNeighbour" />
+      ) : null}
+      {CHOICE_FIELDS.filter((f) => visible(f.area)).map((f) => (
+        <ChoiceGroup
+          key={f.key}
+          label={f.label}
+          hint={`Last: ${m[f.key] ? (f.labels[m[f.key] as string] ?? m[f.key]).toLowerCase() : 'not noted'}. Tap again to leave it as it was.`}
+          options={f.options}
+          labels={f.labels}
+          value={choices[f.key] ?? null}
+          onChange={(v) => setChoices((prev) => ({ ...prev, [f.key]: v }))}
+          onClear={() => setChoices((prev) => ({ ...prev, [f.key]: undefined }))}
+          compact
+          testID={`remeasure-${f.key}`}
+        />
+      ))}
       <View style={styles.play}>
-        <Body variant="subheading">Play test, 1 (poor) to 5 (fine)</Body>
+        <Body variant="subheading">Play test, from 1 (plays badly) to 5 (a pleasure to play)</Body>
         {RATING_FIELDS.map((f) => (
           <ChoiceGroup
             key={f.key}
@@ -169,11 +211,12 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
       {latest ? (
         <View style={styles.preview} testID="remeasure-preview" role="status">
           <Body variant="label" tone="secondary">
-            Grade now: {latest.grade.score} of 100, {BAND_LABELS[latest.grade.band]}
+            Now: {READINESS_WORDS[latest.grade.readiness]}
+            {latest.grade.provisional ? ' (provisional)' : ''}
           </Body>
           <Body variant="bodyStrong">
             {preview
-              ? `With these values: ${preview.score} of 100, ${BAND_LABELS[preview.band]} (${preview.findings.filter((f) => f.severity !== 'sound').length} findings to disclose)`
+              ? `With these values: ${READINESS_WORDS[preview.readiness]}${preview.provisional ? ' (provisional)' : ''} (${preview.findings.filter((f) => f.mark !== 'fine').length} findings to disclose)`
               : count
                 ? 'Fix the marked values to see the new grade.'
                 : 'Fill in a value to see the new grade.'}
@@ -185,7 +228,7 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
       {result ? (
         <View style={styles.result} testID="remeasure-result">
           <Heading level={3}>New grade, version {result.version}</Heading>
-          <GradeSummary grade={result.grade} scoreTestID="remeasure-score" />
+          <ConditionSummary grade={result.grade} card={card} testID="remeasure-condition" />
         </View>
       ) : null}
     </Card>

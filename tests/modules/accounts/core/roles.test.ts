@@ -16,6 +16,10 @@ describe('roles', () => {
     ['manager', 'tendBackgroundWork', true],
     ['floor', 'tendBackgroundWork', false],
     ['technician', 'tendBackgroundWork', false],
+    ['technician', 'correctOwnTime', true],
+    ['technician', 'correctAnyTime', false],
+    ['manager', 'correctAnyTime', true],
+    ['floor', 'correctOwnTime', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);

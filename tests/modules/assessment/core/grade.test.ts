@@ -1,4 +1,4 @@
-import { bandFor, gradeAssessment, regulationHours, type Finding } from '@/modules/assessment/core/grade';
+import { AREAS, gradeAssessment, inspectedAreas, provisionalRule, readinessReasons, regulationHours, type Finding } from '@/modules/assessment/core/grade';
 import { defaultRules } from '@/modules/assessment/core/grade-rules';
 import { measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
 
@@ -16,36 +16,55 @@ const crack = { lengthCm: 30, widestGapMm: 0.3, crossesRib: false, buzzes: false
 describe('key side play', () => {
   // common practice, no published source: 1-2 mm of side play is normal even on a new piano
   it.each([
-    [0, 'sound'],
-    [1.5, 'sound'],
-    [2.0, 'sound'],
-    [2.01, 'watch'],
-    [6, 'watch'],
-  ])('%f mm is %s', (mm, severity) => expect(only({ keySidePlayMm: mm }, 'keys.sidePlay').severity).toBe(severity));
+    [0, 'fine'],
+    [1.5, 'fine'],
+    [2.0, 'fine'],
+    [2.01, 'noted'],
+    [6, 'noted'],
+  ])('%f mm is %s', (mm, mark) => expect(only({ keySidePlayMm: mm }, 'keys.sidePlay').mark).toBe(mark));
 
   // common practice, no published source: a key that touches its neighbour means worn key bushings
   it('a key touching its neighbour needs rebushing, with easing the front rail pins as the cheaper fix', () => {
-    const f = only({ keySidePlayMm: 1.0, keyTouchesNeighbour: true }, 'keys.sidePlay');
-    expect(f.severity).toBe('needs_work');
+    const f = only({ keySidePlayMm: 1.0, keyTouchesNeighbour: true, keysTouchingNeighbour: [40] }, 'keys.sidePlay');
+    expect(f.mark).toBe('work');
     expect(tasks(f)).toEqual(['rebush_keys', 'ease_front_rail_pins']);
     expect(f.work[1].alternativeTo).toBe('rebush_keys');
     expect(f.mustDisclose).toBe(true);
+    expect(f.finding).toBe('Key 40 can be pushed sideways until it touches its neighbour: the key bushings are worn.');
+  });
+
+  it('names every key it happens on, in order', () => {
+    expect(only({ keyTouchesNeighbour: true, keysTouchingNeighbour: [52, 12, 52] }, 'keys.sidePlay').finding).toBe('Keys 12, 52 can be pushed sideways until they touch their neighbours: the key bushings are worn.');
+  });
+
+  it.each([
+    [{ keyTouchesNeighbour: true }, 'is needed: name the keys that touch a neighbour'],
+    [{ keyTouchesNeighbour: true, keysTouchingNeighbour: [] }, 'is needed: name the keys that touch a neighbour'],
+    [{ keyTouchesNeighbour: false, keysTouchingNeighbour: [3] }, 'is only for a key that touches its neighbour: answer that question yes first'],
+    [{ keyTouchesNeighbour: true, keysTouchingNeighbour: [0] }, 'must be a key number from 1 to 88'],
+    [{ keyTouchesNeighbour: true, keysTouchingNeighbour: [89] }, 'must be a key number from 1 to 88'],
+    [{ keyTouchesNeighbour: true, keysTouchingNeighbour: [12.5] }, 'must be a whole key number'],
+  ])('refuses %j: %s', (m, message) => {
+    const r = measurementsInput.safeParse(m);
+    expect(r.success).toBe(false);
+    expect(r.error!.issues[0].path[0]).toBe('keysTouchingNeighbour');
+    expect(r.error!.issues[0].message).toBe(message);
   });
 });
 
 describe('key level', () => {
   // common practice, no published source: light regulation takes a couple of hours, a far-out action a couple of days
   it.each([
-    [0.5, 'sound', undefined],
-    [0.51, 'watch', 2],
-    [1.5, 'watch', 2],
-    [1.51, 'needs_work', 2],
-    [2.25, 'needs_work', 9],
-    [3.0, 'needs_work', 16],
-    [8, 'needs_work', 16],
-  ])('%f mm is %s with %p hours of regulation', (mm, severity, hours) => {
+    [0.5, 'fine', undefined],
+    [0.51, 'noted', 2],
+    [1.5, 'noted', 2],
+    [1.51, 'work', 2],
+    [2.25, 'work', 9],
+    [3.0, 'work', 16],
+    [8, 'work', 16],
+  ])('%f mm is %s with %p hours of regulation', (mm, mark, hours) => {
     const f = only({ keyLevelDeviationMm: mm }, 'keys.level');
-    expect(f.severity).toBe(severity);
+    expect(f.mark).toBe(mark);
     expect(f.work[0]?.hours).toBe(hours);
   });
   it('rounds the hours between the limits to the half hour', () => {
@@ -56,15 +75,15 @@ describe('key level', () => {
 describe('hammers', () => {
   // common practice, no published source: shallow grooves are normal; grooves several mm deep mean the end of the hammer's life
   it.each([
-    [0.5, 'sound', []],
-    [1.0, 'sound', []],
-    [1.01, 'needs_work', ['reshape_voice_hammers']],
-    [2.99, 'needs_work', ['reshape_voice_hammers']],
-    [3.0, 'serious', ['replace_hammers']],
-    [5.5, 'serious', ['replace_hammers']],
-  ])('grooves %f mm deep are %s', (mm, severity, work) => {
+    [0.5, 'fine', []],
+    [1.0, 'fine', []],
+    [1.01, 'work', ['reshape_voice_hammers']],
+    [2.99, 'work', ['reshape_voice_hammers']],
+    [3.0, 'major', ['replace_hammers']],
+    [5.5, 'major', ['replace_hammers']],
+  ])('grooves %f mm deep are %s', (mm, mark, work) => {
     const f = only({ hammerGrooveDepthMm: mm }, 'hammers.wear');
-    expect(f.severity).toBe(severity);
+    expect(f.mark).toBe(mark);
     expect(tasks(f)).toEqual(work);
   });
   // common practice, no published source: chemically hardened felt or no felt left cannot be revoiced
@@ -73,7 +92,7 @@ describe('hammers', () => {
     [{ hammerGrooveDepthMm: 0.5, hammerFeltLeft: 'none' as const }],
   ])('%j means replacing the hammers', (m) => {
     const f = only(m, 'hammers.wear');
-    expect(f.severity).toBe('serious');
+    expect(f.mark).toBe('major');
     expect(tasks(f)).toEqual(['replace_hammers']);
     expect(grade(m).referToTechnician).toBe(true);
   });
@@ -82,14 +101,14 @@ describe('hammers', () => {
 describe('strings', () => {
   // common practice, no published source: rust on steel and dark or green oxidation on copper are signs of age
   it.each([
-    [{ steelCorrosion: 'light' as const }, 'strings.steel', 'sound'],
-    [{ steelCorrosion: 'moderate' as const }, 'strings.steel', 'watch'],
-    [{ steelCorrosion: 'heavy' as const }, 'strings.steel', 'needs_work'],
-    [{ bassWinding: 'dull' as const }, 'strings.bass', 'sound'],
-    [{ bassWinding: 'dark' as const }, 'strings.bass', 'watch'],
-    [{ bassWinding: 'green' as const }, 'strings.bass', 'needs_work'],
-    [{ brokenStrings: 2 }, 'strings.broken', 'needs_work'],
-  ])('%j: %s is %s', (m, check, severity) => expect(only(m, check).severity).toBe(severity));
+    [{ steelCorrosion: 'light' as const }, 'strings.steel', 'fine'],
+    [{ steelCorrosion: 'moderate' as const }, 'strings.steel', 'noted'],
+    [{ steelCorrosion: 'heavy' as const }, 'strings.steel', 'work'],
+    [{ bassWinding: 'dull' as const }, 'strings.bass', 'fine'],
+    [{ bassWinding: 'dark' as const }, 'strings.bass', 'noted'],
+    [{ bassWinding: 'green' as const }, 'strings.bass', 'work'],
+    [{ brokenStrings: 2 }, 'strings.broken', 'work'],
+  ])('%j: %s is %s', (m, check, mark) => expect(only(m, check).mark).toBe(mark));
 
   it('asks for restringing where corrosion is heavy and names broken strings', () => {
     expect(tasks(only({ steelCorrosion: 'heavy' }, 'strings.steel'))).toEqual(['restring_section']);
@@ -101,13 +120,13 @@ describe('strings', () => {
 describe('soundboard cracks', () => {
   // common practice, no published source: a crack is serious when it crosses a rib, buzzes or hurts tuning stability
   it.each([
-    [{}, 'watch'],
-    [{ crossesRib: true }, 'serious'],
-    [{ buzzes: true }, 'serious'],
-    [{ hurtsTuning: true }, 'serious'],
-  ])('a crack with %j is %s and is disclosed', (extra, severity) => {
+    [{}, 'noted'],
+    [{ crossesRib: true }, 'major'],
+    [{ buzzes: true }, 'major'],
+    [{ hurtsTuning: true }, 'major'],
+  ])('a crack with %j is %s and is disclosed', (extra, mark) => {
     const f = only({ soundboardCracks: [{ ...crack, ...extra }] }, 'soundboard.crack.1');
-    expect(f.severity).toBe(severity);
+    expect(f.mark).toBe(mark);
     expect(f.mustDisclose).toBe(true);
   });
 
@@ -128,10 +147,10 @@ describe('soundboard cracks', () => {
 
   it('grades each crack and separated ribs on their own', () => {
     const g = grade({ soundboardCracks: [crack, { ...crack, buzzes: true }], ribsSeparated: true });
-    expect(g.findings.map((f) => [f.check, f.severity])).toEqual([
-      ['soundboard.crack.1', 'watch'],
-      ['soundboard.crack.2', 'serious'],
-      ['soundboard.ribs', 'needs_work'],
+    expect(g.findings.map((f) => [f.check, f.mark])).toEqual([
+      ['soundboard.crack.1', 'noted'],
+      ['soundboard.crack.2', 'major'],
+      ['soundboard.ribs', 'work'],
     ]);
   });
 });
@@ -139,17 +158,17 @@ describe('soundboard cracks', () => {
 describe('tuning', () => {
   // ISO 16:1975 (A4 = 440 Hz) and the cent (A. J. Ellis, 1885); 15 cents flat before a pitch raise is from memory
   it.each([
-    [0, 'sound', []],
-    [-5, 'sound', []],
-    [-6, 'watch', ['fine_tuning']],
-    [-15, 'watch', ['fine_tuning']],
-    [-15.01, 'needs_work', ['pitch_raise', 'fine_tuning']],
-    [-60, 'needs_work', ['pitch_raise', 'fine_tuning']],
-    [20, 'needs_work', ['fine_tuning']],
-  ])('%f cents from standard pitch is %s', (c, severity, work) => {
+    [0, 'fine', []],
+    [-5, 'fine', []],
+    [-6, 'noted', ['fine_tuning']],
+    [-15, 'noted', ['fine_tuning']],
+    [-15.01, 'work', ['pitch_raise', 'fine_tuning']],
+    [-60, 'work', ['pitch_raise', 'fine_tuning']],
+    [20, 'work', ['fine_tuning']],
+  ])('%f cents from standard pitch is %s', (c, mark, work) => {
     const g = grade({ a4Hz: hzAtCents(c) });
     const f = g.findings.find((x) => x.check === 'tuning.pitch')!;
-    expect(f.severity).toBe(severity);
+    expect(f.mark).toBe(mark);
     expect(tasks(f)).toEqual(work);
     expect(g.centsFromStandard).toBeCloseTo(c, 6);
   });
@@ -161,10 +180,10 @@ describe('tuning', () => {
 
   // common practice, no published source: loose tuning pins will not hold a tuning
   it.each([
-    ['firm', 'sound'],
-    ['some_loose', 'watch'],
-    ['loose', 'serious'],
-  ] as const)('tuning pins %s are %s', (pins, severity) => expect(only({ tuningPins: pins }, 'tuning.pins').severity).toBe(severity));
+    ['firm', 'fine'],
+    ['some_loose', 'noted'],
+    ['loose', 'major'],
+  ] as const)('tuning pins %s are %s', (pins, mark) => expect(only({ tuningPins: pins }, 'tuning.pins').mark).toBe(mark));
 });
 
 describe('play test', () => {
@@ -189,10 +208,10 @@ describe('play test', () => {
     expect(grade({ ...good, [field]: value }).notRecommendedForRetail).toBe(false);
   });
 
-  it('an even piano with a good range is sound', () => {
+  it('an even piano with a good range is fine', () => {
     const g = grade(good);
-    expect(g.findings.map((f) => f.severity)).toEqual(['sound', 'sound']);
-    expect(g.score).toBe(100);
+    expect(g.findings.map((f) => f.mark)).toEqual(['fine', 'fine']);
+    expect(g.playTested).toBe(true);
   });
 
   it('names the notes that stand out', () => {
@@ -200,51 +219,130 @@ describe('play test', () => {
   });
 });
 
-describe('score, band and flags', () => {
-  it('takes 3 per watch, 10 per needs work and 25 per serious, never below 0', () => {
-    // 2 watch (side play, moderate corrosion), 1 needs work (grooves 2 mm), 1 serious (buzzing crack)
-    const g = grade({ keySidePlayMm: 2.5, steelCorrosion: 'moderate', hammerGrooveDepthMm: 2, soundboardCracks: [{ ...crack, buzzes: true }] });
-    expect(g.score).toBe(100 - 2 * 3 - 10 - 25);
-    expect(g.band).toBe('fair');
-    expect(g.referToTechnician).toBe(true);
-    const wreck = grade({
-      keyTouchesNeighbour: true,
-      hammerGrooveDepthMm: 4,
-      tuningPins: 'loose',
-      soundboardCracks: [{ ...crack, crossesRib: true }, { ...crack, buzzes: true }],
-      bassEvenness: 1,
-    });
-    expect(wreck.score).toBe(0);
-    expect(wreck.band).toBe('poor');
-  });
+// Every area measured, all of it in good order: the full grade a shop could put on the floor.
+const clean: Measurements = {
+  keySidePlayMm: 1.2,
+  keyLevelDeviationMm: 0.3,
+  hammerGrooveDepthMm: 0.6,
+  steelCorrosion: 'none',
+  bassWinding: 'bright',
+  ribsSeparated: false,
+  a4Hz: 440,
+  tuningPins: 'firm',
+  bassEvenness: 5,
+  middleEvenness: 5,
+  trebleEvenness: 4,
+  dynamicRange: 5,
+  overallImpression: 5,
+};
+const onlyAreas = (areas: string[]) =>
+  Object.fromEntries(
+    Object.entries({
+      keys: { keySidePlayMm: 1.2 },
+      hammers: { hammerGrooveDepthMm: 0.6 },
+      strings: { steelCorrosion: 'none' },
+      soundboard: { ribsSeparated: false },
+      tuning: { a4Hz: 440 },
+      play: { overallImpression: 5 },
+    } as Record<string, Measurements>)
+      .filter(([a]) => areas.includes(a))
+      .flatMap(([, m]) => Object.entries(m)),
+  ) as Measurements;
 
-  it.each([
-    [100, 'excellent'],
-    [85, 'excellent'],
-    [84, 'good'],
-    [70, 'good'],
-    [69, 'fair'],
-    [50, 'fair'],
-    [49, 'poor'],
-    [0, 'poor'],
-  ])('a score of %i is %s', (score, band) => expect(bandFor(score)).toBe(band));
-
-  it('an empty inspection grades 100 with no findings and records the rules version', () => {
+describe('areas not inspected', () => {
+  it('an empty inspection inspects nothing, claims nothing and gives no verdict of quality', () => {
     expect(grade({})).toEqual({
+      format: 2,
       rulesVersion: defaultRules.version,
       findings: [],
-      score: 100,
-      band: 'excellent',
+      inspectedAreas: [],
+      minInspectedAreas: defaultRules.minInspectedAreas,
+      provisional: true,
+      playTested: false,
+      readiness: 'unjudged',
       referToTechnician: false,
       notRecommendedForRetail: false,
       centsFromStandard: null,
     });
+    expect(readinessReasons(grade({}))).toEqual(['Nothing has been inspected yet.']);
+  });
+
+  it.each([
+    [{ keyTouchesNeighbour: false }, ['keys']],
+    [{ keytopDamage: [] }, []],
+    [{ hammerFeltLeft: 'ample' as const, brokenStrings: 0 }, ['hammers', 'strings']],
+    [{ soundboardCracks: [] }, []],
+    [{ notesStickingOut: [12] }, ['play']],
+    [clean, [...AREAS]],
+  ])('%j inspects %j', (m, areas) => expect(inspectedAreas(measurementsInput.parse(m))).toEqual(areas));
+
+  it('every measurement given yields a finding, so an inspected area never reads as empty', () => {
+    for (const [field, value] of Object.entries({ keyTouchesNeighbour: false, hammerFelt: 'firm', hammerFeltLeft: 'ample', brokenStrings: 0, ribsSeparated: false, tuningPins: 'firm', dynamicRange: 4 })) {
+      const g = grade({ [field]: value } as Measurements);
+      expect([field, g.inspectedAreas.length, g.findings.length]).toEqual([field, 1, 1]);
+      expect(g.findings[0].mark).toBe('fine');
+    }
+  });
+});
+
+describe('provisional grade', () => {
+  // shop default (TRADE.md "shop default"): a grade needs 5 of the 6 areas
+  it.each([
+    [[], true],
+    [['keys', 'hammers', 'strings', 'soundboard'], true],
+    [['keys', 'hammers', 'strings', 'soundboard', 'play'], false],
+    [[...AREAS], false],
+  ])('inspecting %j is provisional: %p', (areas, provisional) => {
+    const g = grade(onlyAreas(areas as string[]));
+    expect(g.inspectedAreas).toEqual(AREAS.filter((a) => (areas as string[]).includes(a)));
+    expect(g.provisional).toBe(provisional);
+  });
+
+  it('follows the shop’s own rule, and states it', () => {
+    const lenient = { ...defaultRules, version: 'lenient', minInspectedAreas: 2 };
+    const g = gradeAssessment(onlyAreas(['keys', 'play']), lenient);
+    expect(g.provisional).toBe(false);
+    expect(g.minInspectedAreas).toBe(2);
+    expect(provisionalRule(5)).toBe('A grade is provisional until at least 5 of the 6 areas are inspected (the shop’s rule).');
+  });
+});
+
+describe('readiness verdict', () => {
+  it.each([
+    // common practice, no published source: the play test outranks every visual check
+    ['a full clean grade with the play test', clean, 'floor', false],
+    ['a clean grade without the play test', onlyAreas(['keys', 'hammers', 'strings', 'soundboard', 'tuning']), 'unjudged', false],
+    ['a clean but provisional grade', onlyAreas(['keys', 'play']), 'unjudged', true],
+    ['one finding calling for work', { ...clean, hammerGrooveDepthMm: 2 }, 'work_first', false],
+    ['work found over a provisional grade', { hammerGrooveDepthMm: 2 }, 'work_first', true],
+    ['a noted finding with no work', { ...clean, steelCorrosion: 'moderate' }, 'floor', false],
+    ['a poor play test, however clean the rest', { ...clean, overallImpression: 2 }, 'wholesale', false],
+  ] as [string, Measurements, string, boolean][])('%s', (_what, m, readiness, provisional) => {
+    const g = grade(m);
+    expect(g.readiness).toBe(readiness);
+    expect(g.provisional).toBe(provisional);
+  });
+
+  it('says why in words', () => {
+    expect(readinessReasons(grade(clean))).toEqual(['Every inspected area is fine or noted, with no work called for.']);
+    expect(readinessReasons(grade({ hammerGrooveDepthMm: 2, keyLevelDeviationMm: 2 }))).toEqual([
+      '2 findings call for work before it goes on the floor.',
+      'Provisional: 2 of 6 areas inspected; the shop asks for 5.',
+      'The play test has not been done: it outranks every visual check.',
+    ]);
+    expect(readinessReasons(grade({ ...clean, bassEvenness: 1 }))[0]).toBe('The play test found it plays poorly: not recommended for retail as it stands.');
+  });
+
+  it('refers to a technician when a finding is major work', () => {
+    const g = grade({ keySidePlayMm: 2.5, steelCorrosion: 'moderate', hammerGrooveDepthMm: 2, soundboardCracks: [{ ...crack, buzzes: true }] });
+    expect(g.findings.map((f) => f.mark)).toEqual(['noted', 'work', 'noted', 'major']);
+    expect(g.referToTechnician).toBe(true);
   });
 
   it('follows changed shop rules', () => {
     const strict = { ...defaultRules, version: 'strict', keySidePlayNormalMm: 1.5 };
     const g = gradeAssessment({ keySidePlayMm: 1.8 }, strict);
-    expect(g.findings[0].severity).toBe('watch');
+    expect(g.findings[0].mark).toBe('noted');
     expect(g.rulesVersion).toBe('strict');
   });
 });

@@ -1,7 +1,12 @@
 import { gradeAssessment } from '@/modules/assessment/core/grade';
-import { buildDisclosure, canonicalJson, DEFAULT_WARRANTY, type DisclosureInput } from '@/modules/disclosure/core/disclosure';
+import type { MeasureField } from '@/modules/assessment/core/grade';
+import type { Measurements } from '@/modules/assessment/core/measurements';
+import { areaSections, buildDisclosure, canonicalJson, DEFAULT_WARRANTY, notDoneSummary, publishBlockers, type DisclosureInput } from '@/modules/disclosure/core/disclosure';
 
 import { buildMeasurements } from '../../../support/builders';
+
+const intakeAt = '2026-11-28T10:00:00.000Z';
+const afterAt = '2026-12-02T15:00:00.000Z';
 
 function input(over: Partial<DisclosureInput> = {}): DisclosureInput {
   const measurements = buildMeasurements();
@@ -9,45 +14,167 @@ function input(over: Partial<DisclosureInput> = {}): DisclosureInput {
     piano: { stockNumber: 'FW-0100', maker: 'Almsbury', model: 'Parlour 118', serialNumber: 'AL-1', year: 1981, yearIsEstimate: true, yearFrom: 1978, yearTo: 1984, kind: 'upright', sizeCm: 118, finish: 'satin walnut', caseCondition: 'worn', caseNotes: 'A ring mark on the lid.' },
     askingPriceMinor: 349500,
     currency: 'USD',
-    assessment: { kind: 'intake', measurements, grade: gradeAssessment(measurements), submittedAt: '2026-11-28T10:00:00.000Z' },
-    workDone: [{ task: 'reshape_voice_hammers', title: 'Reshape and voice hammers' }],
+    intake: { measurements, grade: gradeAssessment(measurements), submittedAt: intakeAt },
+    after: null,
+    workDone: [],
+    soldAsItStands: false,
     photos: [{ id: 7, area: 'soundboard', caption: 'Crack near the treble bridge' }],
     texts: { dealerName: 'Larkspur Lane Pianos', warranty: DEFAULT_WARRANTY },
     ...over,
   };
 }
 
+/** The re-measurements after the work, over the intake's, graded as the server grades them. */
+function after(fields: Partial<Measurements>, base = buildMeasurements()): DisclosureInput['after'] {
+  const measurements = { ...base, ...fields };
+  return { measurements, grade: gradeAssessment(measurements), submittedAt: afterAt, remeasured: Object.keys(fields) as MeasureField[] };
+}
+
+const reshape = { task: 'reshape_voice_hammers', title: 'Reshape and voice hammers', because: ['hammers.wear'] };
+const areaOf = (c: ReturnType<typeof buildDisclosure>, a: string) => c.areas.find((x) => x.area === a)!;
+
 describe('buildDisclosure', () => {
-  it('names a cosmetic soundboard crack and worn hammers, and the work done', () => {
+  it('lists every area, found at intake, with the mark and words of how each stands', () => {
     const c = buildDisclosure(input());
-    const soundboard = c.areas.find((a) => a.area === 'soundboard')!;
-    expect(soundboard.condition).toBe('Worth knowing');
-    expect(soundboard.findings[0].text).toMatch(/does not cross a rib, buzz or affect tuning, so it is cosmetic, but it lowers resale value/);
+    expect(c.format).toBe(2);
+    expect(c.areas.map((a) => a.area)).toEqual(['keys', 'hammers', 'strings', 'soundboard', 'tuning', 'play', 'case']);
+    const soundboard = areaOf(c, 'soundboard');
+    expect([soundboard.mark, soundboard.condition]).toEqual(['noted', 'Noted']);
+    expect(soundboard.found[0].text).toMatch(/does not cross a rib, buzz or affect tuning, so it is cosmetic, but it lowers resale value/);
     expect(soundboard.photoIds).toEqual([7]);
-    const hammers = c.areas.find((a) => a.area === 'hammers')!;
-    expect(hammers.condition).toBe('Needs attention');
-    expect(hammers.findings[0].text).toMatch(/2.2 mm deep/);
-    expect(hammers.workDone).toEqual(['Reshape and voice hammers']);
-    expect(c.areas.find((a) => a.area === 'case')!.findings[0].text).toBe('The case and finish show wear: marks and scratches from years of use. A ring mark on the lid.');
+    const hammers = areaOf(c, 'hammers');
+    expect([hammers.mark, hammers.condition, hammers.foundBeforeWork]).toEqual(['work', 'Needs work', false]);
+    expect(hammers.found[0].text).toMatch(/2.2 mm deep/);
+    expect(hammers.notDone).toEqual(['Reshape and voice hammers']);
+    expect(areaOf(c, 'case').found[0].text).toBe('The case and finish show wear: marks and scratches from years of use. A ring mark on the lid.');
+    expect(c.inspectedOn).toBe('2026-11-28');
+    expect(c.measuredAfterOn).toBeNull();
   });
 
-  it('says whether a crack crosses a rib, buzzes or affects tuning, and whether it is wide', () => {
-    const m = buildMeasurements({ soundboardCracks: [{ lengthCm: 40, widestGapMm: 0.9, crossesRib: true, buzzes: false, hurtsTuning: false }] });
-    const c = buildDisclosure(input({ assessment: { kind: 'post_workshop', measurements: m, grade: gradeAssessment(m), submittedAt: '2026-11-30T10:00:00.000Z' } }));
-    const text = c.areas.find((a) => a.area === 'soundboard')!.findings[0].text;
-    expect(text).toMatch(/it crosses a rib/);
-    expect(text).toMatch(/a wide crack/);
-    expect(c.assessedAfterWorkshop).toBe(true);
+  it('says an area nobody measured is not inspected, and never calls it fine', () => {
+    const m = { keySidePlayMm: 1.2, a4Hz: 440 } as Measurements;
+    const c = buildDisclosure(input({ intake: { measurements: m, grade: gradeAssessment(m), submittedAt: intakeAt }, piano: { ...input().piano, caseCondition: null, caseNotes: null } }));
+    expect(c.areas.map((a) => [a.area, a.mark, a.condition])).toEqual([
+      ['keys', 'fine', 'Fine'],
+      ['hammers', 'unseen', 'Not inspected'],
+      ['strings', 'unseen', 'Not inspected'],
+      ['soundboard', 'unseen', 'Not inspected'],
+      ['tuning', 'fine', 'Fine'],
+      ['play', 'unseen', 'Not inspected'],
+      ['case', 'unseen', 'Not inspected'],
+    ]);
+  });
+
+  it('shows work done without a re-measurement as found before the work, never as still true beside it', () => {
+    const c = buildDisclosure(input({ workDone: [reshape] }));
+    const hammers = areaOf(c, 'hammers');
+    expect(hammers.workDone).toEqual(['Reshape and voice hammers']);
+    expect(hammers.foundBeforeWork).toBe(true);
+    expect(hammers.measuredAfter).toEqual([]);
+    expect(hammers.notMeasuredAgain).toEqual(['hammer wear', 'hammer felt']);
+    expect([hammers.mark, hammers.condition]).toEqual(['unseen', 'Not measured after the work']);
+    expect(hammers.notDone).toEqual([]);
+  });
+
+  it('puts what was measured again after the work apart from what was found at intake', () => {
+    const c = buildDisclosure(input({ workDone: [reshape], after: after({ hammerGrooveDepthMm: 0.6, hammerFelt: 'firm', hammerFeltLeft: 'ample' }) }));
+    const hammers = areaOf(c, 'hammers');
+    expect(hammers.found.map((f) => f.mark)).toEqual(['work', 'fine']);
+    expect(hammers.measuredAfter).toEqual([
+      { mark: 'fine', text: 'Hammer string grooves are shallow (0.6 mm), as is normal.' },
+      { mark: 'fine', text: 'Hammer felt: the felt is firm; ample felt is left to shape.' },
+    ]);
+    expect(hammers.notMeasuredAgain).toEqual([]);
+    expect([hammers.mark, hammers.condition]).toEqual(['fine', 'Fine']);
+    expect(c.measuredAfterOn).toBe('2026-12-02');
+    // An area the work did not touch keeps its intake findings as they stand.
+    expect(areaOf(c, 'soundboard').mark).toBe('noted');
+  });
+
+  it('names the checks of a worked area that were not measured again', () => {
+    const c = buildDisclosure(input({ workDone: [reshape], after: after({ hammerGrooveDepthMm: 0.6 }) }));
+    const hammers = areaOf(c, 'hammers');
+    expect(hammers.measuredAfter.map((f) => f.text)).toEqual(['Hammer string grooves are shallow (0.6 mm), as is normal.']);
+    expect(hammers.notMeasuredAgain).toEqual(['hammer felt']);
+    expect([hammers.mark, hammers.condition]).toEqual(['fine', 'Fine where measured again']);
+  });
+
+  it('a piano sold as it stands says plainly what was not done', () => {
+    const c = buildDisclosure(input({ soldAsItStands: true }));
+    expect(c.soldAsItStands).toBe(true);
+    // the buildMeasurements intake calls for a light regulation, hammer reshaping, a fine tuning and voicing, in area order
+    expect(c.notDone).toEqual(['Regulation', 'Reshape and voice hammers', 'Fine tuning', 'Voicing']);
+    expect(c.areas.every((a) => !a.workDone.length)).toBe(true);
+  });
+
+  it('keeps work of no one area apart', () => {
+    const c = buildDisclosure(input({ workDone: [{ task: 'custom', title: 'Cleaned the action', because: [] }] }));
+    expect(c.otherWorkDone).toEqual(['Cleaned the action']);
   });
 
   // ISO 16:1975 and the cent (Ellis, 1885): 437.2 Hz is 11 cents below A4 = 440 Hz
-  it('states the measured pitch in cents from standard pitch, with the date', () => {
-    expect(buildDisclosure(input()).pitch).toEqual({ a4Hz: 437.2, cents: -11.1, text: 'A4 measured at 437.2 Hz, 11 cents below standard pitch, on 2026-11-28.' });
+  it('states the measured pitch in cents from standard pitch, and when it was measured', () => {
+    expect(buildDisclosure(input()).pitch).toEqual({ a4Hz: 437.2, cents: -11.1, text: 'A4 measured at 437.2 Hz, 11 cents below standard pitch.', measuredOn: '2026-11-28', when: 'intake' });
+    const tuned = { task: 'fine_tuning', title: 'Fine tuning', because: ['tuning.pitch'] };
+    expect(buildDisclosure(input({ workDone: [tuned] })).pitch).toMatchObject({ a4Hz: 437.2, when: 'before_work' });
+    expect(buildDisclosure(input({ workDone: [tuned], after: after({ a4Hz: 440 }) })).pitch).toMatchObject({ a4Hz: 440, cents: 0, text: 'A4 measured at 440.0 Hz, at standard pitch.', measuredOn: '2026-12-02', when: 'after_work' });
   });
 
   it('carries the notices a buyer is owed', () => {
     const titles = buildDisclosure(input()).notices.map((n) => n.title);
     expect(titles).toEqual(['Tuning after delivery', 'Moving a piano', 'Your own inspection', 'About this document']);
+  });
+});
+
+describe('areaSections', () => {
+  const day = (d: string) => `day ${d}`;
+
+  it('reads in the order things happened: found at intake, before the work; the work; measured after; what was not measured again', () => {
+    const c = buildDisclosure(input({ workDone: [reshape], after: after({ hammerGrooveDepthMm: 0.6 }) }));
+    const sections = areaSections(areaOf(c, 'hammers'), c, day);
+    expect(sections.map((s) => [s.kind, s.title])).toEqual([
+      ['found', 'Found at intake on day 2026-11-28, before the work'],
+      ['work', 'Work done in our workshop'],
+      ['after', 'Measured after the work on day 2026-12-02'],
+      ['unmeasured', 'Not measured again after the work'],
+    ]);
+    expect(sections[1].items).toEqual([{ mark: 'done', text: 'Reshape and voice hammers' }]);
+    expect(sections[3].items).toEqual([{ mark: null, text: 'Hammer felt' }]);
+  });
+
+  it('says an area was not inspected rather than leaving it empty, and lists work not done', () => {
+    const m = { keySidePlayMm: 1.2, hammerGrooveDepthMm: 2 } as Measurements;
+    const c = buildDisclosure(input({ intake: { measurements: m, grade: gradeAssessment(m), submittedAt: intakeAt } }));
+    expect(areaSections(areaOf(c, 'strings'), c, day)).toEqual([{ kind: 'found', title: 'At intake on day 2026-11-28', items: [{ mark: 'unseen', text: 'Nothing in this area was measured or looked at.' }] }]);
+    expect(areaSections(areaOf(c, 'hammers'), c, day).at(-1)).toEqual({ kind: 'not_done', title: 'Recommended and not done', items: [{ mark: null, text: 'Reshape and voice hammers' }] });
+  });
+});
+
+describe('notDoneSummary', () => {
+  it('tells the buyer up front what was not done, and plainly when it is sold as it stands', () => {
+    expect(notDoneSummary(buildDisclosure(input({ soldAsItStands: true })))).toEqual({
+      title: 'Sold as it stands',
+      text: 'This piano has not been reconditioned in our workshop. Our inspection called for this work, which was not done: Regulation; Reshape and voice hammers; Fine tuning; Voicing.',
+    });
+    const clean = { keySidePlayMm: 1.2, a4Hz: 440 } as Measurements;
+    expect(notDoneSummary(buildDisclosure(input({ intake: { measurements: clean, grade: gradeAssessment(clean), submittedAt: intakeAt } })))).toBeNull();
+  });
+});
+
+describe('publishBlockers', () => {
+  const full = buildMeasurements();
+  it.each([
+    ['a full grade with the play test', full, 0],
+    ['a provisional grade', { keySidePlayMm: 1.2, overallImpression: 4 } as Measurements, 1],
+    ['a grade without the play test', { ...full, bassEvenness: null, middleEvenness: null, trebleEvenness: null, dynamicRange: null, overallImpression: null }, 1],
+    ['an empty grade', {} as Measurements, 2],
+  ])('%s gives its count of reasons not to publish', (_what, m, n) => expect(publishBlockers(gradeAssessment(m))).toHaveLength(n));
+
+  it('says why in words', () => {
+    expect(publishBlockers(gradeAssessment({}))).toEqual([
+      'The grade is provisional: 0 of 6 areas are inspected and the shop asks for 5. Correct the assessment with the missing areas first.',
+      'The play test is missing, and a disclosure needs it: add it by correcting the assessment, or as a re-measurement in the workshop.',
+    ]);
   });
 });
 
