@@ -259,6 +259,8 @@ describe('a version published in the first format', () => {
     const ack = await api.http.post(`/api/public/disclosures/${link.token}/acknowledge`).send({ fullName: 'Tam Oldfield', email: 'tam@example.test', read: true, digest });
     expect(ack.status).toBe(201);
     await call('floor', `mutation { countersign(acknowledgementId: ${ack.body.acknowledgementId}) }`);
+    // The signed copy goes out by a job.
+    await api.jobs.settle();
     const mail = api.mail.messages.find((m) => m.to.includes('tam@example.test'))!;
     const text = await pdfText(mail.attachments[0].content);
     expect(text).toContain('Hammers: Needs attention');
