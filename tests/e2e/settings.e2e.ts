@@ -42,7 +42,8 @@ it('lets a manager tighten side play, see the sample grade move, save a new vers
   // The sample's keys move 1.8 mm sideways: fine under 2 mm, noted (easing the front rail pins) under 1.5 mm.
   await waitForText(page, 'grading-with-changes', (t) => t === 'Your changes do not move this sample.', 'no change');
   await expect(page.getByTestId('finding-keys.sidePlay').first().textContent()).resolves.toContain('Fine');
-  const before = await text(page, 'grading-in-force');
+  // The hours appear once the rate card has loaded beside the rules.
+  const before = await waitForText(page, 'grading-in-force', (t) => t.endsWith('h of work.'), 'the sample under the rules in force, with its hours');
   expect(before).toMatch(/^Under the rules in force: Needs work first; .* h of work\.$/);
   await field.fill('1.5');
   const after = await waitForText(page, 'grading-with-changes', (t) => t.startsWith('With your changes:'), 'the changed sample');
