@@ -33,6 +33,9 @@ const MAIL_PORT = Number(process.env.BENCH_MAIL_PORT ?? 2606);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 3);
 const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
 const CONNECTIONS = 4;
+// BENCH_ONLY=overruns,pdfs runs only the rows and parts named (for work on one cure); the table then has gaps.
+const ONLY = (process.env.BENCH_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean);
+const wanted = (name: string) => !ONLY.length || ONLY.some((o) => name.includes(o));
 const WEB_DIR = path.join(ROOT, 'dist');
 const TSX = path.join(ROOT, 'node_modules/.bin/tsx');
 
@@ -351,16 +354,17 @@ export function renderTable(r: BenchResults): string {
   const lines = [head, '|---|---|---|'];
   for (const [name, byScale] of Object.entries(r.screens)) lines.push(`| ${name}: median / p99, SQL statements, size | ${screenCell(byScale[small])} | ${screenCell(byScale[large])} |`);
   const c = r.stockCompare;
-  lines.push(`| stock list, GraphQL / plain route (requests/s) | ${c[small].graphqlRps} / ${c[small].plainRps} = **${c[small].ratio}** | ${c[large].graphqlRps} / ${c[large].plainRps} = **${c[large].ratio}** |`);
-  const b = r.bundles as Record<string, { jsGzipKb: number; jsKb: number; jsWireKb: number; jsWireKbUncompressed: number; fontKb: number }>;
+  const ratio = (x: BenchResults['stockCompare'][string] | undefined) => (x ? `${x.graphqlRps} / ${x.plainRps} = **${x.ratio}**` : '-');
+  if (c[small] || c[large]) lines.push(`| stock list, GraphQL / plain route (requests/s) | ${ratio(c[small])} | ${ratio(c[large])} |`);
+  const b = r.bundles as Record<string, { jsGzipKb: number; jsKb: number; jsWireKb: number; jsWireKbUncompressed: number; fontKb: number }> | null;
   for (const [label, key] of [['staff first load', 'staff'], ['buyer /d/<token>', 'buyer']] as const) {
-    const x = b[key];
-    lines.push(`| ${label}: JS gzipped (raw); on the wire compressed / uncompressed; fonts | ${x.jsGzipKb} KB (${x.jsKb} KB); ${x.jsWireKb} / ${x.jsWireKbUncompressed} KB; ${x.fontKb} KB | - |`);
+    const x = b?.[key];
+    if (x) lines.push(`| ${label}: JS gzipped (raw); on the wire compressed / uncompressed; fonts | - | ${x.jsGzipKb} KB (${x.jsKb} KB); ${x.jsWireKb} / ${x.jsWireKbUncompressed} KB; ${x.fontKb} KB |`);
   }
-  lines.push(`| disclosure PDF / floor-tag PDF, warm median | ${r.pdfs.disclosureMs} / ${r.pdfs.floorTagMs} ms | |`);
-  lines.push(`| token check: the server's / a string secret's, per request | ${r.tokenCheck.serverUs} / ${r.tokenCheck.stringSecretUs} us | |`);
-  lines.push(`| server start to first /healthz, median of ${r.serverStart.samples.length} | ${r.serverStart.medianMs} ms | |`);
-  lines.push(`| pitch from a recording, real-time factor | ${'realTimeFactor' in r.tone ? r.tone.realTimeFactor : `skipped: ${r.tone.skipped}`} | |`);
+  if (r.pdfs.samples) lines.push(`| disclosure PDF / floor-tag PDF, warm median | - | ${r.pdfs.disclosureMs} / ${r.pdfs.floorTagMs} ms |`);
+  if (Number.isFinite(r.tokenCheck.serverUs)) lines.push(`| token check: the server's / with a string secret / with a key object, per request | ${r.tokenCheck.serverUs} / ${r.tokenCheck.stringSecretUs} / ${r.tokenCheck.keyObjectUs} us | - |`);
+  if (r.serverStart.samples.length) lines.push(`| server start to first /healthz, median of ${r.serverStart.samples.length} | ${r.serverStart.medianMs} ms | - |`);
+  lines.push(`| pitch from a recording, real-time factor | ${'realTimeFactor' in r.tone ? r.tone.realTimeFactor : `skipped: ${r.tone.skipped}`} | - |`);
   return lines.join('\n');
 }
 
@@ -426,15 +430,19 @@ async function main(): Promise<void> {
       const tech = await login(server.base, 'tech@feltwire.test');
       const t = await targets(dbs[scale]);
       const requests = screenRequests({ manager: manager.token, technician: tech.token }, t);
-      for (const req of requests.screens) {
+      for (const req of requests.screens.filter((r) => wanted(r.name))) {
         log(`  ${req.name}`);
         (results.screens[req.name] ??= {})[scale] = await measureScreen(server.base, req);
       }
-      log('  stock list: GraphQL against the plain route');
-      results.stockCompare[scale] = await compareStock(server.base, requests.stockGraphql, requests.stockPlain);
-      if (scale === LARGE) {
+      if (wanted('compare')) {
+        log('  stock list: GraphQL against the plain route');
+        results.stockCompare[scale] = await compareStock(server.base, requests.stockGraphql, requests.stockPlain);
+      }
+      if (scale === LARGE && wanted('bundles')) {
         log('  what a browser downloads');
         results.bundles = await measureBundles(server.base, t.disclosureToken, manager);
+      }
+      if (scale === LARGE && wanted('pdfs')) {
         log('  PDFs');
         results.pdfs = await measurePdfs(dbs[scale]);
       }
@@ -442,18 +450,26 @@ async function main(): Promise<void> {
       await server.stop();
     }
   }
-  log('token check');
-  results.tokenCheck = await measureTokenCheck();
-  log('server start');
-  results.serverStart = await measureStart(dbs[SMALL]);
-  log('pitch from a recording');
-  results.tone = await measureTone();
+  if (wanted('token')) {
+    log('token check');
+    results.tokenCheck = await measureTokenCheck();
+  }
+  if (wanted('start')) {
+    log('server start');
+    results.serverStart = await measureStart(dbs[SMALL]);
+  }
+  if (wanted('tone')) {
+    log('pitch from a recording');
+    results.tone = await measureTone();
+  }
   results.benchSeconds = round((performance.now() - t0) / 1000, 0);
 
   const table = renderTable(results);
-  fs.writeFileSync(path.join(ROOT, 'bench/results.json'), `${JSON.stringify(results, null, 2)}\n`);
-  fs.writeFileSync(path.join(ROOT, 'bench/results.md'), `${table}\n`);
-  process.stdout.write(`\n${table}\n\nbench took ${results.benchSeconds} s; written to bench/results.json and bench/results.md\n`);
+  // A partial run prints its rows but keeps the last full table on disk.
+  const out = ONLY.length ? 'bench/results-partial' : 'bench/results';
+  fs.writeFileSync(path.join(ROOT, `${out}.json`), `${JSON.stringify(results, null, 2)}\n`);
+  fs.writeFileSync(path.join(ROOT, `${out}.md`), `${table}\n`);
+  process.stdout.write(`\n${table}\n\nbench took ${results.benchSeconds} s; written to ${out}.json and ${out}.md\n`);
 }
 
 if (require.main === module) {

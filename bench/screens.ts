@@ -3,7 +3,7 @@
 import { COUNTS_QUERY, PAGE_SIZE, pianoListQuery } from '@/modules/pianos/ui/use-pianos';
 import { PIANO_QUERY } from '@/modules/pianos/ui/use-piano';
 import { disclosureApi } from '@/modules/disclosure/ui/public-disclosure';
-import { OVERRUNS_QUERY } from '@/modules/shop/ui/use-overruns';
+import { OVERRUNS_PAGE, OVERRUNS_QUERY } from '@/modules/shop/ui/use-overruns';
 import { WORK_PLAN_QUERY } from '@/modules/shop/ui/use-work-plan';
 import { WORK_QUEUE_QUERY } from '@/modules/shop/ui/use-work-queue';
 
@@ -37,7 +37,7 @@ export function screenDocuments(t: Targets): GraphDocument[] {
     { name: 'bench queue (technician)', role: 'technician', query: WORK_QUEUE_QUERY },
     { name: 'bench queue (manager)', role: 'manager', query: WORK_QUEUE_QUERY },
     { name: 'work plan', role: 'manager', query: WORK_PLAN_QUERY, variables: { pianoId: t.pianoId } },
-    { name: 'overruns', role: 'manager', query: OVERRUNS_QUERY },
+    { name: 'overruns', role: 'manager', query: OVERRUNS_QUERY, variables: { limit: OVERRUNS_PAGE, offset: 0 } },
     { name: 'stage counts', role: 'manager', query: COUNTS_QUERY },
   ];
 }

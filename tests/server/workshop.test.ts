@@ -166,7 +166,7 @@ describe('the bench', () => {
     const plan = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan;
     const voicing = plan.byTask.find((t: Json) => t.task === 'reshape_voice_hammers');
     expect(voicing).toEqual({ task: 'reshape_voice_hammers', estimatedHours: 4, loggedHours: 5.5, estimatedCostMinor: 39500, actualCostMinor: 53250, varianceMinor: 13750 });
-    const over = (await call('manager', '{ workshopOverruns }')).workshopOverruns;
+    const over = (await call('manager', '{ workshopOverruns }')).workshopOverruns.overruns;
     // the voicing item alone is over; items not started yet do not hide it
     expect(over.find((o: Json) => o.pianoId === pianoId)).toMatchObject({ overrunMinor: 13750, itemsOver: ['Reshape and voice hammers'] });
   });

@@ -16,6 +16,7 @@ import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
 import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
+import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from '@/server/graphql/limits';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, WorkItem, WorkNote, WorkPlan } from './shop-models';
@@ -370,24 +371,102 @@ export async function planView(actor: Actor, pianoId: number): Promise<PlanView 
   };
 }
 
+export interface Overrun {
+  pianoId: number;
+  stockNumber: string;
+  stage: string;
+  overrunMinor: number;
+  itemsOver: string[];
+  estimatedHours: number;
+  loggedHours: number;
+  estimatedCostMinor: number;
+  actualCostMinor: number;
+  varianceMinor: number;
+  currency: string;
+}
+
+// Each item's estimate and cost so far, priced as itemViews prices them (half away from zero per item),
+// then each piano's totals and overrun: the sums first, so only one page of pianos gathers item titles.
+const PIANO_OVERRUNS = `
+  with logged as (
+    select work_item_id, sum(coalesce(minutes, round(extract(epoch from (coalesce(ended_at, now()) - started_at)) / 60)::int)) as minutes
+    from time_entries group by work_item_id
+  ), parts as (
+    select work_item_id, sum(cost_minor * quantity) as minor from part_uses group by work_item_id
+  ), costed as (
+    select wi.id, wi.piano_id, wi.title, wi.priority, wi.estimated_hours, wp.currency,
+      coalesce(l.minutes, 0) as logged_minutes,
+      round(wi.estimated_hours * wp.hourly_rate_minor) + wi.estimated_parts_minor as estimated_cost,
+      round(coalesce(l.minutes, 0) * wp.hourly_rate_minor / 60.0) + coalesce(pt.minor, 0) as actual_cost
+    from work_plans wp
+    join work_items wi on wi.plan_id = wp.id
+    left join logged l on l.work_item_id = wi.id
+    left join parts pt on pt.work_item_id = wi.id
+    where wp.approved_at is not null
+  ), per_piano as (
+    select piano_id, min(currency) as currency, sum(greatest(actual_cost - estimated_cost, 0)) as overrun_minor,
+      sum(estimated_hours) as estimated_hours, sum(logged_minutes) as logged_minutes,
+      sum(estimated_cost) as estimated_cost, sum(actual_cost) as actual_cost
+    from costed group by piano_id
+  )`;
+
+interface OverrunRow {
+  piano_id: number;
+  stock_number: string;
+  stage: string;
+  currency: string;
+  overrun_minor: number;
+  items_over: string[];
+  estimated_hours: number;
+  logged_minutes: number;
+  estimated_cost: number;
+  actual_cost: number;
+  total: number;
+}
+
 /**
- * The manager's list of pianos whose workshop work runs over, worst first. While work goes on, the
- * overrun is what items already cost beyond their own estimates; items not started do not offset it.
+ * The manager's list of pianos whose workshop work runs over, worst first, a page at a time. While work
+ * goes on, the overrun is what items already cost beyond their own estimates; items not started do not
+ * offset it. One statement, whatever the number of plans (two past the last page, to count them).
  */
-export async function overruns(actor: Actor): Promise<{ pianoId: number; stockNumber: string; stage: string; overrunMinor: number; itemsOver: string[]; estimatedCostMinor: number; actualCostMinor: number; varianceMinor: number; currency: string }[]> {
+export async function overruns(actor: Actor, page: { limit?: number | null; offset?: number | null } = {}): Promise<{ total: number; overruns: Overrun[] }> {
   requireRole(actor, isManager, 'see workshop overruns');
-  const plans = await WorkPlan.query().whereNotNull('approved_at');
-  const out = [];
-  for (const plan of plans) {
-    const view = (await planView(actor, plan.pianoId))!;
-    const over = view.items.filter((i) => i.actualCostMinor > i.estimatedCostMinor);
-    if (over.length) {
-      const piano = (await Piano.query().findById(plan.pianoId))!;
-      const overrunMinor = over.reduce((s, i) => s + i.actualCostMinor - i.estimatedCostMinor, 0);
-      out.push({ pianoId: plan.pianoId, stockNumber: piano.stockNumber, stage: piano.stage, overrunMinor, itemsOver: over.map((i) => i.title), ...view.totals, currency: plan.currency });
-    }
-  }
-  return out.sort((a, b) => b.overrunMinor - a.overrunMinor);
+  const limit = page.limit ?? DEFAULT_PAGE_SIZE;
+  const offset = page.offset ?? 0;
+  if (!Number.isInteger(limit) || limit < 1 || limit > MAX_PAGE_SIZE) throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
+  if (!Number.isInteger(offset) || offset < 0) throw badInput('offset', 'must be 0 or more');
+  const knex = WorkPlan.knex();
+  const { rows } = await knex.raw(
+    `${PIANO_OVERRUNS}, page as (
+      select *, count(*) over () as total from per_piano where overrun_minor > 0
+      order by overrun_minor desc, piano_id limit ? offset ?
+    ), over_items as (
+      select piano_id, array_agg(title order by priority, id) as items_over from costed
+      where actual_cost > estimated_cost and piano_id in (select piano_id from page) group by piano_id
+    )
+    select page.*, p.stock_number, p.stage, o.items_over
+    from page join pianos p on p.id = page.piano_id join over_items o on o.piano_id = page.piano_id
+    order by page.overrun_minor desc, page.piano_id`,
+    [limit, offset],
+  );
+  const list = rows as OverrunRow[];
+  const total = list.length ? list[0].total : offset === 0 ? 0 : Number((await knex.raw(`${PIANO_OVERRUNS} select count(*) as n from per_piano where overrun_minor > 0`)).rows[0].n);
+  return {
+    total,
+    overruns: list.map((r) => ({
+      pianoId: r.piano_id,
+      stockNumber: r.stock_number,
+      stage: r.stage,
+      overrunMinor: r.overrun_minor,
+      itemsOver: r.items_over,
+      estimatedHours: r.estimated_hours,
+      loggedHours: hoursOf(r.logged_minutes),
+      estimatedCostMinor: r.estimated_cost,
+      actualCostMinor: r.actual_cost,
+      varianceMinor: r.actual_cost - r.estimated_cost,
+      currency: r.currency,
+    })),
+  };
 }
 
 export async function itemDetail(actor: Actor, itemId: number) {

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
@@ -6,6 +7,7 @@ import { PALETTE, RADIUS, SPACE, TYPE_SCALE } from '@/modules/theme/core/palette
 import { Button } from '@/modules/theme/ui/button';
 import { EmptyState } from '@/modules/theme/ui/empty-state';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { Pager } from '@/modules/theme/ui/pager';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Screen } from '@/modules/theme/ui/screen';
 import { StageBadge } from '@/modules/theme/ui/stage-badge';
@@ -14,7 +16,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { RoleGate } from './components/role-gate';
 import { VarianceTag } from './components/variance-tag';
-import { useOverruns, type Overrun } from './use-overruns';
+import { OVERRUNS_PAGE, useOverruns, type Overrun } from './use-overruns';
 import { money } from './work-format';
 
 const COLS = [
@@ -39,7 +41,10 @@ export function OverrunsScreen() {
 
 function Overruns() {
   const wide = useWide();
-  const { overruns, error } = useOverruns();
+  const [offset, setOffset] = useState(0);
+  const { overruns, total, fetching, error } = useOverruns(offset);
+  // A page that emptied (work was re-estimated meanwhile) goes back to the worst.
+  if (overruns && !overruns.length && offset > 0) setOffset(0);
   const problem = graphProblem(error);
   return (
     <Screen
@@ -67,30 +72,33 @@ function Overruns() {
           Every item so far has cost no more than its estimate.
         </EmptyState>
       ) : (
-        <View style={wide ? styles.table : undefined} testID="overruns-list">
-          {wide ? (
-            <View aria-hidden style={[styles.row, styles.headRow]}>
-              {COLS.map((c) => (
-                <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
-                  {c.label}
-                </Text>
+        <View style={styles.listWrap}>
+          <Pager offset={offset} shown={overruns.length} total={total} pageSize={OVERRUNS_PAGE} onOffset={setOffset} noun="pianos" busy={fetching} testID="overruns-pager" />
+          <View style={wide ? styles.table : undefined} testID="overruns-list">
+            {wide ? (
+              <View aria-hidden style={[styles.row, styles.headRow]}>
+                {COLS.map((c) => (
+                  <Text key={c.key} style={[TYPE_SCALE.label, styles.head, { flex: c.flex }]}>
+                    {c.label}
+                  </Text>
+                ))}
+              </View>
+            ) : null}
+            <View role="list" style={wide ? undefined : styles.cards}>
+              {overruns.map((o, i) => (
+                <View role="listitem" key={o.pianoId}>
+                  <LinkPressable
+                    href={`/workshop/pianos/${o.pianoId}`}
+                    accessibilityLabel={rowLabel(o)}
+                    testID={`overrun-${o.pianoId}`}
+                    insetFocus={wide}
+                    style={({ hovered }) => [wide ? styles.row : styles.card, wide && i > 0 && styles.rule, hovered && styles.hover]}
+                  >
+                    {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
+                  </LinkPressable>
+                </View>
               ))}
             </View>
-          ) : null}
-          <View role="list" style={wide ? undefined : styles.cards}>
-            {overruns.map((o, i) => (
-              <View role="listitem" key={o.pianoId}>
-                <LinkPressable
-                  href={`/workshop/pianos/${o.pianoId}`}
-                  accessibilityLabel={rowLabel(o)}
-                  testID={`overrun-${o.pianoId}`}
-                  insetFocus={wide}
-                  style={({ hovered }) => [wide ? styles.row : styles.card, wide && i > 0 && styles.rule, hovered && styles.hover]}
-                >
-                  {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
-                </LinkPressable>
-              </View>
-            ))}
           </View>
         </View>
       )}
@@ -134,6 +142,7 @@ function PhoneCard({ o }: { o: Overrun }) {
 }
 
 const styles = StyleSheet.create({
+  listWrap: { gap: SPACE.md },
   table: { backgroundColor: PALETTE.vellum, borderWidth: 1, borderColor: PALETTE.linen, borderRadius: RADIUS.lg, overflow: 'hidden' },
   row: { flexDirection: 'row', alignItems: 'center', gap: SPACE.md, paddingHorizontal: SPACE.lg, paddingVertical: SPACE.md, minHeight: 64 },
   headRow: { backgroundColor: PALETTE.ivory, borderBottomWidth: 2, borderBottomColor: PALETTE.linen, minHeight: 44, paddingVertical: SPACE.sm },
