@@ -5,7 +5,7 @@ import { PIANO_QUERY } from '@/modules/pianos/ui/use-piano';
 import { disclosureApi } from '@/modules/disclosure/ui/public-disclosure';
 import { OVERRUNS_PAGE, OVERRUNS_QUERY } from '@/modules/shop/ui/use-overruns';
 import { WORK_PLAN_QUERY } from '@/modules/shop/ui/use-work-plan';
-import { WORK_QUEUE_QUERY } from '@/modules/shop/ui/use-work-queue';
+import { FIRST_QUEUE_VARIABLES, WORK_QUEUE_QUERY } from '@/modules/shop/ui/use-work-queue';
 
 export interface ScreenRequest {
   name: string;
@@ -34,8 +34,8 @@ export function screenDocuments(t: Targets): GraphDocument[] {
   return [
     { name: 'stock list', role: 'manager', query: pianoListQuery(null, 'newest'), variables: { limit: PAGE_SIZE, offset: 0 } },
     { name: 'piano page', role: 'manager', query: PIANO_QUERY, variables: { id: t.pianoId } },
-    { name: 'bench queue (technician)', role: 'technician', query: WORK_QUEUE_QUERY },
-    { name: 'bench queue (manager)', role: 'manager', query: WORK_QUEUE_QUERY },
+    { name: 'bench queue (technician)', role: 'technician', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },
+    { name: 'bench queue (manager)', role: 'manager', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },
     { name: 'work plan', role: 'manager', query: WORK_PLAN_QUERY, variables: { pianoId: t.pianoId } },
     { name: 'overruns', role: 'manager', query: OVERRUNS_QUERY, variables: { limit: OVERRUNS_PAGE, offset: 0 } },
     { name: 'stage counts', role: 'manager', query: COUNTS_QUERY },

@@ -12,7 +12,7 @@ import { cautionsFor } from '@/modules/shop/core/cautions';
 import { readClimate } from '@/modules/shop/core/climate';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
-import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
+import { QUEUE_PAGE, QUEUE_SCOPES, type QueuePage, type QueueScope, type WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
 import { climateInput, DECISIONS, partUseInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
@@ -263,7 +263,7 @@ function minutesOf(entries: TimeEntry[], now: number): number {
 
 export type ItemView = WorkItemView;
 
-async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) => number): Promise<ItemView[]> {
+async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number, itemId: number) => number): Promise<ItemView[]> {
   if (!items.length) return [];
   const ids = items.map((i) => i.id);
   const [entries, parts, users] = await Promise.all([
@@ -277,7 +277,7 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
     const mine = entries.filter((e) => e.workItemId === i.id);
     const loggedMinutes = minutesOf(mine, now);
     const partsMinor = parts.filter((p) => p.workItemId === i.id).reduce((s, p) => s + p.costMinor * p.quantity, 0);
-    const rate = hourlyRateMinor(i.pianoId);
+    const rate = hourlyRateMinor(i.pianoId, i.id);
     return {
       id: i.id,
       pianoId: i.pianoId,
@@ -301,24 +301,63 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
   });
 }
 
-/** A technician's queue: their items and the unassigned ones on pianos in the workshop, by priority and due date. */
-export async function workQueue(actor: Actor): Promise<QueueItem[]> {
+/**
+ * One page of the bench, by priority and due date: the reader's own items, the unassigned ones, or
+ * (for managers) every open item on pianos in the workshop. A fixed number of statements per page.
+ */
+export async function workQueue(actor: Actor, raw: { scope?: string | null; limit?: number | null; offset?: number | null } = {}): Promise<QueuePage> {
   requireRole(actor, atBench, 'see the work queue');
-  const q = WorkItem.query()
+  const manager = isManager(actor);
+  const scope = (raw.scope ?? (manager ? 'all' : 'mine')) as QueueScope;
+  if (!QUEUE_SCOPES.includes(scope)) throw badInput('scope', `must be one of ${QUEUE_SCOPES.join(', ')}`);
+  if (scope === 'all' && !manager) throw notAllowed('see every open item in the workshop');
+  const limit = raw.limit ?? QUEUE_PAGE;
+  const offset = raw.offset ?? 0;
+  if (!Number.isInteger(limit) || limit < 1 || limit > MAX_PAGE_SIZE) throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
+  if (!Number.isInteger(offset) || offset < 0) throw badInput('offset', 'must be 0 or more');
+
+  const knex = WorkItem.knex();
+  const counted = (await knex('work_items')
     .join('pianos', 'pianos.id', 'work_items.piano_id')
     .where('pianos.stage', 'in_workshop')
     .whereNot('work_items.status', 'done')
+    .select(
+      knex.raw('count(*) filter (where work_items.assigned_to_id = ?) as mine', [actor.id]),
+      knex.raw('count(*) filter (where work_items.assigned_to_id is null) as unassigned'),
+      knex.raw('count(*) as "all"'),
+    )
+    .first()) as Record<QueueScope, number>;
+  const counts = { mine: Number(counted.mine), unassigned: Number(counted.unassigned), all: Number(counted.all) };
+
+  const q = WorkItem.query()
+    .join('pianos', 'pianos.id', 'work_items.piano_id')
+    .join('work_plans', 'work_plans.id', 'work_items.plan_id')
+    .where('pianos.stage', 'in_workshop')
+    .whereNot('work_items.status', 'done')
     .orderBy([{ column: 'work_items.priority' }, { column: 'work_items.due_on', nulls: 'last' }, { column: 'work_items.id' }])
-    .select('work_items.*');
-  if (actor.role === 'technician') q.where((w) => w.where('work_items.assigned_to_id', actor.id).orWhereNull('work_items.assigned_to_id'));
-  const items = await q;
-  const plans = await WorkPlan.query().whereIn('piano_id', [...new Set(items.map((i) => i.pianoId))]);
-  const pianos = await Piano.query().whereIn('id', [...new Set(items.map((i) => i.pianoId))]);
-  const views = await itemViews(items, (id) => plans.find((p) => p.pianoId === id)?.hourlyRateMinor ?? 0);
-  return views.map((v) => {
-    const p = pianos.find((x) => x.id === v.pianoId)!;
-    return { ...v, stockNumber: p.stockNumber, piano: [p.maker, p.model].filter(Boolean).join(' ') };
-  });
+    .limit(limit)
+    .offset(offset)
+    .select('work_items.*', 'pianos.stock_number', 'pianos.maker', 'pianos.model', 'work_plans.hourly_rate_minor');
+  if (scope === 'mine') q.where('work_items.assigned_to_id', actor.id);
+  if (scope === 'unassigned') q.whereNull('work_items.assigned_to_id');
+  const items = (await q) as (WorkItem & { stockNumber: string; maker: string; model: string | null; hourlyRateMinor: number })[];
+  const rates = new Map(items.map((i) => [i.id, i.hourlyRateMinor]));
+  const views = await itemViews(items, (_pianoId, itemId) => rates.get(itemId) ?? 0);
+  const running = (await TimeEntry.query()
+    .join('work_items', 'work_items.id', 'time_entries.work_item_id')
+    .join('pianos', 'pianos.id', 'work_items.piano_id')
+    .where('time_entries.technician_id', actor.id)
+    .whereNull('time_entries.ended_at')
+    .whereNull('time_entries.minutes')
+    .select('work_items.id', 'work_items.title', 'pianos.stock_number')
+    .first()) as unknown as { id: number; title: string; stockNumber: string } | undefined;
+  return {
+    scope,
+    total: counts[scope],
+    counts,
+    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: [items[n].maker, items[n].model].filter(Boolean).join(' ') })),
+    running: running ? { id: running.id, title: running.title, stockNumber: running.stockNumber } : null,
+  };
 }
 
 export interface PlanView {
