@@ -31,8 +31,11 @@ const START_PORT = Number(process.env.BENCH_START_PORT ?? 8149);
 const S3 = process.env.BENCH_S3_ENDPOINT ?? 'http://127.0.0.1:4650';
 const MAIL_PORT = Number(process.env.BENCH_MAIL_PORT ?? 2606);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 3);
-const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 3);
-const CONNECTIONS = 4;
+const ROUNDS = Number(process.env.BENCH_ROUNDS ?? 5);
+// Screens are timed one request at a time (how quick a screen is for one person); the GraphQL against
+// plain comparison loads with several at once (how much the server can do).
+const CONNECTIONS = 1;
+const LOAD_CONNECTIONS = 4;
 // BENCH_ONLY=overruns,pdfs runs only the rows and parts named (for work on one cure); the table then has gaps.
 const ONLY = (process.env.BENCH_ONLY ?? '').split(',').map((x) => x.trim()).filter(Boolean);
 const wanted = (name: string) => !ONLY.length || ONLY.some((o) => name.includes(o));
@@ -143,8 +146,15 @@ interface ScreenResult {
   peakRssMb: number;
 }
 
-async function stats(base: string): Promise<{ statements: number; peakRssMb: number }> {
-  return (await (await fetch(`${base}/__bench/stats`)).json()) as { statements: number; peakRssMb: number };
+interface ServerStats {
+  statements: number;
+  requests: number;
+  cpuUs: number;
+  peakRssMb: number;
+}
+
+async function stats(base: string): Promise<ServerStats> {
+  return (await (await fetch(`${base}/__bench/stats`)).json()) as ServerStats;
 }
 
 /** Waits until the server has run no statement for a while: requests a load left in flight have finished. */
@@ -169,8 +179,8 @@ function check(req: ScreenRequest, status: number, body: string): void {
   if (status !== 200 || body.includes('"errors"')) throw new Error(`${req.name}: ${status} ${body.slice(0, 300)}`);
 }
 
-async function cannon(base: string, req: ScreenRequest, seconds: number): Promise<autocannon.Result> {
-  const result = await autocannon({ url: `${base}${req.path}`, method: req.method, headers: req.headers, body: req.body, connections: CONNECTIONS, duration: seconds, timeout: 120 });
+async function cannon(base: string, req: ScreenRequest, seconds: number, connections = CONNECTIONS): Promise<autocannon.Result> {
+  const result = await autocannon({ url: `${base}${req.path}`, method: req.method, headers: req.headers, body: req.body, connections, duration: seconds, timeout: 120 });
   if (result.non2xx || result.errors) throw new Error(`${req.name}: ${result.non2xx} non-2xx answers and ${result.errors} errors under load`);
   return result;
 }
@@ -205,17 +215,33 @@ async function measureScreen(base: string, req: ScreenRequest): Promise<ScreenRe
   };
 }
 
-/** The stock list through GraphQL and through the plain route, alternating, in one run. */
+/** The stock list through GraphQL and through the plain route, alternating, in one run: requests a second, and server CPU per request. */
 async function compareStock(base: string, gql: ScreenRequest, plain: ScreenRequest) {
   await quiet(base);
-  const rps: { graphql: number[]; plain: number[] } = { graphql: [], plain: [] };
-  for (const r of [gql, plain]) await cannon(base, r, 1);
+  const rps = { graphql: [] as number[], plain: [] as number[] };
+  const cpu = { graphql: [] as number[], plain: [] as number[] };
+  for (const r of [gql, plain]) await cannon(base, r, 1, LOAD_CONNECTIONS);
   for (let i = 0; i < ROUNDS; i += 1) {
-    rps.graphql.push((await cannon(base, gql, 2)).requests.average);
-    rps.plain.push((await cannon(base, plain, 2)).requests.average);
+    for (const [name, req] of [['graphql', gql], ['plain', plain]] as const) {
+      await quiet(base);
+      const before = await stats(base);
+      rps[name].push((await cannon(base, req, 2, LOAD_CONNECTIONS)).requests.average);
+      await quiet(base);
+      const after = await stats(base);
+      cpu[name].push((after.cpuUs - before.cpuUs) / Math.max(1, after.requests - before.requests));
+    }
   }
   const ratios = rps.graphql.map((g, i) => g / rps.plain[i]);
-  return { graphqlRps: round(median(rps.graphql)), plainRps: round(median(rps.plain)), ratio: round(median(ratios), 2), rounds: ROUNDS };
+  const cpuRatios = cpu.graphql.map((g, i) => cpu.plain[i] / g);
+  return {
+    graphqlRps: round(median(rps.graphql)),
+    plainRps: round(median(rps.plain)),
+    ratio: round(median(ratios), 2),
+    graphqlCpuUs: round(median(cpu.graphql), 0),
+    plainCpuUs: round(median(cpu.plain), 0),
+    cpuRatio: round(median(cpuRatios), 2),
+    rounds: ROUNDS,
+  };
 }
 
 // ---- what a browser downloads ----
@@ -355,7 +381,11 @@ export function renderTable(r: BenchResults): string {
   for (const [name, byScale] of Object.entries(r.screens)) lines.push(`| ${name}: median / p99, SQL statements, size | ${screenCell(byScale[small])} | ${screenCell(byScale[large])} |`);
   const c = r.stockCompare;
   const ratio = (x: BenchResults['stockCompare'][string] | undefined) => (x ? `${x.graphqlRps} / ${x.plainRps} = **${x.ratio}**` : '-');
-  if (c[small] || c[large]) lines.push(`| stock list, GraphQL / plain route (requests/s) | ${ratio(c[small])} | ${ratio(c[large])} |`);
+  const cpuRatio = (x: BenchResults['stockCompare'][string] | undefined) => (x?.cpuRatio != null ? `${x.plainCpuUs} / ${x.graphqlCpuUs} us = **${x.cpuRatio}**` : '-');
+  if (c[small] || c[large]) {
+    lines.push(`| stock list, GraphQL / plain route, requests/s | ${ratio(c[small])} | ${ratio(c[large])} |`);
+    lines.push(`| stock list, plain route / GraphQL, server CPU per request | ${cpuRatio(c[small])} | ${cpuRatio(c[large])} |`);
+  }
   const b = r.bundles as Record<string, { jsGzipKb: number; jsKb: number; jsWireKb: number; jsWireKbUncompressed: number; fontKb: number }> | null;
   for (const [label, key] of [['staff first load', 'staff'], ['buyer /d/<token>', 'buyer']] as const) {
     const x = b?.[key];
@@ -374,9 +404,10 @@ export interface BenchResults {
   scales: { small: number; large: number };
   seconds: number;
   connections: number;
+  loadConnections: number;
   data: Record<string, BenchCounts | null>;
   screens: Record<string, Record<string, ScreenResult>>;
-  stockCompare: Record<string, { graphqlRps: number; plainRps: number; ratio: number; rounds: number }>;
+  stockCompare: Record<string, { graphqlRps: number; plainRps: number; ratio: number; graphqlCpuUs: number; plainCpuUs: number; cpuRatio: number; rounds: number }>;
   bundles: unknown;
   pdfs: { disclosureMs: number; floorTagMs: number; samples: number };
   tokenCheck: { serverUs: number; stringSecretUs: number; keyObjectUs: number };
@@ -406,6 +437,7 @@ async function main(): Promise<void> {
     scales: { small: SMALL, large: LARGE },
     seconds: SECONDS,
     connections: CONNECTIONS,
+    loadConnections: LOAD_CONNECTIONS,
     data: {},
     screens: {},
     stockCompare: {},

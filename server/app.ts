@@ -15,6 +15,9 @@ import type Stripe from 'stripe';
 import { authRouter, configurePassport, requireUser, type AuthOptions } from './auth';
 import { toAppError, toGraphQLError } from './errors';
 import type { GraphContext } from './graphql/context';
+import { compiledExecution } from './graphql/compiled-execution';
+import { documentCache } from './graphql/document-cache';
+import { plainResponse } from './graphql/plain-response';
 import { DOMAINS } from './graphql/domains';
 import { MAX_QUERY_DEPTH } from './graphql/limits';
 import { buildSchema } from './graphql/schema';
@@ -80,6 +83,9 @@ export function createApp(deps: AppDeps): express.Express {
     requireUser(pp),
     createHandler<GraphContext>({
       schema,
+      ...documentCache(),
+      execute: compiledExecution(),
+      onOperation: plainResponse,
       context: (req) => ({ user: (req.raw as Request).user as User, photos: deps.photos, disclosure, deposits }),
       validationRules: (_req, _args, specified) => [...specified, depthLimit(MAX_QUERY_DEPTH)],
       formatError: (err) => {
