@@ -1,10 +1,9 @@
+import compression from 'compression';
 import express, { type NextFunction, type Request, type Response } from 'express';
 import depthLimit from 'graphql-depth-limit';
 import { createHandler } from 'graphql-http/lib/use/express';
 import { GraphQLError } from 'graphql';
 import type { Knex } from 'knex';
-import fs from 'node:fs';
-import path from 'node:path';
 
 import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
@@ -25,6 +24,7 @@ import { uploadsRouter } from './uploads';
 import type { Mailer } from './mail';
 import { inboxRouter, type MailFake } from './mail-fake';
 import { documentsRouter, publicRouter } from './public-routes';
+import { mountWeb } from './web';
 
 export interface AppDeps {
   knex: Knex;
@@ -45,6 +45,8 @@ export function createApp(deps: AppDeps): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
+  // Answers go compressed to browsers that take it; the web app's files are compressed ahead of time (server/web.ts).
+  app.use(compression());
   const pp = configurePassport(deps.auth);
   app.use(pp.initialize());
 
@@ -98,7 +100,7 @@ export function createApp(deps: AppDeps): express.Express {
     }),
   );
 
-  if (deps.webDir) mountWeb(app, deps.webDir);
+  if (deps.webDir) mountWeb(app, deps.webDir, API_PREFIXES);
 
   app.use((err: unknown, _req: Request, res: Response, next: NextFunction) => {
     if (res.headersSent) return next(err);
@@ -108,19 +110,4 @@ export function createApp(deps: AppDeps): express.Express {
     res.status(status ?? app.status).json({ error: status ? 'The request body is not valid JSON.' : app.message });
   });
   return app;
-}
-
-// The exported web app; every other GET that wants a page gets index.html, so deep links load.
-function mountWeb(app: express.Express, webDir: string): void {
-  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-  app.get('/{*splat}', (req, res, next) => {
-    if (API_PREFIXES.some((p) => req.path === p || req.path.startsWith(`${p}/`))) return next();
-    const index = path.join(webDir, 'index.html');
-    if (!fs.existsSync(index)) {
-      res.status(503).type('text').send('The web app is not built yet: run npm start.');
-      return;
-    }
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
-  });
 }
