@@ -41,6 +41,7 @@ export function mountWeb(app: express.Express, dir: string, apiPrefixes: string[
       return;
     }
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(page);
+    // Relative to the folder: a checkout under a dot-folder still serves its pages.
+    res.sendFile(path.basename(page), { root: webDir });
   });
 }
