@@ -398,6 +398,34 @@ export function renderTable(r: BenchResults): string {
   return lines.join('\n');
 }
 
+/** Before and after, side by side: `bench/baseline.json` (the code before the cures) against this run. */
+export function renderComparison(before: BenchResults, now: BenchResults): string {
+  const [small, large] = [String(now.scales.small), String(now.scales.large)];
+  const n = (v: number) => v.toLocaleString('en-US');
+  const lines = [
+    `| what | before, ${n(before.scales.small)} pianos | now | before, ${n(before.scales.large)} pianos | now |`,
+    '|---|---|---|---|---|',
+  ];
+  for (const name of Object.keys(now.screens)) {
+    const b = before.screens[name] ?? {};
+    const a = now.screens[name];
+    lines.push(`| ${name} | ${screenCell(b[small])} | ${screenCell(a[small])} | ${screenCell(b[large])} | ${screenCell(a[large])} |`);
+  }
+  const ratio = (x?: BenchResults['stockCompare'][string]) => (x ? `**${x.ratio}** (${x.graphqlRps} / ${x.plainRps})${x.cpuRatio != null ? `; CPU **${x.cpuRatio}**` : ''}` : '-');
+  lines.push(`| stock list, GraphQL / plain route, requests/s (and plain / GraphQL CPU per request) | ${ratio(before.stockCompare[small])} | ${ratio(now.stockCompare[small])} | ${ratio(before.stockCompare[large])} | ${ratio(now.stockCompare[large])} |`);
+  type Weights = Record<string, { jsGzipKb: number; jsWireKb: number; jsWireKbUncompressed: number; fontKb: number }>;
+  const bb = before.bundles as Weights | null;
+  const ab = now.bundles as Weights | null;
+  for (const [label, key] of [['staff first load: JS gzipped; JS on the wire; fonts', 'staff'], ['buyer /d/<token>: JS gzipped; JS on the wire; fonts', 'buyer']] as const) {
+    const cell = (x?: Weights[string]) => (x ? `**${x.jsGzipKb} KB**; ${x.jsWireKb} KB; ${x.fontKb} KB` : '-');
+    lines.push(`| ${label} | | | ${cell(bb?.[key])} | ${cell(ab?.[key])} |`);
+  }
+  lines.push(`| disclosure / floor-tag PDF, warm median | | | ${before.pdfs.disclosureMs} / ${before.pdfs.floorTagMs} ms | ${now.pdfs.disclosureMs} / ${now.pdfs.floorTagMs} ms |`);
+  lines.push(`| token check, per request | ${before.tokenCheck.serverUs} us | ${now.tokenCheck.serverUs} us | | |`);
+  lines.push(`| server start to first /healthz, median | ${before.serverStart.medianMs} ms | ${now.serverStart.medianMs} ms | | |`);
+  return lines.join('\n');
+}
+
 export interface BenchResults {
   ranAt: string;
   machine: { cpus: number; node: string };
@@ -500,7 +528,9 @@ async function main(): Promise<void> {
   // A partial run prints its rows but keeps the last full table on disk.
   const out = ONLY.length ? 'bench/results-partial' : 'bench/results';
   fs.writeFileSync(path.join(ROOT, `${out}.json`), `${JSON.stringify(results, null, 2)}\n`);
-  fs.writeFileSync(path.join(ROOT, `${out}.md`), `${table}\n`);
+  const baselineFile = path.join(ROOT, 'bench/baseline.json');
+  const comparison = !ONLY.length && fs.existsSync(baselineFile) ? renderComparison(JSON.parse(fs.readFileSync(baselineFile, 'utf8')) as BenchResults, results) : null;
+  fs.writeFileSync(path.join(ROOT, `${out}.md`), `${table}\n${comparison ? `\nBefore the cures (bench/baseline.json) and now:\n\n${comparison}\n` : ''}`);
   process.stdout.write(`\n${table}\n\nbench took ${results.benchSeconds} s; written to ${out}.json and ${out}.md\n`);
 }
 
