@@ -1,22 +1,27 @@
 import fs from 'node:fs';
 
-import { create as parseFont } from 'fontkit';
 import PDFDocument from 'pdfkit';
 import QRCode from 'qrcode';
 
 import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
 
-// The app's own font, shipped in an npm package, parsed once and subsetted into each PDF: parsing
-// it again per document (its layout tables decoded afresh) took about half of each PDF's time.
-const font = (file: string) => parseFont(fs.readFileSync(require.resolve(file))) as unknown as string;
-const FONT_REGULAR = font('@expo-google-fonts/source-sans-3/400Regular/SourceSans3_400Regular.ttf');
-const FONT_BOLD = font('@expo-google-fonts/source-sans-3/600SemiBold/SourceSans3_600SemiBold.ttf');
+// The app's own font, shipped in an npm package, parsed once (on the first PDF, to keep the server's
+// start quick) and subsetted into each PDF: parsing it again per document took half of each PDF's time.
+let fonts: Promise<{ body: string; bold: string }> | undefined;
+function pdfFonts() {
+  fonts ??= import('fontkit').then(({ create }) => {
+    const font = (file: string) => create(fs.readFileSync(require.resolve(file))) as unknown as string;
+    return { body: font('@expo-google-fonts/source-sans-3/400Regular/SourceSans3_400Regular.ttf'), bold: font('@expo-google-fonts/source-sans-3/600SemiBold/SourceSans3_600SemiBold.ttf') };
+  });
+  return fonts;
+}
 
-function newDoc(title: string): PDFKit.PDFDocument {
+async function newDoc(title: string): Promise<PDFKit.PDFDocument> {
+  const { body, bold } = await pdfFonts();
   // No default font: pdfkit would load and parse Helvetica's metrics for every document, unused.
   const doc = new PDFDocument({ size: 'A4', margin: 50, info: { Title: title, Producer: 'Feltwire' }, font: null as unknown as string });
-  doc.registerFont('body', FONT_REGULAR);
-  doc.registerFont('bold', FONT_BOLD);
+  doc.registerFont('body', body);
+  doc.registerFont('bold', bold);
   doc.font('body');
   return doc;
 }
@@ -43,8 +48,8 @@ export interface SignedCopyMeta {
 }
 
 /** The signed copy: the disclosure as the buyer read it, its version and digest, and both signatures. */
-export function signedCopyPdf(content: DisclosureContent, meta: SignedCopyMeta): Promise<Buffer> {
-  const doc = newDoc(`Condition disclosure ${content.piano.stockNumber} v${meta.version}`);
+export async function signedCopyPdf(content: DisclosureContent, meta: SignedCopyMeta): Promise<Buffer> {
+  const doc = await newDoc(`Condition disclosure ${content.piano.stockNumber} v${meta.version}`);
   const p = content.piano;
   doc.fontSize(10).fillColor('#4a4238').text(`${content.dealerName} · condition disclosure · signed copy`);
   doc.moveDown(0.5).font('bold').fontSize(20).fillColor('#1d1a16').text(`${p.maker}${p.model ? ` ${p.model}` : ''}`);
@@ -92,7 +97,7 @@ function drawQr(doc: PDFKit.PDFDocument, text: string, x: number, y: number, wid
 
 /** The floor tag: stock number, piano, price, and a QR code of the public disclosure link. */
 export async function floorTagPdf(tag: { stockNumber: string; title: string; price: string | null; url: string; dealerName: string }): Promise<Buffer> {
-  const doc = newDoc(`Floor tag ${tag.stockNumber}`);
+  const doc = await newDoc(`Floor tag ${tag.stockNumber}`);
   doc.fontSize(12).fillColor('#4a4238').text(tag.dealerName, { align: 'center' });
   doc.moveDown(0.5).font('bold').fontSize(34).fillColor('#1d1a16').text(tag.stockNumber, { align: 'center' });
   doc.font('body').fontSize(18).text(tag.title, { align: 'center' });
