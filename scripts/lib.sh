@@ -116,7 +116,7 @@ wait_for_port() {
 # Build the web app when its sources changed since the last build.
 build_web_if_changed() {
   local hash stamp="$ROOT/dist/.source-hash"
-  hash=$(cd "$ROOT" && find app modules app.json package-lock.json tsconfig.json -type f ! -path '*/server/*' -print0 | sort -z | xargs -0 sha1sum | sha1sum | cut -c1-40)
+  hash=$(cd "$ROOT" && find app modules app.json package-lock.json tsconfig.json metro.config.js scripts/metro scripts/build-web.sh scripts/build-fonts.ts scripts/finish-web.ts -type f ! -path '*/server/*' -print0 | sort -z | xargs -0 sha1sum | sha1sum | cut -c1-40)
   if [ -f "$stamp" ] && [ "$(cat "$stamp")" = "$hash" ] && [ -f "$ROOT/dist/index.html" ]; then
     log "web app is up to date"
     return 0

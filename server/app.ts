@@ -1,8 +1,7 @@
+import compression from 'compression';
 import express, { type Request } from 'express';
 import { GraphQLError } from 'graphql';
 import type { Knex } from 'knex';
-import fs from 'node:fs';
-import path from 'node:path';
 
 import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
@@ -17,11 +16,14 @@ import { toGraphQLError } from './errors';
 import { securityHeaders } from './headers';
 import type { GraphContext } from './graphql/context';
 import { DOMAINS } from './graphql/domains';
+import { compiledExecution } from './graphql/compiled-execution';
 import { graphqlRoute } from './graphql/http';
+import { plainResponse } from './graphql/plain-response';
 import { buildSchema } from './graphql/schema';
 import { publicWriteLimit } from './rate-limits';
 import { errorHandler, jsonBody, routeNotFound } from './requests';
 import { uploadsRouter } from './uploads';
+import { mountWeb } from './web';
 import type { Mailer } from './mail';
 import { inboxRouter, type MailFake } from './mail-fake';
 import { documentsRouter, publicRouter } from './public-routes';
@@ -60,6 +62,8 @@ export function createApp(deps: AppDeps): express.Express {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.use(securityHeaders(deps.photoOrigin));
+  // Answers go compressed to browsers that take it; the web app's files are compressed ahead of time (server/web.ts).
+  app.use(compression());
   const pp = configurePassport(deps.auth);
   app.use(pp.initialize());
 
@@ -100,13 +104,15 @@ export function createApp(deps: AppDeps): express.Express {
       schema: buildSchema(DOMAINS),
       context: (req: Request) => ({ user: req.user as User, photos: deps.photos, disclosure, deposits }),
       formatError,
+      execute: compiledExecution(),
+      onOperation: plainResponse,
     }),
   ];
   app.get('/graphql', graphql);
   app.post('/graphql', graphql);
   app.use(API_PREFIXES, routeNotFound);
 
-  if (deps.webDir) mountWeb(app, deps.webDir);
+  if (deps.webDir) mountWeb(app, deps.webDir, API_PREFIXES);
   app.use(errorHandler);
   return app;
 }
@@ -122,19 +128,4 @@ function formatError(err: Readonly<GraphQLError | Error>): GraphQLError {
   }
   if (!err.path && !err.extensions?.code) return new GraphQLError(err.message, { nodes: err.nodes, extensions: { ...err.extensions, code: 'BAD_INPUT' } });
   return err;
-}
-
-// The exported web app; every other GET that wants a page gets index.html, so deep links load.
-function mountWeb(app: express.Express, webDir: string): void {
-  app.use(express.static(webDir, { index: false, maxAge: '1h' }));
-  app.get('/{*splat}', (req, res, next) => {
-    if (API_PREFIXES.some((p) => req.path === p || req.path.startsWith(`${p}/`))) return next();
-    const index = path.join(webDir, 'index.html');
-    if (!fs.existsSync(index)) {
-      res.status(503).type('text').send('The web app is not built yet: run npm start.');
-      return;
-    }
-    res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
-  });
 }

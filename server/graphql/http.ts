@@ -16,9 +16,10 @@ import {
   type ValidationContext,
   type ValidationRule,
 } from 'graphql';
-import { createHandler, type OperationContext } from 'graphql-http';
+import { createHandler, type HandlerOptions, type OperationContext } from 'graphql-http';
 import { createComplexityRule, type ComplexityEstimator } from 'graphql-query-complexity';
 
+import { documentCache } from './document-cache';
 import { DEFAULT_PAGE_SIZE, MAX_QUERY_DEPTH, NESTED_LIST_ROWS, QUERY_LIMITS, ROOT_FIELD_COST } from './limits';
 
 const limitError = (message: string) => new GraphQLError(message, { extensions: { code: 'BAD_INPUT' } });
@@ -65,8 +66,8 @@ function limitRules(variables: Record<string, unknown> | undefined): ValidationR
  * graphql-js's own rules first, fragment cycles among them: the limit rules walk fragments and would
  * recurse forever through a cycle, so they run only on a document that is otherwise valid.
  */
-function validateInOrder(schema: GraphQLSchema, document: DocumentNode, rules: readonly ValidationRule[] = []): readonly GraphQLError[] {
-  const invalid = validate(schema, document, specifiedRules);
+function validateInOrder(schema: GraphQLSchema, document: DocumentNode, rules: readonly ValidationRule[] = [], checkSpecified = (d: DocumentNode) => validate(schema, d, specifiedRules)): readonly GraphQLError[] {
+  const invalid = checkSpecified(document);
   if (invalid.length) return invalid;
   try {
     return validate(schema, document, rules.filter((r) => !specifiedRules.includes(r)));
@@ -97,6 +98,8 @@ interface GraphRouteOptions<Context extends OperationContext> {
   schema: GraphQLSchema;
   context: (req: Request) => Context;
   formatError: (err: Readonly<GraphQLError | Error>) => GraphQLError;
+  execute?: HandlerOptions<Request, undefined, Context>['execute'];
+  onOperation?: HandlerOptions<Request, undefined, Context>['onOperation'];
 }
 
 const refusal = (message: string) => JSON.stringify({ errors: [{ message, extensions: { code: 'BAD_INPUT' } }] });
@@ -108,14 +111,20 @@ const NO_BODY: Record<number, string> = {
 
 /** POST /graphql (and GET for queries) through graphql-http, with every refusal a 4xx and a message. */
 export function graphqlRoute<Context extends OperationContext>(opts: GraphRouteOptions<Context>) {
+  // The screens send the same few documents again and again: each is parsed and meets graphql-js's own
+  // rules once; the limits run on every request, since the cost depends on the variables.
+  const cache = documentCache(undefined, parseDocument);
+  const checkSpecified = (document: DocumentNode) => cache.validate(opts.schema, document, specifiedRules);
   const handle = createHandler<Request, undefined, Context>({
     schema: opts.schema,
     context: (req) => opts.context(req.raw),
-    parse: (source) => parseDocument(source as string),
+    parse: (source) => cache.parse(source as string),
     // The rules are chosen here, with the variables the cost depends on; validate below orders them.
     validationRules: (_req, args) => limitRules(args.variableValues as Record<string, unknown> | undefined),
-    validate: validateInOrder,
+    validate: (schema, document, rules) => validateInOrder(schema, document, rules, checkSpecified),
     formatError: opts.formatError,
+    execute: opts.execute,
+    onOperation: opts.onOperation,
   });
   return async (req: Request, res: Response, next: NextFunction) => {
     if (req.method === 'POST' && !req.is('application/json')) {

@@ -80,7 +80,7 @@ it('a technician works an item of FW-0005 at the bench on a phone', async () => 
   await shot(page, 'shop-e2e-item-done');
   await page.goto(`${baseUrl()}/bench`);
   await page.getByTestId('home-heading').first().waitFor();
-  await page.locator('[data-testid^="queue-item-"], [data-testid="queue-empty"]').first().waitFor();
+  await page.locator('[data-testid^="queue-item-"], [data-testid="queue-empty"], [data-testid="queue-scope-empty"]').first().waitFor();
   await expect(page.getByTestId(`queue-item-${itemId}`).count()).resolves.toBe(0);
   await page.close();
 });

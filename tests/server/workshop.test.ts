@@ -152,8 +152,12 @@ describe('the bench', () => {
   });
 
   it('shows a technician their items and the unassigned ones, most urgent first, with cautions', async () => {
-    const queue = (await call('technician', '{ workQueue }')).workQueue.filter((i: Json) => i.pianoId === pianoId);
-    expect(queue.map((i: Json) => i.id)).toEqual([items[0].id, ...items.slice(1).map((i) => i.id)]);
+    const mine = (await call('technician', '{ workQueue }')).workQueue;
+    expect(mine.scope).toBe('mine');
+    const waiting = (await call('technician', '{ workQueue(scope: "unassigned", limit: 200) }')).workQueue;
+    expect(mine.items.filter((i: Json) => i.pianoId === pianoId).map((i: Json) => i.id)).toEqual([items[0].id]);
+    expect(waiting.items.filter((i: Json) => i.pianoId === pianoId).map((i: Json) => i.id)).toEqual(items.slice(1).map((i) => i.id));
+    const queue = [...mine.items, ...waiting.items].filter((i: Json) => i.pianoId === pianoId);
     expect(queue[0]).toMatchObject({ priority: 1, dueOn: '2026-12-10', assignedTo: 'Tomas Reyval' });
     const pitch = queue.find((i: Json) => i.task === 'fine_tuning' || i.task === 'pitch_raise');
     expect(pitch).toBeDefined();
@@ -182,7 +186,7 @@ describe('the bench', () => {
     const plan = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan;
     const voicing = plan.byTask.find((t: Json) => t.task === 'reshape_voice_hammers');
     expect(voicing).toEqual({ task: 'reshape_voice_hammers', estimatedHours: 4, loggedHours: 5.5, estimatedCostMinor: 39500, actualCostMinor: 53250, varianceMinor: 13750 });
-    const over = (await call('manager', '{ workshopOverruns }')).workshopOverruns;
+    const over = (await call('manager', '{ workshopOverruns }')).workshopOverruns.overruns;
     // the voicing item alone is over; items not started yet do not hide it
     expect(over.find((o: Json) => o.pianoId === pianoId)).toMatchObject({ overrunMinor: 13750, itemsOver: ['Reshape and voice hammers'] });
   });

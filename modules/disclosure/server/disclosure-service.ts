@@ -101,7 +101,8 @@ async function contentFor(pianoId: number): Promise<DisclosureContent> {
   });
 }
 
-function renderHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
+/** The published page of one version, as it is frozen with it. */
+export function renderDisclosureHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
   return DISCLOSURE_HTML({ content, paper: paperView(content), version, digest, publishedOn: paperDay(publishedAt), price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null) });
 }
 
@@ -128,7 +129,7 @@ export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pian
     if (latest && latest.digest === digest) return { version: latest.version, digest, token: link.token, url, publishedAt: latest.publishedAt, unchanged: true };
     const version = (latest?.version ?? 0) + 1;
     const publishedAt = new Date().toISOString();
-    await Disclosure.query(trx).insert({ pianoId, version, content, html: renderHtml(content, version, digest, publishedAt), digest, publishedById: actor.id, publishedAt });
+    await Disclosure.query(trx).insert({ pianoId, version, content, html: renderDisclosureHtml(content, version, digest, publishedAt), digest, publishedById: actor.id, publishedAt });
     return { version, digest, token: link.token, url, publishedAt, unchanged: false };
   });
 }

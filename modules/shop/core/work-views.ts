@@ -28,3 +28,18 @@ export interface QueueItem extends WorkItemView {
   stockNumber: string;
   piano: string;
 }
+
+/** Which open items the bench lists: the technician's own, those nobody has taken, or every one (managers). */
+export const QUEUE_SCOPES = ['mine', 'unassigned', 'all'] as const;
+export type QueueScope = (typeof QUEUE_SCOPES)[number];
+/** Items the bench shows at a time. */
+export const QUEUE_PAGE = 30;
+
+/** One page of the bench: its items, how many each scope holds, and the timer the reader has running. */
+export interface QueuePage {
+  scope: QueueScope;
+  total: number;
+  counts: Record<QueueScope, number>;
+  items: QueueItem[];
+  running: { id: number; title: string; stockNumber: string } | null;
+}

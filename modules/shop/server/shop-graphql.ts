@@ -49,10 +49,20 @@ export const shopGraph: GraphDomain = {
   ],
   queries: () => ({
     rateCard: { type: json.type, resolve: () => currentRateCard() },
-    workQueue: { type: jsonList, description: 'Your items and the unassigned ones, by priority and due date.', resolve: (_r, _a, ctx) => workQueue(ctx.user) },
+    workQueue: {
+      type: json.type,
+      description: 'A page of open items on pianos in the workshop, by priority and due date: yours, the unassigned ones, or (managers) all. { scope, total, counts, items, running }.',
+      args: { scope: { type: GraphQLString }, limit: { type: GraphQLInt }, offset: { type: GraphQLInt } },
+      resolve: (_r, a: { scope?: string | null; limit?: number | null; offset?: number | null }, ctx) => workQueue(ctx.user, a),
+    },
     workItemDetail: { type: json.type, args: { itemId: int }, resolve: (_r, a: { itemId: number }, ctx) => itemDetail(ctx.user, a.itemId) },
     workPlan: { type: GraphQLJSON, args: { pianoId: int }, resolve: (_r, a: { pianoId: number }, ctx) => planView(ctx.user, a.pianoId) },
-    workshopOverruns: { type: jsonList, resolve: (_r, _a, ctx) => overruns(ctx.user) },
+    workshopOverruns: {
+      type: json.type,
+      description: 'Pianos whose items cost more than their estimates, worst first, a page at a time: { total, overruns }.',
+      args: { limit: { type: GraphQLInt }, offset: { type: GraphQLInt } },
+      resolve: (_r, a: { limit?: number | null; offset?: number | null }, ctx) => overruns(ctx.user, a),
+    },
     climateReadings: { type: jsonList, resolve: (_r, _a, ctx) => recentClimate(ctx.user) },
   }),
   mutations: (typeOf) => ({

@@ -13,10 +13,11 @@ import { cautionsFor } from '@/modules/shop/core/cautions';
 import { readClimate } from '@/modules/shop/core/climate';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { roundMinor } from '@/modules/shop/core/money';
-import type { QueueItem, WorkItemView } from '@/modules/shop/core/work-views';
+import { QUEUE_PAGE, QUEUE_SCOPES, type QueuePage, type QueueScope, type WorkItemView } from '@/modules/shop/core/work-views';
 import { demoRateCard, rateCardInput, type RateCard } from '@/modules/shop/core/rate-card';
 import { climateInput, DECISIONS, doneInput, SELL_AS_IS_REASON_MIN, partUseInput, timeCorrectionInput, timeEntryInput, workItemInput, workItemPatch, type Decision } from '@/modules/shop/core/work-input';
 import { nextVersion } from '@/server/db/versions';
+import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from '@/server/graphql/limits';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, TimeEntryCorrection, WorkItem, WorkNote, WorkPlan } from './shop-models';
@@ -316,7 +317,7 @@ function minutesOf(entries: TimeEntry[], now: number): number {
 
 export type ItemView = WorkItemView;
 
-async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) => number): Promise<ItemView[]> {
+async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number, itemId: number) => number): Promise<ItemView[]> {
   if (!items.length) return [];
   const ids = items.map((i) => i.id);
   const [entries, parts, users] = await Promise.all([
@@ -330,7 +331,7 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
     const mine = entries.filter((e) => e.workItemId === i.id);
     const loggedMinutes = minutesOf(mine, now);
     const partsMinor = parts.filter((p) => p.workItemId === i.id).reduce((s, p) => s + p.costMinor * p.quantity, 0);
-    const rate = hourlyRateMinor(i.pianoId);
+    const rate = hourlyRateMinor(i.pianoId, i.id);
     return {
       id: i.id,
       pianoId: i.pianoId,
@@ -355,24 +356,63 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number) =
   });
 }
 
-/** A technician's queue: their items and the unassigned ones on pianos in the workshop, by priority and due date. */
-export async function workQueue(actor: Actor): Promise<QueueItem[]> {
+/**
+ * One page of the bench, by priority and due date: the reader's own items, the unassigned ones, or
+ * (for managers) every open item on pianos in the workshop. A fixed number of statements per page.
+ */
+export async function workQueue(actor: Actor, raw: { scope?: string | null; limit?: number | null; offset?: number | null } = {}): Promise<QueuePage> {
   requireRole(actor, atBench, 'see the work queue');
-  const q = WorkItem.query()
+  const manager = isManager(actor);
+  const scope = (raw.scope ?? (manager ? 'all' : 'mine')) as QueueScope;
+  if (!QUEUE_SCOPES.includes(scope)) throw badInput('scope', `must be one of ${QUEUE_SCOPES.join(', ')}`);
+  if (scope === 'all' && !manager) throw notAllowed('see every open item in the workshop');
+  const limit = raw.limit ?? QUEUE_PAGE;
+  const offset = raw.offset ?? 0;
+  if (!Number.isInteger(limit) || limit < 1 || limit > MAX_PAGE_SIZE) throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
+  if (!Number.isInteger(offset) || offset < 0) throw badInput('offset', 'must be 0 or more');
+
+  const knex = WorkItem.knex();
+  const counted = (await knex('work_items')
     .join('pianos', 'pianos.id', 'work_items.piano_id')
     .where('pianos.stage', 'in_workshop')
     .whereNot('work_items.status', 'done')
+    .select(
+      knex.raw('count(*) filter (where work_items.assigned_to_id = ?) as mine', [actor.id]),
+      knex.raw('count(*) filter (where work_items.assigned_to_id is null) as unassigned'),
+      knex.raw('count(*) as "all"'),
+    )
+    .first()) as Record<QueueScope, number>;
+  const counts = { mine: Number(counted.mine), unassigned: Number(counted.unassigned), all: Number(counted.all) };
+
+  const q = WorkItem.query()
+    .join('pianos', 'pianos.id', 'work_items.piano_id')
+    .join('work_plans', 'work_plans.id', 'work_items.plan_id')
+    .where('pianos.stage', 'in_workshop')
+    .whereNot('work_items.status', 'done')
     .orderBy([{ column: 'work_items.priority' }, { column: 'work_items.due_on', nulls: 'last' }, { column: 'work_items.id' }])
-    .select('work_items.*');
-  if (actor.role === 'technician') q.where((w) => w.where('work_items.assigned_to_id', actor.id).orWhereNull('work_items.assigned_to_id'));
-  const items = await q;
-  const plans = await WorkPlan.query().whereIn('piano_id', [...new Set(items.map((i) => i.pianoId))]);
-  const pianos = await Piano.query().whereIn('id', [...new Set(items.map((i) => i.pianoId))]);
-  const views = await itemViews(items, (id) => plans.find((p) => p.pianoId === id)?.hourlyRateMinor ?? 0);
-  return views.map((v) => {
-    const p = pianos.find((x) => x.id === v.pianoId)!;
-    return { ...v, stockNumber: p.stockNumber, piano: [p.maker, p.model].filter(Boolean).join(' ') };
-  });
+    .limit(limit)
+    .offset(offset)
+    .select('work_items.*', 'pianos.stock_number', 'pianos.maker', 'pianos.model', 'work_plans.hourly_rate_minor');
+  if (scope === 'mine') q.where('work_items.assigned_to_id', actor.id);
+  if (scope === 'unassigned') q.whereNull('work_items.assigned_to_id');
+  const items = (await q) as (WorkItem & { stockNumber: string; maker: string; model: string | null; hourlyRateMinor: number })[];
+  const rates = new Map(items.map((i) => [i.id, i.hourlyRateMinor]));
+  const views = await itemViews(items, (_pianoId, itemId) => rates.get(itemId) ?? 0);
+  const running = (await TimeEntry.query()
+    .join('work_items', 'work_items.id', 'time_entries.work_item_id')
+    .join('pianos', 'pianos.id', 'work_items.piano_id')
+    .where('time_entries.technician_id', actor.id)
+    .whereNull('time_entries.ended_at')
+    .whereNull('time_entries.minutes')
+    .select('work_items.id', 'work_items.title', 'pianos.stock_number')
+    .first()) as unknown as { id: number; title: string; stockNumber: string } | undefined;
+  return {
+    scope,
+    total: counts[scope],
+    counts,
+    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: [items[n].maker, items[n].model].filter(Boolean).join(' ') })),
+    running: running ? { id: running.id, title: running.title, stockNumber: running.stockNumber } : null,
+  };
 }
 
 export interface PlanView {
@@ -425,24 +465,102 @@ export async function planView(actor: Actor, pianoId: number): Promise<PlanView 
   };
 }
 
+export interface Overrun {
+  pianoId: number;
+  stockNumber: string;
+  stage: string;
+  overrunMinor: number;
+  itemsOver: string[];
+  estimatedHours: number;
+  loggedHours: number;
+  estimatedCostMinor: number;
+  actualCostMinor: number;
+  varianceMinor: number;
+  currency: string;
+}
+
+// Each item's estimate and cost so far, priced as itemViews prices them (half away from zero per item),
+// then each piano's totals and overrun: the sums first, so only one page of pianos gathers item titles.
+const PIANO_OVERRUNS = `
+  with logged as (
+    select work_item_id, sum(coalesce(minutes, round(extract(epoch from (coalesce(ended_at, now()) - started_at)) / 60)::int)) as minutes
+    from time_entries group by work_item_id
+  ), parts as (
+    select work_item_id, sum(cost_minor * quantity) as minor from part_uses group by work_item_id
+  ), costed as (
+    select wi.id, wi.piano_id, wi.title, wi.priority, wi.estimated_hours, wp.currency,
+      coalesce(l.minutes, 0) as logged_minutes,
+      round(wi.estimated_hours * wp.hourly_rate_minor) + wi.estimated_parts_minor as estimated_cost,
+      round(coalesce(l.minutes, 0) * wp.hourly_rate_minor / 60.0) + coalesce(pt.minor, 0) as actual_cost
+    from work_plans wp
+    join work_items wi on wi.plan_id = wp.id
+    left join logged l on l.work_item_id = wi.id
+    left join parts pt on pt.work_item_id = wi.id
+    where wp.approved_at is not null
+  ), per_piano as (
+    select piano_id, min(currency) as currency, sum(greatest(actual_cost - estimated_cost, 0)) as overrun_minor,
+      sum(estimated_hours) as estimated_hours, sum(logged_minutes) as logged_minutes,
+      sum(estimated_cost) as estimated_cost, sum(actual_cost) as actual_cost
+    from costed group by piano_id
+  )`;
+
+interface OverrunRow {
+  piano_id: number;
+  stock_number: string;
+  stage: string;
+  currency: string;
+  overrun_minor: number;
+  items_over: string[];
+  estimated_hours: number;
+  logged_minutes: number;
+  estimated_cost: number;
+  actual_cost: number;
+  total: number;
+}
+
 /**
- * The manager's list of pianos whose workshop work runs over, worst first. While work goes on, the
- * overrun is what items already cost beyond their own estimates; items not started do not offset it.
+ * The manager's list of pianos whose workshop work runs over, worst first, a page at a time. While work
+ * goes on, the overrun is what items already cost beyond their own estimates; items not started do not
+ * offset it. One statement, whatever the number of plans (two past the last page, to count them).
  */
-export async function overruns(actor: Actor): Promise<{ pianoId: number; stockNumber: string; stage: string; overrunMinor: number; itemsOver: string[]; estimatedCostMinor: number; actualCostMinor: number; varianceMinor: number; currency: string }[]> {
+export async function overruns(actor: Actor, page: { limit?: number | null; offset?: number | null } = {}): Promise<{ total: number; overruns: Overrun[] }> {
   requireRole(actor, isManager, 'see workshop overruns');
-  const plans = await WorkPlan.query().whereNotNull('approved_at');
-  const out = [];
-  for (const plan of plans) {
-    const view = (await planView(actor, plan.pianoId))!;
-    const over = view.items.filter((i) => i.actualCostMinor > i.estimatedCostMinor);
-    if (over.length) {
-      const piano = (await Piano.query().findById(plan.pianoId))!;
-      const overrunMinor = over.reduce((s, i) => s + i.actualCostMinor - i.estimatedCostMinor, 0);
-      out.push({ pianoId: plan.pianoId, stockNumber: piano.stockNumber, stage: piano.stage, overrunMinor, itemsOver: over.map((i) => i.title), ...view.totals, currency: plan.currency });
-    }
-  }
-  return out.sort((a, b) => b.overrunMinor - a.overrunMinor);
+  const limit = page.limit ?? DEFAULT_PAGE_SIZE;
+  const offset = page.offset ?? 0;
+  if (!Number.isInteger(limit) || limit < 1 || limit > MAX_PAGE_SIZE) throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
+  if (!Number.isInteger(offset) || offset < 0) throw badInput('offset', 'must be 0 or more');
+  const knex = WorkPlan.knex();
+  const { rows } = await knex.raw(
+    `${PIANO_OVERRUNS}, page as (
+      select *, count(*) over () as total from per_piano where overrun_minor > 0
+      order by overrun_minor desc, piano_id limit ? offset ?
+    ), over_items as (
+      select piano_id, array_agg(title order by priority, id) as items_over from costed
+      where actual_cost > estimated_cost and piano_id in (select piano_id from page) group by piano_id
+    )
+    select page.*, p.stock_number, p.stage, o.items_over
+    from page join pianos p on p.id = page.piano_id join over_items o on o.piano_id = page.piano_id
+    order by page.overrun_minor desc, page.piano_id`,
+    [limit, offset],
+  );
+  const list = rows as OverrunRow[];
+  const total = list.length ? list[0].total : offset === 0 ? 0 : Number((await knex.raw(`${PIANO_OVERRUNS} select count(*) as n from per_piano where overrun_minor > 0`)).rows[0].n);
+  return {
+    total,
+    overruns: list.map((r) => ({
+      pianoId: r.piano_id,
+      stockNumber: r.stock_number,
+      stage: r.stage,
+      overrunMinor: r.overrun_minor,
+      itemsOver: r.items_over,
+      estimatedHours: r.estimated_hours,
+      loggedHours: hoursOf(r.logged_minutes),
+      estimatedCostMinor: r.estimated_cost,
+      actualCostMinor: r.actual_cost,
+      varianceMinor: r.actual_cost - r.estimated_cost,
+      currency: r.currency,
+    })),
+  };
 }
 
 export async function itemDetail(actor: Actor, itemId: number) {

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
@@ -6,6 +7,7 @@ import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { EmptyState } from '@/modules/theme/ui/empty-state';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
+import { Pager } from '@/modules/theme/ui/pager';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { rowTable, TableHead } from '@/modules/theme/ui/row-table';
 import { Screen } from '@/modules/theme/ui/screen';
@@ -15,7 +17,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { RoleGate } from './components/role-gate';
 import { VarianceTag } from './components/variance-tag';
-import { useOverruns, type Overrun } from './use-overruns';
+import { OVERRUNS_PAGE, useOverruns, type Overrun } from './use-overruns';
 import { money } from './work-format';
 
 const COLS = [
@@ -40,7 +42,10 @@ export function OverrunsScreen() {
 
 function Overruns() {
   const wide = useWide();
-  const { overruns, error } = useOverruns();
+  const [offset, setOffset] = useState(0);
+  const { overruns, total, fetching, error } = useOverruns(offset);
+  // A page that emptied (work was re-estimated meanwhile) goes back to the worst.
+  if (overruns && !overruns.length && offset > 0) setOffset(0);
   const problem = graphProblem(error);
   return (
     <Screen
@@ -68,22 +73,25 @@ function Overruns() {
           Every item so far has cost no more than its estimate.
         </EmptyState>
       ) : (
-        <View style={wide ? rowTable.table : undefined} testID="overruns-list">
-          {wide ? <TableHead columns={COLS} /> : null}
-          <View role="list" style={wide ? undefined : rowTable.cards}>
-            {overruns.map((o, i) => (
-              <View role="listitem" key={o.pianoId}>
-                <LinkPressable
-                  href={`/workshop/pianos/${o.pianoId}`}
-                  accessibilityLabel={rowLabel(o)}
-                  testID={`overrun-${o.pianoId}`}
-                  insetFocus={wide}
-                  style={({ hovered }) => [wide ? [rowTable.row, styles.row] : rowTable.card, wide && i > 0 && rowTable.rule, hovered && rowTable.hover]}
-                >
-                  {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
-                </LinkPressable>
-              </View>
-            ))}
+        <View style={styles.listWrap}>
+          <Pager offset={offset} shown={overruns.length} total={total} pageSize={OVERRUNS_PAGE} onOffset={setOffset} noun="pianos" busy={fetching} testID="overruns-pager" />
+          <View style={wide ? rowTable.table : undefined} testID="overruns-list">
+            {wide ? <TableHead columns={COLS} /> : null}
+            <View role="list" style={wide ? undefined : rowTable.cards}>
+              {overruns.map((o, i) => (
+                <View role="listitem" key={o.pianoId}>
+                  <LinkPressable
+                    href={`/workshop/pianos/${o.pianoId}`}
+                    accessibilityLabel={rowLabel(o)}
+                    testID={`overrun-${o.pianoId}`}
+                    insetFocus={wide}
+                    style={({ hovered }) => [wide ? [rowTable.row, styles.row] : rowTable.card, wide && i > 0 && rowTable.rule, hovered && rowTable.hover]}
+                  >
+                    {wide ? <WideRow o={o} /> : <PhoneCard o={o} />}
+                  </LinkPressable>
+                </View>
+              ))}
+            </View>
           </View>
         </View>
       )}
@@ -127,6 +135,7 @@ function PhoneCard({ o }: { o: Overrun }) {
 }
 
 const styles = StyleSheet.create({
+  listWrap: { gap: SPACE.md },
   row: { minHeight: 64 },
   cardTop: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: SPACE.sm },
 });

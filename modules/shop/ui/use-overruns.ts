@@ -16,10 +16,17 @@ export interface Overrun {
   currency: string;
 }
 
-export const OVERRUNS_QUERY = 'query WorkshopOverruns { workshopOverruns }';
+export const OVERRUNS_QUERY = 'query WorkshopOverruns($limit: Int, $offset: Int) { workshopOverruns(limit: $limit, offset: $offset) }';
+export const OVERRUNS_PAGE = 50;
 
-/** Pianos whose workshop items cost more than their estimates, worst first. */
-export function useOverruns() {
-  const [result] = useQuery<{ workshopOverruns: Overrun[] }>({ query: OVERRUNS_QUERY, context: SHOP_CONTEXT, requestPolicy: 'cache-and-network' });
-  return { overruns: result.data?.workshopOverruns ?? null, error: result.error };
+/** Pianos whose workshop items cost more than their estimates, worst first, a page at a time. */
+export function useOverruns(offset = 0) {
+  const [result] = useQuery<{ workshopOverruns: { total: number; overruns: Overrun[] } }>({
+    query: OVERRUNS_QUERY,
+    variables: { limit: OVERRUNS_PAGE, offset },
+    context: SHOP_CONTEXT,
+    requestPolicy: 'cache-and-network',
+  });
+  const page = result.data?.workshopOverruns;
+  return { overruns: page?.overruns ?? null, total: page?.total ?? 0, fetching: result.fetching, error: result.error };
 }

@@ -1,0 +1,55 @@
+// What each main screen asks the server, taken from the screens' own hooks, so the bench and the
+// statement-count tests send exactly what a browser sends.
+import { COUNTS_QUERY, PAGE_SIZE, pianoListQuery } from '@/modules/pianos/ui/use-pianos';
+import { PIANO_QUERY } from '@/modules/pianos/ui/use-piano';
+import { disclosureApi } from '@/modules/disclosure/ui/public-disclosure';
+import { OVERRUNS_PAGE, OVERRUNS_QUERY } from '@/modules/shop/ui/use-overruns';
+import { WORK_PLAN_QUERY } from '@/modules/shop/ui/use-work-plan';
+import { FIRST_QUEUE_VARIABLES, WORK_QUEUE_QUERY } from '@/modules/shop/ui/use-work-queue';
+
+export interface ScreenRequest {
+  name: string;
+  method: 'GET' | 'POST';
+  path: string;
+  headers: Record<string, string>;
+  body?: string;
+}
+
+export interface GraphDocument {
+  name: string;
+  role: 'manager' | 'technician';
+  query: string;
+  variables?: Record<string, unknown>;
+}
+
+export interface Targets {
+  /** A piano in the workshop, with a plan, an assessment and a history. */
+  pianoId: number;
+  /** The public link of a piano on the floor. */
+  disclosureToken: string;
+}
+
+/** The GraphQL documents of the main screens, with the variables the screens send. */
+export function screenDocuments(t: Targets): GraphDocument[] {
+  return [
+    { name: 'stock list', role: 'manager', query: pianoListQuery(null, 'newest'), variables: { limit: PAGE_SIZE, offset: 0 } },
+    { name: 'piano page', role: 'manager', query: PIANO_QUERY, variables: { id: t.pianoId } },
+    { name: 'bench queue (technician)', role: 'technician', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },
+    { name: 'bench queue (manager)', role: 'manager', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },
+    { name: 'work plan', role: 'manager', query: WORK_PLAN_QUERY, variables: { pianoId: t.pianoId } },
+    { name: 'overruns', role: 'manager', query: OVERRUNS_QUERY, variables: { limit: OVERRUNS_PAGE, offset: 0 } },
+    { name: 'stage counts', role: 'manager', query: COUNTS_QUERY },
+  ];
+}
+
+/** The public disclosure page's one request, as the buyer's phone sends it. */
+export const publicDisclosurePath = (token: string) => disclosureApi(token);
+
+const json = (token: string) => ({ 'content-type': 'application/json', accept: 'application/json', authorization: `Bearer ${token}` });
+
+export function screenRequests(tokens: Record<GraphDocument['role'], string>, t: Targets): { screens: ScreenRequest[]; stockGraphql: ScreenRequest; stockPlain: ScreenRequest } {
+  const graph = screenDocuments(t).map<ScreenRequest>((d) => ({ name: d.name, method: 'POST', path: '/graphql', headers: json(tokens[d.role]), body: JSON.stringify({ query: d.query, variables: d.variables }) }));
+  const disclosure: ScreenRequest = { name: 'public disclosure', method: 'GET', path: publicDisclosurePath(t.disclosureToken), headers: { accept: 'application/json' } };
+  const stockGraphql = graph[0];
+  return { screens: [...graph, disclosure], stockGraphql, stockPlain: { ...stockGraphql, name: 'stock list (plain route)', path: '/__bench/stock' } };
+}

@@ -1,0 +1,3 @@
+export const FONT_FILES: string[];
+export const SUBSET_RANGES: [number, number][];
+export function subsetFontPath(root: string, file: string): string;
