@@ -11,6 +11,7 @@ import {
   parse,
   specifiedRules,
   validate,
+  visit,
   type DocumentNode,
   type GraphQLSchema,
   type ValidationContext,
@@ -45,6 +46,26 @@ const estimateCost: ComplexityEstimator = ({ type, field, args, childComplexity 
   if (!introspection && isListType(getNullableType(field.type)) && isCompositeType(getNamedType(field.type))) return base + rowsOf(args, root, field.extensions?.maxRows) * Math.max(1, childComplexity);
   return base + childComplexity;
 };
+
+const MAX_RULE_SETS_PER_DOCUMENT = 64;
+const ROW_ARGUMENTS = new Set(['limit', 'range']);
+const rowVariableNames = new WeakMap<DocumentNode, string[]>();
+
+/** The variables a document passes as the rows it asks for: the only ones its estimated cost reads. */
+function rowVariables(document: DocumentNode): string[] {
+  let names = rowVariableNames.get(document);
+  if (!names) {
+    const found = new Set<string>();
+    visit(document, {
+      Argument(node) {
+        if (!ROW_ARGUMENTS.has(node.name.value)) return;
+        visit(node.value, { Variable: (v) => void found.add(v.name.value) });
+      },
+    });
+    rowVariableNames.set(document, (names = [...found].sort()));
+  }
+  return names;
+}
 
 function limitRules(variables: Record<string, unknown> | undefined): ValidationRule[] {
   return [
@@ -115,13 +136,34 @@ export function graphqlRoute<Context extends OperationContext>(opts: GraphRouteO
   // rules once; the limits run on every request, since the cost depends on the variables.
   const cache = documentCache(undefined, parseDocument);
   const checkSpecified = (document: DocumentNode) => cache.validate(opts.schema, document, specifiedRules);
+  // The limits depend on the variables only through the rows asked for: one set of rules, and one
+  // answer, per document and those values.
+  const ruleSets = new WeakMap<DocumentNode, Map<string, ValidationRule[]>>();
+  const answers = new WeakMap<readonly ValidationRule[], readonly GraphQLError[]>();
+  const rulesFor = (document: DocumentNode, variables: Record<string, unknown> | undefined) => {
+    let sets = ruleSets.get(document);
+    if (!sets) ruleSets.set(document, (sets = new Map()));
+    const key = JSON.stringify(rowVariables(document).map((name) => variables?.[name] ?? null));
+    let rules = sets.get(key);
+    if (!rules) {
+      if (sets.size >= MAX_RULE_SETS_PER_DOCUMENT) sets.clear();
+      sets.set(key, (rules = limitRules(variables)));
+    }
+    return rules;
+  };
   const handle = createHandler<Request, undefined, Context>({
     schema: opts.schema,
     context: (req) => opts.context(req.raw),
     parse: (source) => cache.parse(source as string),
     // The rules are chosen here, with the variables the cost depends on; validate below orders them.
-    validationRules: (_req, args) => limitRules(args.variableValues as Record<string, unknown> | undefined),
-    validate: (schema, document, rules) => validateInOrder(schema, document, rules, checkSpecified),
+    validationRules: (_req, args) => rulesFor(args.document, args.variableValues as Record<string, unknown> | undefined),
+    validate: (schema, document, rules) => {
+      const known = rules && answers.get(rules);
+      if (known) return known;
+      const errors = validateInOrder(schema, document, rules, checkSpecified);
+      if (rules) answers.set(rules, errors);
+      return errors;
+    },
     formatError: opts.formatError,
     execute: opts.execute,
     onOperation: opts.onOperation,
