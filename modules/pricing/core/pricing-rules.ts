@@ -96,7 +96,8 @@ const bands = <T extends z.ZodTypeAny>(item: T, key: 'upToCm' | 'upToYears' | 'u
     .array(item)
     .min(1, 'needs at least one band')
     .max(12, 'has at most 12 bands')
-    .superRefine((list: Record<string, number | null>[], ctx) => {
+    .superRefine((items, ctx) => {
+      const list = items as Record<string, number | null>[];
       list.forEach((b, n) => {
         const last = n === list.length - 1;
         if (last && b[key] != null) ctx.addIssue({ code: 'custom', path: [n, key], message: 'the last band has no upper limit (null)' });
