@@ -18,24 +18,23 @@ const READINESS_ORDER = pgArray(READINESS);
 const STAGE_ORDER = pgArray(STAGES);
 
 // Every column a sort can name, as an SQL expression over the row (`f` the piano, `m` its money).
-const SORT_SQL: Record<StockSort, string> = {
-  stockNumber: 'f.stock_number',
-  makerModel: "lower(f.maker), lower(coalesce(f.model, ''))",
-  kindSize: 'f.kind, f.size_cm',
-  stage: `array_position('${STAGE_ORDER}'::text[], f.stage)`,
-  daysInStock: 'f.days_in_stock',
-  readiness: `array_position('${READINESS_ORDER}'::text[], f.readiness)`,
-  askingPrice: 'f.asking_price_minor',
-  reconEstimate: 'm.recon_estimate_minor',
-  reconActual: 'm.recon_actual_minor',
-  costBasis: 'm.cost_basis_minor',
-  margin: 'm.margin_minor',
+const SORT_SQL: Record<StockSort, string[]> = {
+  stockNumber: ['f.stock_number'],
+  makerModel: ['lower(f.maker)', "lower(coalesce(f.model, ''))"],
+  kindSize: ['f.kind', 'f.size_cm'],
+  stage: [`array_position('${STAGE_ORDER}'::text[], f.stage)`],
+  daysInStock: ['f.days_in_stock'],
+  readiness: [`array_position('${READINESS_ORDER}'::text[], f.readiness)`],
+  askingPrice: ['f.asking_price_minor'],
+  reconEstimate: ['m.recon_estimate_minor'],
+  reconActual: ['m.recon_actual_minor'],
+  costBasis: ['m.cost_basis_minor'],
+  margin: ['m.margin_minor'],
 };
 
 function orderBy(sort: StockSort, descending: boolean): string {
   const dir = descending ? 'desc' : 'asc';
-  const keys = SORT_SQL[sort].split(', ').map((k) => `${k} ${dir} nulls last`);
-  return [...keys, `f.id ${dir}`].join(', ');
+  return [...SORT_SQL[sort].map((k) => `${k} ${dir} nulls last`), `f.id ${dir}`].join(', ');
 }
 
 // The pianos the filter keeps, with their newest verdict and days in stock (to the day they left, once gone).
