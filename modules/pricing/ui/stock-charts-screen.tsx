@@ -15,7 +15,8 @@ import { BarChart, type BarRow } from './components/bar-chart';
 import { useStockCharts, type StockCharts } from './use-stock-table';
 
 const pianos = (n: number) => `${n} ${n === 1 ? 'piano' : 'pianos'}`;
-const cash = (minor: number, currency: string | null | undefined) => (currency ? money(minor, currency) : String(minor));
+// A loss with a real minus sign before the currency: “−USD 683.08”.
+const cash = (minor: number, currency: string | null | undefined) => (minor < 0 ? '−' : '') + (currency ? money(Math.abs(minor), currency) : String(Math.abs(minor)));
 
 /** Where the money is: stock by stage, how long it has waited, the thinnest margins, the workshop's estimates against what the work cost, deposits held. */
 export function StockChartsScreen() {

@@ -29,23 +29,27 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 import { stockCsvPath, useStockTable } from './use-stock-table';
 
 const KIND_LABELS: Record<PianoKind, string> = { upright: 'Upright', grand: 'Grand' };
-const cash = (minor: number | null, r: StockRow, none = '—') => (minor != null && r.currency ? money(minor, r.currency) : none);
+const cash = (minor: number | null, r: StockRow, none = '—') => (minor != null && r.currency ? `${minor < 0 ? '−' : ''}${money(Math.abs(minor), r.currency)}` : none);
+// In the wide table a page in one currency names it once, above the table, and its cells keep the numbers.
+const plain = (minor: number | null, r: StockRow, none = '—') => (minor != null && r.currency ? `${minor < 0 ? '−' : ''}${money(Math.abs(minor), r.currency).replace(`${r.currency} `, '')}` : none);
+// Work so far means nothing before a plan: a dash, not a zero.
+const workSoFar = (r: StockRow, show: typeof cash) => (r.reconEstimateMinor == null && r.reconActualMinor === 0 ? '—' : show(r.reconActualMinor, r));
 const readinessOf = (r: StockRow) => (r.readiness ? `${READINESS_WORDS[r.readiness]}${r.provisional ? ' (provisional)' : ''}` : READINESS_FILTER_WORDS.none);
 
 const column = createColumnHelper<StockRow>();
 // Each column sorts on the server under the same name; flex is its share of the wide table.
 const COLUMNS = [
-  column.accessor('stockNumber', { id: 'stockNumber', header: STOCK_SORT_LABELS.stockNumber, meta: { flex: 1.1 } }),
+  column.accessor('stockNumber', { id: 'stockNumber', header: STOCK_SORT_LABELS.stockNumber, meta: { flex: 0.9 } }),
   column.accessor((r) => makerAndModel(r.maker, r.model), { id: 'makerModel', header: STOCK_SORT_LABELS.makerModel, meta: { flex: 1.8 } }),
   column.accessor((r) => formatKindAndSize(r.kind, r.sizeCm), { id: 'kindSize', header: STOCK_SORT_LABELS.kindSize, meta: { flex: 1.3 } }),
   column.accessor('stage', { id: 'stage', header: STOCK_SORT_LABELS.stage, meta: { flex: 1.3 } }),
-  column.accessor('daysInStock', { id: 'daysInStock', header: 'Days', meta: { flex: 0.6, numeric: true } }),
+  column.accessor('daysInStock', { id: 'daysInStock', header: 'Days', meta: { flex: 0.5, numeric: true } }),
   column.accessor(readinessOf, { id: 'readiness', header: STOCK_SORT_LABELS.readiness, meta: { flex: 1.4 } }),
-  column.accessor((r) => cash(r.reconEstimateMinor, r), { id: 'reconEstimate', header: STOCK_SORT_LABELS.reconEstimate, meta: { flex: 1.1, numeric: true } }),
-  column.accessor((r) => cash(r.reconActualMinor, r), { id: 'reconActual', header: STOCK_SORT_LABELS.reconActual, meta: { flex: 1.1, numeric: true } }),
-  column.accessor((r) => (r.mixedCurrencies ? 'Mixed currencies' : cash(r.costBasisMinor, r, 'No allowance')), { id: 'costBasis', header: STOCK_SORT_LABELS.costBasis, meta: { flex: 1.1, numeric: true } }),
-  column.accessor((r) => cash(r.askingPriceMinor, r, 'Not priced'), { id: 'askingPrice', header: STOCK_SORT_LABELS.askingPrice, meta: { flex: 1.1, numeric: true } }),
-  column.accessor((r) => cash(r.marginMinor, r), { id: 'margin', header: STOCK_SORT_LABELS.margin, meta: { flex: 1.1, numeric: true } }),
+  column.accessor((r) => plain(r.reconEstimateMinor, r), { id: 'reconEstimate', header: STOCK_SORT_LABELS.reconEstimate, meta: { flex: 1.1, numeric: true } }),
+  column.accessor((r) => workSoFar(r, plain), { id: 'reconActual', header: STOCK_SORT_LABELS.reconActual, meta: { flex: 1.1, numeric: true } }),
+  column.accessor((r) => (r.mixedCurrencies ? 'Mixed currencies' : plain(r.costBasisMinor, r, 'No allowance')), { id: 'costBasis', header: STOCK_SORT_LABELS.costBasis, meta: { flex: 1.1, numeric: true } }),
+  column.accessor((r) => plain(r.askingPriceMinor, r, 'Not priced'), { id: 'askingPrice', header: STOCK_SORT_LABELS.askingPrice, meta: { flex: 1.1, numeric: true } }),
+  column.accessor((r) => plain(r.marginMinor, r), { id: 'margin', header: STOCK_SORT_LABELS.margin, meta: { flex: 1.1, numeric: true } }),
 ];
 type Meta = { flex: number; numeric?: boolean };
 const SORT_LABELS = STOCK_SORT_LABELS as Record<StockSort, string>;
@@ -72,6 +76,9 @@ export function StockTableScreen() {
   const { page, fetching, error } = useStockTable(query);
   const problem = graphProblem(error);
   const rows = useMemo(() => page?.rows ?? [], [page]);
+  const currencies = [...new Set(rows.map((r) => r.currency).filter(Boolean))];
+  const [filtersOpen, setFiltersOpen] = useState(false);
+  const filtersOn = stages.length + kinds.length + readiness.length;
 
   // The table keeps no state of its own here (sorting is ours, rows come from the server), and this app runs without the React Compiler.
   // eslint-disable-next-line react-hooks/incompatible-library
@@ -113,8 +120,8 @@ export function StockTableScreen() {
       }
     >
       <Section title="Filter" description="Every piano Feltwire holds; narrow it by stage, kind and readiness, or search.">
-        <View style={[styles.filters, wide && styles.filtersWide]}>
-          <View style={wide ? styles.filterWide : undefined}>
+        <View style={[styles.filters, wide && styles.filtersRow]}>
+          <View style={wide ? styles.searchWide : undefined}>
             <TextField
               label="Search"
               hint="Stock number, maker, model or serial number"
@@ -126,13 +133,35 @@ export function StockTableScreen() {
               testID="stock-search"
             />
           </View>
-          <MultiChoice label="Stage" options={STAGES} labels={STAGE_LABELS} value={stages} onChange={changed(setStages)} testID="stock-filter-stage" />
-          <MultiChoice label="Kind" options={PIANO_KINDS} labels={KIND_LABELS} value={kinds} onChange={changed(setKinds)} testID="stock-filter-kind" />
-          <MultiChoice label="Readiness" options={READINESS_FILTERS} labels={READINESS_FILTER_WORDS} value={readiness} onChange={changed(setReadiness)} testID="stock-filter-readiness" />
+          <View style={styles.filterButtons}>
+            <Button label={filtersOpen ? 'Hide the filters' : `Filters${filtersOn ? ` (${filtersOn} on)` : ''}`} variant="secondary" onPress={() => setFiltersOpen((o) => !o)} testID="stock-filters-toggle" />
+            {filtersOn || search ? (
+              <Button
+                label="Clear"
+                variant="quiet"
+                onPress={() => {
+                  setStages([]);
+                  setKinds([]);
+                  setReadiness([]);
+                  setSearch('');
+                  setSearchText('');
+                  setOffset(0);
+                }}
+                testID="stock-filters-clear"
+              />
+            ) : null}
+          </View>
         </View>
+        {filtersOpen ? (
+          <View style={styles.filters}>
+            <MultiChoice label="Stage" options={STAGES} labels={STAGE_LABELS} value={stages} onChange={changed(setStages)} testID="stock-filter-stage" />
+            <MultiChoice label="Kind" options={PIANO_KINDS} labels={KIND_LABELS} value={kinds} onChange={changed(setKinds)} testID="stock-filter-kind" />
+            <MultiChoice label="Readiness" options={READINESS_FILTERS} labels={READINESS_FILTER_WORDS} value={readiness} onChange={changed(setReadiness)} testID="stock-filter-readiness" />
+          </View>
+        ) : null}
       </Section>
       {exportProblem ? <Notice tone="error">{exportProblem}</Notice> : null}
-      <Section title={page ? `${page.total.toLocaleString('en-US')} ${page.total === 1 ? 'piano' : 'pianos'}` : 'Pianos'} description={`Sorted by ${SORT_LABELS[sort].toLowerCase()}, ${descending ? 'highest or latest first' : 'lowest or earliest first'}. Cost basis: trade-in allowance, workshop labour and parts.`}>
+      <Section title={page ? `${page.total.toLocaleString('en-US')} ${page.total === 1 ? 'piano' : 'pianos'}` : 'Pianos'} description={`Sorted by ${SORT_LABELS[sort].toLowerCase()}, ${descending ? 'highest or latest first' : 'lowest or earliest first'}.${wide && currencies.length === 1 ? ` Money in ${currencies[0]}.` : ''} Cost basis: trade-in allowance, workshop labour and parts; expected margin: the asking price less the cost basis and the work still estimated.`}>
         {!wide ? (
           <View style={styles.phoneSort}>
             <ChoiceGroup label="Sort by" options={STOCK_SORTS} labels={SORT_LABELS} value={sort} onChange={(id) => table.setSorting([{ id, desc: descending }])} scroll testID="stock-sort" />
@@ -148,7 +177,7 @@ export function StockTableScreen() {
           <ScrollView horizontal contentContainerStyle={styles.scroller}>
             <View role="table" aria-label="Stock table" style={[rowTable.table, styles.table]} testID="stock-table">
               {table.getHeaderGroups().map((group) => (
-                <View role="row" key={group.id} style={[rowTable.row, rowTable.headRow]}>
+                <View role="row" key={group.id} style={[rowTable.row, rowTable.headRow, styles.tableRow]}>
                   {group.headers.map((header) => {
                     const meta = header.column.columnDef.meta as Meta;
                     const dir = header.column.getIsSorted();
@@ -166,7 +195,7 @@ export function StockTableScreen() {
                 </View>
               ))}
               {table.getRowModel().rows.map((row, n) => (
-                <LinkPressable key={row.id} href={`/pianos/${row.original.pianoId}`} insetFocus style={({ hovered }) => [rowTable.row, n > 0 && rowTable.rule, hovered && rowTable.hover]} testID="stock-row">
+                <LinkPressable key={row.id} href={`/pianos/${row.original.pianoId}`} insetFocus style={({ hovered }) => [rowTable.row, styles.tableRow, n > 0 && rowTable.rule, hovered && rowTable.hover]} testID="stock-row">
                   {row.getVisibleCells().map((cell) => {
                     const meta = cell.column.columnDef.meta as Meta;
                     return (
@@ -196,7 +225,7 @@ function StockCard({ r }: { r: StockRow }) {
   const facts: [string, string][] = [
     ['Days in stock', String(r.daysInStock)],
     ['Readiness', readinessOf(r)],
-    ['Work estimate / so far', `${cash(r.reconEstimateMinor, r)} / ${cash(r.reconActualMinor, r)}`],
+    ['Work estimate / so far', `${cash(r.reconEstimateMinor, r)} / ${workSoFar(r, cash)}`],
     ['Cost basis', r.mixedCurrencies ? 'Mixed currencies' : cash(r.costBasisMinor, r, 'No allowance')],
     ['Asking price', cash(r.askingPriceMinor, r, 'Not priced')],
     ['Expected margin', cash(r.marginMinor, r)],
@@ -228,11 +257,13 @@ function StockCard({ r }: { r: StockRow }) {
 
 const styles = StyleSheet.create({
   filters: { gap: SPACE.md },
-  filtersWide: {},
-  filterWide: { maxWidth: 420 },
+  filtersRow: { flexDirection: 'row', alignItems: 'flex-end', flexWrap: 'wrap' },
+  searchWide: { width: 420 },
+  filterButtons: { flexDirection: 'row', gap: SPACE.sm, alignItems: 'center' },
   phoneSort: { gap: SPACE.sm, alignItems: 'flex-start' },
   scroller: { flexGrow: 1 },
-  table: { minWidth: 1080, flexGrow: 1 },
+  table: { minWidth: 940, flexGrow: 1 },
+  tableRow: { gap: SPACE.sm, paddingHorizontal: SPACE.md },
   headButton: { minHeight: 32, justifyContent: 'center' },
   cell: { color: PALETTE.ebony },
   right: { textAlign: 'right' },

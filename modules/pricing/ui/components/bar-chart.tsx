@@ -43,13 +43,17 @@ export function BarChart({ title, series, rows, rowHeading, testID }: BarChartPr
     const w = Math.round(e.nativeEvent.layout.width);
     if (w > 0 && w !== width) setWidth(w);
   };
-  const labelWidth = Math.min(200, Math.round(width * 0.38));
-  const valueRoom = 96;
+  // On a phone each label sits above its bars, so neither is cut short.
+  const stacked = width < 480;
+  const labelWidth = stacked ? 0 : Math.min(200, Math.round(width * 0.38));
+  const labelRoom = stacked ? 18 : 0;
+  // Room at the bar's end for its number (and the series' name when there are two).
+  const valueRoom = series.length > 1 ? 150 : 104;
   const values = rows.flatMap((r) => r.values.map((v) => v.value));
   const lo = Math.min(0, ...values);
   const hi = Math.max(0, ...values, 1);
   const x = scaleLinear().domain([lo, hi]).range([labelWidth + (lo < 0 ? valueRoom : 0), width - valueRoom]).nice();
-  const band = ROW * series.length + GAP;
+  const band = labelRoom + ROW * series.length + GAP;
   const height = rows.length * band + 8;
   const y = scaleBand<string>().domain(rows.map((r) => r.key)).range([4, height - 4]).paddingInner(0);
   const zero = x(0);
@@ -69,11 +73,11 @@ export function BarChart({ title, series, rows, rowHeading, testID }: BarChartPr
             const top = y(r.key) ?? 0;
             return (
               <G key={r.key}>
-                <SvgText x={labelWidth - 8} y={top + (ROW * series.length) / 2 + 4} fontSize={12} fontFamily={FONT_FAMILIES.body} fill={PALETTE.ebony} textAnchor="end">
-                  {r.label.length > 28 ? `${r.label.slice(0, 27)}…` : r.label}
+                <SvgText x={stacked ? 0 : labelWidth - 8} y={stacked ? top + 13 : top + (ROW * series.length) / 2 + 4} fontSize={12} fontFamily={FONT_FAMILIES.body} fill={PALETTE.ebony} textAnchor={stacked ? 'start' : 'end'}>
+                  {r.label.length > (stacked ? 48 : 28) ? `${r.label.slice(0, stacked ? 47 : 27)}…` : r.label}
                 </SvgText>
                 {r.values.map((v, n) => {
-                  const barTop = top + n * ROW + 4;
+                  const barTop = top + labelRoom + n * ROW + 4;
                   const end = x(v.value);
                   const left = Math.min(zero, end);
                   const w = Math.max(1, Math.abs(end - zero));
