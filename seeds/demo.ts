@@ -7,6 +7,9 @@ import type { Measurements } from '@/modules/assessment/core/measurements';
 import type { PianoKind, Stage } from '@/modules/pianos/core/piano';
 import { readClimate } from '@/modules/shop/core/climate';
 import { publishDisclosure } from '@/modules/disclosure/server/disclosure-service';
+import { applyPriceEnding } from '@/modules/pricing/core/pricing';
+import { demoPricingRules } from '@/modules/pricing/core/pricing-rules';
+import { changeAskingPrice, offerFor, recordOfferAnswer, suggestedPrice } from '@/modules/pricing/server/pricing-service';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import { demoRateCard } from '@/modules/shop/core/rate-card';
 
@@ -135,12 +138,8 @@ export async function seedDemo(knex: Knex, hash: (password: string) => Promise<s
     await seedStory(knex, staff, id, index, p, arrived);
     pianos += 1;
   }
-  // Pianos ready for sale carry an asking price; those on the floor have a published disclosure.
-  const forSale = await knex('pianos').whereIn('stage', ['ready', 'on_floor', 'held', 'sold']).whereNull('asking_price_minor').select('id', 'kind', 'size_cm');
-  for (const p of forSale) {
-    const price = p.kind === 'grand' ? 1_250_000 + p.size_cm * 4_000 : 240_000 + p.size_cm * 1_500;
-    await knex('pianos').where({ id: p.id }).update({ asking_price_minor: price, price_currency: 'USD' });
-  }
+  await seedOffers(knex, staff);
+  await seedPrices(knex, staff);
   const showing = await knex('pianos')
     .whereIn('stage', ['on_floor', 'held'])
     .whereNotExists(knex('disclosures').whereRaw('disclosures.piano_id = pianos.id'))
@@ -226,4 +225,58 @@ async function seedStory(knex: Knex, staff: Record<string, number>, pianoId: num
     refer_to_technician: regrade.referToTechnician, not_recommended_for_retail: regrade.notRecommendedForRetail, rules_version: regrade.rulesVersion,
     change_note: 'Re-measured after workshop work.', submitted_by_id: staff.technician, submitted_at: at(3),
   });
+}
+
+const at = (iso: string | Date) => ({ clock: { now: () => new Date(iso) } });
+const FIRST_PRICE = 'First price once ready for the floor';
+const MARKED_DOWN = 'No serious interest in its first weeks on the floor';
+
+/**
+ * What each seller said to the offer, recorded the day the inspection went in: accepted, or a
+ * counter-offer and the figure agreed after it. Pianos still waiting in Assessed keep their offer open.
+ */
+async function seedOffers(knex: Knex, staff: Record<string, number>): Promise<void> {
+  const rows = await knex('pianos')
+    .join('intakes', 'intakes.piano_id', 'pianos.id')
+    .join('assessments', (j) => j.on('assessments.piano_id', 'pianos.id').andOnVal('assessments.version', 1))
+    .whereIn('pianos.serial_number', DEMO_PIANOS.map((p) => p.serialNumber))
+    .whereNot('intakes.acquisition', 'consignment')
+    .whereNot('pianos.stage', 'assessed')
+    .whereNotExists(knex('trade_in_answers').whereRaw('trade_in_answers.piano_id = pianos.id'))
+    .orderBy('pianos.id')
+    .select('pianos.id', 'assessments.submitted_at');
+  const intake = { id: staff.intake, role: 'intake' as const };
+  for (const [n, p] of rows.entries()) {
+    const when = at(p.submitted_at);
+    const offer = (await offerFor(when, intake, p.id)).offer;
+    if (!offer) continue;
+    const step = demoPricingRules.offerStepMinor;
+    const up = (share: number) => Math.round((offer.offerMinor * (1 + share)) / step) * step;
+    if (n % 2 === 0 || offer.offerMinor === 0) {
+      await recordOfferAnswer(when, intake, { pianoId: p.id, answer: 'accepted', offeredMinor: offer.offerMinor });
+    } else {
+      await recordOfferAnswer(when, intake, { pianoId: p.id, answer: 'countered', offeredMinor: offer.offerMinor, counterMinor: up(0.2), note: 'Seller had seen a higher figure for a similar piano' });
+      await recordOfferAnswer(at(new Date(Date.parse(p.submitted_at) + 3_600_000)), { id: staff.manager, role: 'manager' }, { pianoId: p.id, answer: 'agreed', offeredMinor: offer.offerMinor, agreedMinor: up(0.08), note: 'Met partway' });
+    }
+  }
+}
+
+/** Pianos ready for sale carry an asking price from the suggestion, and some on the floor were marked down since. */
+async function seedPrices(knex: Knex, staff: Record<string, number>): Promise<void> {
+  const manager = { id: staff.manager, role: 'manager' as const };
+  const forSale = await knex('pianos').whereIn('stage', ['ready', 'on_floor', 'held', 'sold']).whereNull('asking_price_minor').orderBy('id').select('id', 'kind', 'size_cm', 'stage_changed_at');
+  for (const p of forSale) {
+    const ready = (await knex('stage_moves').where({ piano_id: p.id }).whereIn('to_stage', ['ready']).min('at as at').first())?.at ?? p.stage_changed_at;
+    const when = at(ready);
+    const suggestion = await suggestedPrice(when, manager, p.id).catch(() => null);
+    const price = suggestion && suggestion.basis === 'retail' && suggestion.priceMinor > 0 ? suggestion.priceMinor : p.kind === 'grand' ? 1_250_000 + p.size_cm * 4_000 : 240_000 + p.size_cm * 1_500;
+    await changeAskingPrice(when, manager, { pianoId: p.id, askingPriceMinor: price, currency: 'USD', reason: FIRST_PRICE });
+  }
+  const floor = await knex('pianos').where('stage', 'on_floor').orderBy('id').select('id', 'asking_price_minor', 'stage_changed_at');
+  for (const [n, p] of floor.entries()) {
+    const history = await knex('price_changes').where({ piano_id: p.id }).select('reason');
+    if (n % 2 === 1 || history.length !== 1 || history[0].reason !== FIRST_PRICE) continue;
+    const lower = applyPriceEnding(Math.round(p.asking_price_minor * 0.95), demoPricingRules.priceEnding);
+    await changeAskingPrice(at(new Date(Date.parse(p.stage_changed_at) + 3 * DAY)), manager, { pianoId: p.id, askingPriceMinor: lower, currency: 'USD', reason: MARKED_DOWN });
+  }
 }

@@ -6,6 +6,7 @@ import type { Knex } from 'knex';
 import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
+import type { PricingDeps } from '@/modules/pricing/server/pricing-service';
 import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDeps } from '@/modules/deposits/server/deposit-service';
 import type Stripe from 'stripe';
 
@@ -27,6 +28,7 @@ import { mountWeb } from './web';
 import type { Mailer } from './mail';
 import { inboxRouter, type MailFake } from './mail-fake';
 import { documentsRouter, publicRouter } from './public-routes';
+import { stockRouter } from './stock-routes';
 
 export interface AppDeps {
   knex: Knex;
@@ -48,9 +50,10 @@ export interface AppDeps {
 }
 
 /** What the domains' services need, shared by the request handlers and the background jobs. */
-export function serviceDeps(deps: AppDeps): { disclosure: DisclosureDeps; deposits: DepositDeps } {
+export function serviceDeps(deps: AppDeps): { disclosure: DisclosureDeps; deposits: DepositDeps; pricing: PricingDeps } {
   return {
     disclosure: { photos: deps.photos, publicUrl: deps.publicUrl },
+    pricing: { clock: deps.clock ?? systemClock },
     deposits: { ...deps.payments, publicUrl: deps.publicUrl, clock: deps.clock ?? systemClock },
   };
 }
@@ -79,7 +82,7 @@ export function createApp(deps: AppDeps): express.Express {
   const limits = deps.limits ?? DEFAULT_LIMITS;
   const publicWrites = publicWriteLimit(limits.publicWrites);
   app.use('/auth', authRouter(deps.auth, limits.signIn));
-  const { disclosure, deposits } = serviceDeps(deps);
+  const { disclosure, deposits, pricing } = serviceDeps(deps);
   // The signature is checked over the exact bytes received, so this route reads the raw body.
   app.post('/api/webhooks/payments', express.raw({ type: '*/*', limit: '256kb' }), async (req, res) => {
     res.json(await handlePaymentWebhook(deposits, Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0), req.header('Stripe-Signature')));
@@ -94,6 +97,7 @@ export function createApp(deps: AppDeps): express.Express {
   app.use('/api/public', publicRouter(disclosure, publicWrites));
   app.use('/api', uploadsRouter(pp, deps.photos));
   app.use('/api', documentsRouter(pp, disclosure));
+  app.use('/api', stockRouter(pp, pricing));
   if (deps.mailFake) app.use('/dev', inboxGuard(pp), inboxRouter(deps.mailFake));
 
   // GraphQL over HTTP: GET for queries, POST for everything; other methods are no route.
@@ -102,7 +106,7 @@ export function createApp(deps: AppDeps): express.Express {
     express.json({ limit: '100kb' }),
     graphqlRoute<GraphContext>({
       schema: buildSchema(DOMAINS),
-      context: (req: Request) => ({ user: req.user as User, photos: deps.photos, disclosure, deposits }),
+      context: (req: Request) => ({ user: req.user as User, photos: deps.photos, disclosure, deposits, pricing }),
       formatError,
       execute: compiledExecution(),
       onOperation: plainResponse,

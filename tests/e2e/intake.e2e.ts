@@ -103,6 +103,19 @@ it('intake staff log a whole trade-in on a phone, with a photo, keep the draft o
   await page.getByText('Marrowfield').first().waitFor();
   await page.getByTestId('photo-thumb').first().waitFor();
   await shot(page, 'intake-piano-phone');
+
+  // The trade-in offer, worked back from the expected asking price, line by line, for the seller.
+  const offer = page.getByTestId('offer-panel');
+  await offer.scrollIntoViewIfNeeded();
+  const lines = await offer.getByTestId('offer-lines-line').allTextContents();
+  expect(lines[0]).toMatch(/^(Expected asking price|Wholesale figure)/);
+  expect(lines.some((l) => l.startsWith('Target margin'))).toBe(true);
+  if (lines[0].startsWith('Expected asking price')) expect(lines.some((l) => l.startsWith('Reconditioning estimate'))).toBe(true);
+  const amount = await offer.getByTestId('offer-amount').textContent();
+  expect(amount).toMatch(/^[A-Z]{3} [\d,]+(\.\d\d)?$/);
+  await expect(offer.getByTestId('offer-lines-total').textContent()).resolves.toBe(amount);
+  await expect(offer.getByTestId('offer-answer-form').count()).resolves.toBe(1);
+  await shot(page, 'intake-offer-phone');
   await page.close();
 });
 

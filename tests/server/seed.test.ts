@@ -3,7 +3,7 @@ import { DEMO_PIANOS, DEMO_USERS, seedDemo } from '@/seeds/demo';
 
 import { createTestDatabase } from '../support/test-db';
 
-const TABLES = ['users', 'pianos', 'intakes', 'assessments', 'stage_moves', 'work_plans', 'work_items', 'time_entries', 'time_entry_corrections', 'climate_readings', 'disclosures', 'disclosure_links'];
+const TABLES = ['users', 'pianos', 'intakes', 'assessments', 'stage_moves', 'work_plans', 'work_items', 'time_entries', 'time_entry_corrections', 'climate_readings', 'disclosures', 'disclosure_links', 'trade_in_answers', 'price_changes'];
 
 describe('the demo scenario', () => {
   it('seeds a consistent story, and a second run adds nothing', async () => {
@@ -39,6 +39,21 @@ describe('the demo scenario', () => {
       // pianos in the workshop have open work for the technician
       const open = await db.knex('work_items').join('pianos', 'pianos.id', 'work_items.piano_id').where('pianos.stage', 'in_workshop').whereNot('status', 'done').count('* as n').first();
       expect(open!.n).toBeGreaterThan(0);
+      // offers were answered (accepted, or countered and then agreed), prices have a history, and some pianos a margin
+      const answers = await db.knex('trade_in_answers').join('pianos', 'pianos.id', 'trade_in_answers.piano_id').select('pianos.stock_number', 'answer', 'offer_minor', 'counter_minor', 'allowance_minor');
+      expect(new Set(answers.map((a) => a.answer))).toEqual(new Set(['accepted', 'countered', 'agreed']));
+      for (const a of answers.filter((x) => x.answer === 'agreed')) expect(a.allowance_minor).toBeGreaterThan(a.offer_minor);
+      // consignments and pianos still waiting in Assessed have no answer
+      expect(answers.map((a) => a.stock_number)).not.toContain('FW-0003');
+      expect(answers.map((a) => a.stock_number)).not.toContain('FW-0004');
+      const priced = await db.knex('pianos').whereNotNull('asking_price_minor').count('* as n').first();
+      const histories = await db.knex('price_changes').select('piano_id', 'to_minor', 'from_minor', 'reason').orderBy('id');
+      expect(new Set(histories.map((h) => h.piano_id)).size).toBe(Number(priced!.n));
+      const markedDown = histories.filter((h) => h.from_minor != null);
+      expect(markedDown.length).toBeGreaterThan(0);
+      for (const m of markedDown) expect(m.to_minor).toBeLessThan(m.from_minor);
+      const withMargin = await db.knex('pianos').whereNotNull('asking_price_minor').whereExists(db.knex('trade_in_answers').whereRaw('trade_in_answers.piano_id = pianos.id').whereNotNull('allowance_minor')).count('* as n').first();
+      expect(Number(withMargin!.n)).toBeGreaterThan(2);
     } finally {
       await db.drop();
     }

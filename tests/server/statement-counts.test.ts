@@ -1,6 +1,6 @@
 import { hashPassword } from '@/modules/accounts/server/user-service';
 import { seedBench } from '@/bench/seed';
-import { publicDisclosurePath, screenDocuments, type Targets } from '@/bench/screens';
+import { publicDisclosurePath, screenDocuments, STOCK_EXPORT_PATH, type Targets } from '@/bench/screens';
 
 import { startTestApi, type TestApi } from '../support/api';
 
@@ -33,6 +33,10 @@ async function countEach(): Promise<Record<string, number>> {
   const res = await api.http.get(publicDisclosurePath(targets.disclosureToken));
   expect(res.status).toBe(200);
   out['public disclosure'] = statements - before;
+  const beforeCsv = statements;
+  const csv = await api.http.get(STOCK_EXPORT_PATH).set('authorization', `Bearer ${await api.tokenFor('manager')}`);
+  expect(csv.status).toBe(200);
+  out['stock table CSV'] = statements - beforeCsv;
   return out;
 }
 
@@ -50,4 +54,6 @@ it('every main screen runs as many statements at 30 pianos of history as at 3', 
   expect(large).toEqual(small);
   // Each screen stays within a handful of statements, the token's user lookup included.
   for (const [name, count] of Object.entries(large)) expect([name, count <= 8]).toEqual([name, true]);
+  // The stock table is one statement a page (and the CSV one for every row), whatever the sort: the token's lookup and that one.
+  for (const name of ['stock table', 'stock table by margin, on hand', 'stock table, a search', 'stock table CSV']) expect([name, large[name]]).toEqual([name, 2]);
 });

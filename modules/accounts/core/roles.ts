@@ -27,13 +27,21 @@ export type Ability =
   | 'tendBackgroundWork'
   // Correct a time entry one logged oneself, or one anyone logged.
   | 'correctOwnTime'
-  | 'correctAnyTime';
+  | 'correctAnyTime'
+  // A trade-in offer with its lines, and the seller's answer to it (accepted, a counter-offer, agreed, declined).
+  | 'readOffers'
+  | 'answerOffers'
+  // Money the dealer keeps to itself: trade-in allowances, cost basis, margins, the stock table and its charts.
+  | 'readCostsAndMargins'
+  // Set a piano's asking price (every change kept with who, when and why), and read its price history.
+  | 'setPrices'
+  | 'setPricingRules';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
-  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults'],
+  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults', 'readOffers', 'answerOffers'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults', 'correctOwnTime'],
   floor: ['readPianos', 'recordTone', 'readToneResults'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime', 'readOffers', 'answerOffers', 'readCostsAndMargins', 'setPrices', 'setPricingRules'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

@@ -15,7 +15,7 @@ export const NAV_ITEMS: Record<Role, readonly NavItem[]> = {
   technician: [{ label: 'Bench', href: '/bench', hint: 'The work queue' }, { label: 'Climate', href: '/workshop/climate', hint: 'Air and wood moisture' }, PIANOS],
   floor: [{ label: 'Showroom', href: '/showroom', hint: 'Pianos on the floor' }, PIANOS],
   manager: [
-    { label: 'Stock', href: '/stock', hint: 'Counts by stage' },
+    { label: 'Stock', href: '/stock', hint: 'Counts, the stock table, charts' },
     { label: 'Workshop', href: '/workshop', hint: 'Plans, overruns, rates' },
     { label: 'Team', href: '/team', hint: 'Accounts and roles' },
     PIANOS,

@@ -321,6 +321,7 @@ export const priceInput = z
     pianoId: z.number().int().positive(),
     askingPriceMinor: z.number().int('must be whole minor units').min(0).max(1_000_000_000),
     currency: z.enum(['USD', 'CAD', 'EUR', 'GBP', 'JPY'], { message: 'must be USD, CAD, EUR, GBP or JPY' }),
+    reason: lineText().trim().min(3, 'says why, in at least 3 characters').max(200).optional(),
   })
   .strict();
 

@@ -19,7 +19,7 @@ export const disclosureGraph: GraphDomain = {
   mutations: (typeOf) => ({
     publishDisclosure: { type: json, args: pianoId, resolve: (_r, a: { pianoId: number }, ctx) => publishDisclosure(ctx.disclosure, ctx.user, a.pianoId) },
     countersign: { type: json, args: { acknowledgementId: { type: new GraphQLNonNull(GraphQLInt) } }, resolve: (_r, a: { acknowledgementId: number }, ctx) => countersign(ctx.disclosure, ctx.user, a.acknowledgementId) },
-    setAskingPrice: { type: new GraphQLNonNull(typeOf(Piano)), args: { input: { type: json } }, resolve: async (_r, a: { input: unknown }, ctx) => (await setAskingPrice(ctx.user, a.input)).$toJson() },
+    setAskingPrice: { type: new GraphQLNonNull(typeOf(Piano)), args: { input: { type: json } }, resolve: async (_r, a: { input: unknown }, ctx) => (await setAskingPrice(ctx.user, a.input, ctx.pricing)).$toJson() },
     setShopTexts: { type: json, args: { texts: { type: json } }, resolve: (_r, a: { texts: unknown }, ctx) => setShopTexts(ctx.user, a.texts) },
   }),
 };

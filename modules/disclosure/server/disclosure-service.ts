@@ -6,6 +6,7 @@ import Handlebars from 'handlebars';
 import type { Knex } from 'knex';
 
 import type { Actor } from '@/modules/accounts/server/user-service';
+import { can } from '@/modules/accounts/core/roles';
 import { User } from '@/modules/accounts/server/user-model';
 import { gradedAssessments, remeasuredFieldsOf } from '@/modules/assessment/server/assessment-service';
 import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, publishBlockers, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
@@ -13,6 +14,7 @@ import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import { Piano } from '@/modules/pianos/server/piano-model';
+import { changeAskingPrice, type PricingDeps } from '@/modules/pricing/server/pricing-service';
 import { StageMove } from '@/modules/pianos/server/stage-move-model';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
 import { WorkItem } from '@/modules/shop/server/shop-models';
@@ -58,12 +60,12 @@ export async function setShopTexts(actor: Actor, raw: unknown) {
   return shopTexts();
 }
 
-export async function setAskingPrice(actor: Actor, raw: unknown): Promise<Piano> {
-  if (actor.role !== 'manager') throw notAllowed('set prices');
+/** The disclosure desk's price field: the same one path as every other price change, so the history keeps it. */
+export async function setAskingPrice(actor: Actor, raw: unknown, pricing: PricingDeps): Promise<Piano> {
+  if (!can(actor.role, 'setPrices')) throw notAllowed('set prices');
   const input = priceInput.parse(raw);
-  const piano = await Piano.query().findById(input.pianoId);
-  if (!piano) throw notFound(`piano ${input.pianoId}`);
-  return piano.$query().patchAndFetch({ askingPriceMinor: input.askingPriceMinor, priceCurrency: input.currency });
+  const { piano } = await changeAskingPrice(pricing, actor, { ...input, reason: input.reason ?? 'No reason given' });
+  return piano;
 }
 
 /**

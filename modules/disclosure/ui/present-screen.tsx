@@ -5,6 +5,7 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { AskingPriceForm } from '@/modules/pricing/ui/components/asking-price-form';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -17,7 +18,6 @@ import { Body } from '@/modules/theme/ui/text';
 
 import { AcknowledgementsPanel } from './components/acknowledgements-panel';
 import { AreaWalkthrough } from './components/area-walkthrough';
-import { AskingPriceForm } from './components/asking-price-form';
 import { BuyerLinkPanel, buyerUrl } from './components/buyer-link-panel';
 import { ExternalLink } from './components/external-link';
 import { PublishPanel } from './components/publish-panel';

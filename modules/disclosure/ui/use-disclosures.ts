@@ -84,9 +84,3 @@ export function useCountersign() {
   );
 }
 
-export function useSetAskingPrice() {
-  return useStaffMutation<{ askingPriceMinor: number; priceCurrency: string }, { i: { pianoId: number; askingPriceMinor: number; currency: string } }>(
-    'mutation SetAskingPrice($i: JSON!) { setAskingPrice(input: $i) { id askingPriceMinor priceCurrency } }',
-    'setAskingPrice',
-  );
-}

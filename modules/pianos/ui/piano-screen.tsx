@@ -11,6 +11,8 @@ import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-his
 import { useIntakeRecord } from '@/modules/assessment/ui/use-intake-record';
 import { PhotoGallery } from '@/modules/photos/ui/components/photo-gallery';
 import { PlayTestRecordings } from '@/modules/tone/ui/components/play-test-recordings';
+import { OfferPanel } from '@/modules/pricing/ui/components/offer-panel';
+import { PricePanel } from '@/modules/pricing/ui/components/price-panel';
 import { usePianoPhotos } from '@/modules/photos/ui/use-photos';
 import { StageActions } from '@/modules/shop/ui/stage-actions';
 import { StageTimeline } from '@/modules/shop/ui/stage-timeline';
@@ -126,6 +128,19 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
       </Section>
     ) : null;
   const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  // Money sections for the roles that may see them; the server checks each field again.
+  const offer =
+    user && can(user.role, 'readOffers') ? (
+      <Section title="Trade-in offer" description="Worked back from the expected asking price, line by line, so it can be explained to the seller.">
+        <OfferPanel pianoId={piano.id} />
+      </Section>
+    ) : null;
+  const pricing =
+    user && can(user.role, 'setPrices') ? (
+      <Section title="Price and margin" description="The asking price, how the suggestion is worked out, every change with who and why, and what the piano has cost.">
+        <PricePanel pianoId={piano.id} />
+      </Section>
+    ) : null;
   const workshop = <WorkshopSummary pianoId={piano.id} />;
   const sale = onFloorSide ? (
     <Section title="Deposit and sale">
@@ -186,6 +201,8 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
     return (
       <Column>
         {condition}
+        {offer}
+        {pricing}
         {sale}
         {workshop}
         {playTest}
@@ -202,12 +219,14 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
     <View style={styles.columns}>
       <View style={styles.main}>
         {condition}
+        {offer}
         {sale}
         {workshop}
         {playTest}
         {photoSection}
       </View>
       <View style={styles.aside}>
+        {pricing}
         {details}
         {intakeSection}
         {historySection}

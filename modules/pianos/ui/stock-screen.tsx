@@ -23,7 +23,14 @@ export function StockScreen() {
       title="Stock"
       eyebrow="Manager"
       headingTestID="home-heading"
-      actions={<Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" testID="start-trade-in" />}
+      actions={
+        <>
+          <Button label="Stock table" href="/stock/table" testID="open-stock-table" />
+          <Button label="Charts" variant="secondary" href="/stock/charts" testID="open-stock-charts" />
+          <Button label="Pricing rules" variant="secondary" href="/stock/pricing" testID="open-pricing-rules" />
+          <Button label="Start a trade-in" variant="secondary" href="/trade-ins/new" testID="start-trade-in" />
+        </>
+      }
     >
       <BackgroundWorkPanel />
       <Section title="By stage" description="Pick a stage to see its pianos.">

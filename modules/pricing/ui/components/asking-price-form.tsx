@@ -8,8 +8,10 @@ import { ChoiceGroup } from '@/modules/theme/ui/choice-group';
 import { Notice } from '@/modules/theme/ui/notice';
 import { TextField } from '@/modules/theme/ui/text-field';
 
-import { isCurrency, money } from '../disclosure-format';
-import { useSetAskingPrice } from '../use-disclosures';
+import { isCurrency, money } from '@/modules/disclosure/ui/disclosure-format';
+import { PRICE_REASON_MIN } from '@/modules/pricing/core/offer-input';
+
+import { useChangeAskingPrice } from '../use-piano-money';
 
 const CURRENCY_LABELS = Object.fromEntries(CURRENCIES.map((c) => [c, c])) as Record<Currency, string>;
 
@@ -26,16 +28,23 @@ interface AskingPriceFormProps {
   priceMinor: number | null;
   currency: string | null;
   onSaved: () => void;
+  /** what to say once saved, beyond the new price */
+  savedNote?: string;
 }
 
-/** A manager sets the asking price in major units; it is stored in minor units (ISO 4217). */
-export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved }: AskingPriceFormProps) {
+/**
+ * A manager sets the asking price in major units, with why; it is stored in minor units (ISO 4217).
+ * Every screen that sets a price uses this form and the one mutation behind it, so the history keeps each change.
+ */
+export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved, savedNote = 'Publish the disclosure again so buyers see it.' }: AskingPriceFormProps) {
   const start: Currency = currency && isCurrency(currency) ? currency : 'USD';
   const [cur, setCur] = useState<Currency>(start);
   const [text, setText] = useState(priceMinor != null ? (priceMinor / 10 ** CURRENCY_DIGITS[start]).toFixed(CURRENCY_DIGITS[start]) : '');
   const [error, setError] = useState<string | null>(null);
+  const [reason, setReason] = useState('');
+  const [reasonError, setReasonError] = useState<string | null>(null);
   const [feedback, setFeedback] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
-  const save = useSetAskingPrice();
+  const save = useChangeAskingPrice();
 
   const submit = async () => {
     setFeedback(null);
@@ -45,20 +54,27 @@ export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved }: Aski
       return;
     }
     setError(null);
+    if (reason.trim().length < PRICE_REASON_MIN) {
+      setReasonError('Say why the price is set or changed: it is kept in the price history.');
+      return;
+    }
+    setReasonError(null);
     const minor = toMinor(major, cur);
-    const outcome = await save.run({ i: { pianoId, askingPriceMinor: minor, currency: cur } });
+    const outcome = await save.run({ i: { pianoId, askingPriceMinor: minor, currency: cur, reason: reason.trim() } });
     if (!outcome.ok) {
       setFeedback({ tone: 'error', text: outcome.problem.message });
       return;
     }
-    setFeedback({ tone: 'success', text: `Asking price set to ${money(minor, cur)}. Publish the disclosure again so buyers see it.` });
+    setFeedback({ tone: 'success', text: `Asking price set to ${money(minor, cur)}. ${savedNote}` });
+    setReason('');
     onSaved();
   };
 
   return (
     <View style={styles.form} testID="present-price-form">
       <ChoiceGroup label="Currency" options={CURRENCIES} labels={CURRENCY_LABELS} value={cur} onChange={setCur} testID="price-currency" />
-      <TextField label="Asking price" unit={cur} value={text} onChangeText={setText} error={error} inputMode="decimal" keyboardType="decimal-pad" onSubmitEditing={submit} testID="price-amount" />
+      <TextField label="Asking price" unit={cur} value={text} onChangeText={setText} error={error} inputMode="decimal" keyboardType="decimal-pad" testID="price-amount" />
+      <TextField label="Why" hint="Kept with the price, e.g. “first price after the work” or “60 days on the floor”." value={reason} onChangeText={setReason} error={reasonError} maxLength={200} onSubmitEditing={submit} testID="price-reason" />
       <View style={styles.buttons}>
         <Button label="Save the price" onPress={submit} busy={save.busy} testID="price-save" />
       </View>

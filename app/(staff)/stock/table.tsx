@@ -1,0 +1,5 @@
+import { StockTableScreen } from '@/modules/pricing/ui/stock-table-screen';
+
+export default function StockTableRoute() {
+  return <StockTableScreen />;
+}
