@@ -1,6 +1,7 @@
-import { getIntrospectionQuery } from 'graphql';
+import { buildSchema as buildGraphSchema, getIntrospectionQuery, parse } from 'graphql';
 
 import { pianoListQuery } from '@/modules/pianos/ui/use-pianos';
+import { validateDocument } from '@/server/graphql/http';
 import { MAX_QUERY_DEPTH, QUERY_LIMITS } from '@/server/graphql/limits';
 
 import { startTestApi, type TestApi } from '../support/api';
@@ -38,15 +39,27 @@ describe('what one GraphQL document may ask for', () => {
   });
 
   it('refuses a document whose lists multiply past the cost limit', async () => {
-    // 200 users, each with up to 200 pianos: 40,000 rows asked for in 12 tokens' worth of selection.
-    await refused('{ users(limit: 200) { id pianosLogged(limit: 200) { id stockNumber } } }', /estimated cost is \d+, at most 10000/);
+    // Every version of a piano's assessment (50 reckoned), each finding (10), each piece of work (10).
+    await refused('{ assessmentHistory(pianoId: 1) { id grade { findings { check fields work { task note hours } } } } }', /estimated cost is \d+, at most 10000/);
   });
 
   it('counts the rows a variable asks for', async () => {
-    const query = 'query($n: Int) { users(limit: 200) { id pianosLogged(limit: $n) { id } } }';
+    const page = 'pianos(limit: $n) { id stockNumber maker model serialNumber year kind sizeCm finish stage stageChangedAt createdAt updatedAt createdBy { id name } }';
+    const query = `query($n: Int) { a: ${page} b: ${page} c: ${page} d: ${page} }`;
     await refused(query, /estimated cost/, { n: 200 });
     const ok = await api.gql(token, query, { n: 2 });
     expect(ok.status).toBe(200);
+    expect(ok.body.data.d).toHaveLength(2);
+  });
+
+  // The schema has no cycle today (no relation leads back): the depth limit guards the next one.
+  const LOOPED = buildGraphSchema('type Query { node: Node } type Node { name: String next: Node }');
+  const nested = (depth: number) => `{ node { ${'next { '.repeat(depth - 1)}name${' }'.repeat(depth - 1)} } }`;
+
+  it('refuses a query nested deeper than the limit below its top field, and answers one at it', () => {
+    const deep = validateDocument(LOOPED, parse(nested(MAX_QUERY_DEPTH + 1)));
+    expect(deep.map((e) => e.message)).toEqual([`The query nests deeper than ${MAX_QUERY_DEPTH} levels below its top field.`]);
+    expect(validateDocument(LOOPED, parse(nested(MAX_QUERY_DEPTH)))).toEqual([]);
   });
 
   it('refuses a fragment cycle with a message, before any limit walks it', async () => {

@@ -16,6 +16,7 @@ export const assessmentGraph: GraphDomain = {
       model: Assessment,
       fieldName: 'assessment',
       listFieldName: 'assessments',
+      filters: { single: ['idEq'], list: ['limit', 'offset', 'pianoIdEq'] },
       readPolicy: (_builder, ctx) => {
         if (!can(ctx.user.role, 'readPianos')) throw notAllowed('read assessments');
       },

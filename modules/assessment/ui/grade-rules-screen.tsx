@@ -8,7 +8,7 @@ import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, type GradeRulesInput } from '@/modules/assessment/core/rules-input';
 import { CellInput } from '@/modules/shop/ui/components/cell-input';
 import { Feedback, type FeedbackState } from '@/modules/shop/ui/components/feedback';
-import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { useRateCard } from '@/modules/shop/ui/use-rate-card';
 import { conditionReport } from '@/modules/shop/core/condition-report';
 import type { RateCard } from '@/modules/shop/core/rate-card';
@@ -181,9 +181,9 @@ const SAMPLE_WORDS = 'Side play 1.8 mm, keys 1.8 mm out of level, hammer grooves
 /** The manager's page for the grading rules: the shop defaults that turn measurements into a grade. Saving makes a new version. */
 export function GradeRulesScreen() {
   return (
-    <RoleGate roles={['manager']} title="Grading rules">
+    <AbilityGate ability="setGradeRules" title="Grading rules">
       <GradeRulesLoader />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

@@ -20,6 +20,8 @@ export const pianosGraph: GraphDomain = {
       model: Piano,
       fieldName: 'piano',
       listFieldName: 'pianos',
+      filters: { single: ['idEq', 'stockNumberEq'], list: ['limit', 'offset', 'range', 'stageEq', 'makerLikeNoCase'] },
+      orderBy: ['createdAt', 'stockNumber', 'stageChangedAt'],
       readPolicy: (_builder, ctx) => {
         if (!can(ctx.user.role, 'readPianos')) throw notAllowed('read pianos');
       },

@@ -42,6 +42,7 @@ export const shopGraph: GraphDomain = {
       model: WorkItem,
       fieldName: 'workItem',
       listFieldName: 'workItems',
+      filters: { single: ['idEq'], list: ['limit', 'offset', 'pianoIdEq', 'statusEq'] },
       readPolicy: (_builder, ctx) => {
         if (ctx.user.role !== 'technician' && ctx.user.role !== 'manager') throw notAllowed('read workshop items');
       },

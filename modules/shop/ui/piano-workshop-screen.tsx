@@ -26,7 +26,7 @@ import { Feedback, type FeedbackState } from './components/feedback';
 import { FinishPanel } from './components/finish-panel';
 import { PlanPanel } from './components/plan-panel';
 import { RemeasurePanel } from './components/remeasure-panel';
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { StageActions } from './stage-actions';
 import { StageTimeline } from './stage-timeline';
 import { useAssignees } from './use-assignees';
@@ -36,9 +36,9 @@ import { useAssessmentHistory, usePlanCommands, useWorkPlan, type WorkPlanView }
 /** A piano's workshop page: the manager's decision and plan, estimate against actual, re-measuring and finishing. */
 export function PianoWorkshopScreen({ id }: { id: number | null }) {
   return (
-    <RoleGate roles={['technician', 'manager']} title="Workshop">
+    <AbilityGate ability="workAtBench" title="Workshop">
       <PianoWorkshop id={id} />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

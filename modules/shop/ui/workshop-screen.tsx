@@ -16,15 +16,15 @@ import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { formatDate } from './work-format';
 
 /** The workshop at a glance: pianos waiting for a decision, pianos in the workshop, and the way to rates, overruns and climate. */
 export function WorkshopScreen() {
   return (
-    <RoleGate roles={['technician', 'manager']} title="Workshop">
+    <AbilityGate ability="workAtBench" title="Workshop">
       <Workshop />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 
