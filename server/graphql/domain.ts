@@ -33,3 +33,15 @@ export interface GraphDomain {
   queries?: (typeOf: TypeOf) => Fields;
   mutations?: (typeOf: TypeOf) => Fields;
 }
+
+/**
+ * Hand-written types that name generated ones (a piano's stage enum) are made once per schema: each
+ * build generates its types afresh, and one schema may not hold two types of one name.
+ */
+export function perSchema<T>(make: (typeOf: TypeOf) => T): (typeOf: TypeOf) => T {
+  const made = new WeakMap<TypeOf, T>();
+  return (typeOf) => {
+    if (!made.has(typeOf)) made.set(typeOf, make(typeOf));
+    return made.get(typeOf)!;
+  };
+}

@@ -4,6 +4,7 @@ import {
   getNamedType,
   GraphQLEnumType,
   GraphQLInt,
+  GraphQLList,
   GraphQLNonNull,
   GraphQLObjectType,
   GraphQLSchema,
@@ -103,6 +104,8 @@ function narrowGenerated(generated: GraphQLSchema, roots: RootFieldConfigs, read
     const order = r.orderBy?.length ? new GraphQLEnumType({ name: `${type.name}Order`, values: Object.fromEntries(r.orderBy.map((p) => [p, { value: p }])) }) : undefined;
     keep(r.fieldName, r.filters.single);
     keep(r.listFieldName, [...r.filters.list, ...(order ? ['orderBy', 'orderByDesc'] : [])], order);
+    // A list read answers a list, and each row is a row.
+    roots[r.listFieldName].type = new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(type)));
   }
   const schemas = new Map(readModels.map((r) => [typeNameOf(r.model), r.model.jsonSchema?.properties ?? {}]));
   for (const type of [...types]) {

@@ -10,6 +10,33 @@ export type UsersRole =
   | 'floor'
   | 'manager';
 
+export type PianosCaseCondition =
+  | 'excellent'
+  | 'good'
+  | 'worn'
+  | 'damaged';
+
+export type PianosKind =
+  | 'upright'
+  | 'grand';
+
+export type PianosStage =
+  | 'received'
+  | 'assessed'
+  | 'in_workshop'
+  | 'ready'
+  | 'on_floor'
+  | 'held'
+  | 'sold'
+  | 'delivered'
+  | 'wholesaled'
+  | 'returned_to_owner';
+
+export type PianosOrder =
+  | 'createdAt'
+  | 'stockNumber'
+  | 'stageChangedAt';
+
 export type MeQueryVariables = Exact<{ [key: string]: never; }>;
 
 
@@ -47,3 +74,45 @@ export type SetUserActiveMutationVariables = Exact<{
 
 
 export type SetUserActiveMutation = { setUserActive: { id: number, email: string, name: string, role: UsersRole, active: boolean, createdAt: string } };
+
+export type PianoQueryVariables = Exact<{
+  id?: number | null | undefined;
+}>;
+
+
+export type PianoQuery = { piano: { id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string } | null };
+
+export type PianoRecordFragment = { id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string };
+
+export type PianosQueryVariables = Exact<{
+  stage?: PianosStage | null | undefined;
+  maker?: string | null | undefined;
+  orderBy?: PianosOrder | null | undefined;
+  orderByDesc?: PianosOrder | null | undefined;
+  limit?: number | null | undefined;
+  offset?: number | null | undefined;
+}>;
+
+
+export type PianosQuery = { pianos: Array<{ id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string }> };
+
+export type StageCountsQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type StageCountsQuery = { stageCounts: Array<{ stage: PianosStage, count: number }> };
+
+export type StageHistoryQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type StageHistoryQuery = { stageHistory: Array<{ action: string, fromStage: PianosStage | null, toStage: PianosStage, why: string | null, by: string, byRole: string, at: string }> };
+
+export type MovePianoMutationVariables = Exact<{
+  pianoId: number;
+  action: string;
+  why?: string | null | undefined;
+}>;
+
+
+export type MovePianoMutation = { movePiano: { id: number, stage: PianosStage } };

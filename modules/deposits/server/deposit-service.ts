@@ -10,6 +10,7 @@ import { disclosureByToken } from '@/modules/disclosure/server/disclosure-servic
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
 import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
 import type { JobRun } from '@/modules/jobs/server/worker';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
@@ -30,7 +31,6 @@ const DAY = 86_400_000;
 const WEBHOOK_TOLERANCE_S = 300;
 // A hold's end job that wakes this little before the end still ends it (clocks differ slightly).
 const EXPIRY_GRACE_MS = 5_000;
-const pianoName = (p: Piano) => [p.maker, p.model].filter(Boolean).join(' ');
 const money = (minor: number, currency: string) => formatMoney(minor, currency as Currency);
 const expiryKey = (depositId: number) => `expire-hold:${depositId}`;
 

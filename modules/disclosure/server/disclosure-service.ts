@@ -12,6 +12,7 @@ import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, publis
 import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { StageMove } from '@/modules/pianos/server/stage-move-model';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
@@ -240,13 +241,13 @@ export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledg
     await deps.photos.put(pdfKey, pdf, 'application/pdf');
     await signed.$query(trx).patch({ pdfKey });
     const c = disclosure.content;
-    const pianoName = `${c.piano.maker}${c.piano.model ? ` ${c.piano.model}` : ''}`;
+    const named = pianoName(c.piano);
     await enqueue(trx, 'send-email', {
       to: signed.buyerEmail,
-      subject: `Your signed condition disclosure: ${pianoName}, ${c.piano.stockNumber}`,
+      subject: `Your signed condition disclosure: ${named}, ${c.piano.stockNumber}`,
       text: SIGNED_COPY_EMAIL({
         buyerName: signed.buyerName,
-        piano: pianoName,
+        piano: named,
         stockNumber: c.piano.stockNumber,
         dealerName: c.dealerName,
         version: disclosure.version,
@@ -284,7 +285,7 @@ export async function floorTag(deps: DisclosureDeps, actor: Actor, pianoId: numb
   if (!link) throw new AppError('CONFLICT', 'Publish the disclosure first: the tag carries its link.');
   return floorTagPdf({
     stockNumber: piano.stockNumber,
-    title: [piano.maker, piano.model].filter(Boolean).join(' '),
+    title: pianoName(piano),
     price: priceText(piano.askingPriceMinor, piano.priceCurrency),
     url: `${deps.publicUrl}/d/${link.token}`,
     dealerName: (await shopTexts()).dealerName,

@@ -5,6 +5,7 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -83,7 +84,7 @@ function PresentView({ pianoId, manager }: { pianoId: number; manager: boolean }
   }
 
   const disclosure = result?.state === 'ok' ? result.data : null;
-  const title = [piano.maker, piano.model].filter(Boolean).join(' ');
+  const title = pianoName(piano);
   const twoColumns = width >= 1200;
 
   const walkthrough = !token ? null : disclosure ? (

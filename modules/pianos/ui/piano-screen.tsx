@@ -56,7 +56,7 @@ export function PianoScreen({ id }: { id: number | null }) {
       </Screen>
     );
   }
-  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  const onFloorSide = !!user && can(user.role, 'showToBuyers');
   return (
     <Screen
       title={piano.stockNumber}
@@ -125,7 +125,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
         <PlayTestRecordings pianoId={piano.id} />
       </Section>
     ) : null;
-  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  const onFloorSide = !!user && can(user.role, 'sellPianos');
   const workshop = <WorkshopSummary pianoId={piano.id} />;
   const sale = onFloorSide ? (
     <Section title="Deposit and sale">

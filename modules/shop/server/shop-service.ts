@@ -7,6 +7,7 @@ import type { Actor } from '@/modules/accounts/server/user-service';
 import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { Assessment } from '@/modules/assessment/server/assessment-models';
 import { latestGradedAssessment } from '@/modules/assessment/server/assessment-service';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { cautionsFor } from '@/modules/shop/core/cautions';
@@ -410,7 +411,7 @@ export async function workQueue(actor: Actor, raw: { scope?: string | null; limi
     scope,
     total: counts[scope],
     counts,
-    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: [items[n].maker, items[n].model].filter(Boolean).join(' ') })),
+    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: pianoName(items[n]) })),
     running: running ? { id: running.id, title: running.title, stockNumber: running.stockNumber } : null,
   };
 }
