@@ -27,7 +27,7 @@ async function refused(role: Role, query: string, variables?: Json): Promise<Jso
 }
 
 async function assessedPiano(): Promise<number> {
-  const out = await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() });
+  const out = await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() });
   return out.submitIntake.pianoId;
 }
 const historyOf = async (pianoId: number) => (await call('manager', `{ stageHistory(pianoId: ${pianoId}) }`)).stageHistory as Json[];
@@ -62,7 +62,7 @@ describe('the decision and the plan', () => {
   });
 
   it('selling as it stands a piano not recommended for retail needs a manager’s reason, kept in the stage history', async () => {
-    const out = await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ measurements: buildMeasurements({ overallImpression: 2 }) }) });
+    const out = await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ measurements: buildMeasurements({ overallImpression: 2 }) }) });
     const pianoId = out.submitIntake.pianoId;
     expect(out.submitIntake.grade).toMatchObject({ notRecommendedForRetail: true, readiness: 'wholesale' });
     for (const why of [null, '', '   ', 'cheap']) {
@@ -105,7 +105,7 @@ describe('moves through the stages', () => {
     await call('floor', `mutation { movePiano(pianoId: ${pianoId}, action: "put_on_floor") { stage } }`);
     const sell = await refused('technician', `mutation { movePiano(pianoId: ${pianoId}, action: "sell") { stage } }`);
     expect(sell).toMatchObject({ message: 'Not allowed: the technician role cannot record the sale.', extensions: { code: 'NOT_ALLOWED' } });
-    const edit = await refused('floor', 'mutation($input: JSON!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements(), changeNote: 'x' } });
+    const edit = await refused('floor', 'mutation($input: CorrectionInput!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements(), changeNote: 'x' } });
     expect(edit.extensions.code).toBe('NOT_ALLOWED');
     const wrongStage = await refused('floor', `mutation { movePiano(pianoId: ${pianoId}, action: "deliver") { stage } }`);
     expect(wrongStage.message).toBe('A piano in stage "on_floor" cannot record the delivery; it must be sold.');

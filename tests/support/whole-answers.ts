@@ -52,3 +52,10 @@ export function wholeAnswers(query: string): string {
   cache.set(query, out);
   return out;
 }
+
+/** An answer with its null fields left out: GraphQL answers null where the core leaves a field out. */
+export function withoutNulls<T>(value: T): T {
+  if (Array.isArray(value)) return value.map(withoutNulls) as T;
+  if (value && typeof value === 'object') return Object.fromEntries(Object.entries(value).filter(([, v]) => v !== null && v !== undefined).map(([k, v]) => [k, withoutNulls(v)])) as T;
+  return value;
+}

@@ -37,6 +37,259 @@ export type PianosOrder =
   | 'stockNumber'
   | 'stageChangedAt';
 
+export type KeytopDamage =
+  | 'chipped'
+  | 'stained'
+  | 'yellowed'
+  | 'missing';
+
+export type HammerFelt =
+  | 'soft'
+  | 'firm'
+  | 'hard'
+  | 'chemically_hardened';
+
+export type HammerFeltLeft =
+  | 'ample'
+  | 'thin'
+  | 'none';
+
+export type SteelCorrosion =
+  | 'none'
+  | 'light'
+  | 'moderate'
+  | 'heavy';
+
+export type BassWinding =
+  | 'bright'
+  | 'dull'
+  | 'dark'
+  | 'green';
+
+export type TuningPins =
+  | 'firm'
+  | 'some_loose'
+  | 'loose';
+
+/** A part of the piano the grade judges. */
+export type Area =
+  | 'keys'
+  | 'hammers'
+  | 'strings'
+  | 'soundboard'
+  | 'tuning'
+  | 'play';
+
+/** What a finding says: fine, noted, needs work, major work. */
+export type Mark =
+  | 'fine'
+  | 'noted'
+  | 'work'
+  | 'major';
+
+/** A kind of workshop task a finding can call for. */
+export type WorkTask =
+  | 'regulation'
+  | 'rebush_keys'
+  | 'ease_front_rail_pins'
+  | 'ease_sticking_keys'
+  | 'replace_keytops'
+  | 'reshape_voice_hammers'
+  | 'replace_hammers'
+  | 'voicing'
+  | 'replace_broken_strings'
+  | 'restring_section'
+  | 'soundboard_repair'
+  | 'reglue_ribs'
+  | 'pitch_raise'
+  | 'fine_tuning'
+  | 'tuning_pin_repair'
+  | 'cabinet_touch_up';
+
+/** A measurement, by its name. */
+export type MeasureField =
+  | 'keySidePlayMm'
+  | 'keyTouchesNeighbour'
+  | 'keysTouchingNeighbour'
+  | 'keyLevelDeviationMm'
+  | 'keytopDamage'
+  | 'stickingKeys'
+  | 'deadKeys'
+  | 'hammerGrooveDepthMm'
+  | 'hammerFelt'
+  | 'hammerFeltLeft'
+  | 'steelCorrosion'
+  | 'bassWinding'
+  | 'brokenStrings'
+  | 'soundboardCracks'
+  | 'ribsSeparated'
+  | 'a4Hz'
+  | 'tuningPins'
+  | 'bassEvenness'
+  | 'middleEvenness'
+  | 'trebleEvenness'
+  | 'dynamicRange'
+  | 'overallImpression'
+  | 'notesStickingOut';
+
+/** The verdict a dealer acts on. */
+export type Readiness =
+  | 'floor'
+  | 'work_first'
+  | 'wholesale'
+  | 'unjudged';
+
+export type Acquisition =
+  | 'trade_in'
+  | 'purchase'
+  | 'consignment';
+
+export type InspectionPlace =
+  | 'customer_home'
+  | 'showroom'
+  | 'workshop';
+
+export type IntakeInput = {
+  seller: SellerInput;
+  /** trade_in, purchase, consignment */
+  acquisition?: string | null | undefined;
+  receivedOn?: string | null | undefined;
+  /** customer_home, showroom, workshop */
+  inspectedAt?: string | null | undefined;
+  piano: IntakePianoInput;
+  notes?: string | null | undefined;
+  measurements: MeasurementsInput;
+  photoIds?: Array<number> | null | undefined;
+  recordingIds?: Array<number> | null | undefined;
+  /** A piano already in stock in stage received, assessed by this intake. */
+  pianoId?: number | null | undefined;
+  /** The earlier record of the same piano coming back. */
+  samePianoAs?: number | null | undefined;
+};
+
+export type SellerInput = {
+  name: string;
+  phone?: string | null | undefined;
+  email?: string | null | undefined;
+  address?: string | null | undefined;
+};
+
+export type IntakePianoInput = {
+  maker: string;
+  model?: string | null | undefined;
+  serialNumber?: string | null | undefined;
+  year?: number | null | undefined;
+  yearIsEstimate?: boolean | null | undefined;
+  yearFrom?: number | null | undefined;
+  yearTo?: number | null | undefined;
+  /** upright or grand */
+  kind?: string | null | undefined;
+  sizeCm?: number | null | undefined;
+  finish?: string | null | undefined;
+  /** excellent, good, worn, damaged */
+  caseCondition?: string | null | undefined;
+  caseNotes?: string | null | undefined;
+};
+
+/** What an inspection measured; leave out what was not measured. */
+export type MeasurementsInput = {
+  /** Key side play */
+  keySidePlayMm?: number | null | undefined;
+  /** A key can be pushed until it touches its neighbour */
+  keyTouchesNeighbour?: boolean | null | undefined;
+  /** Keys that touch a neighbour */
+  keysTouchingNeighbour?: Array<number> | null | undefined;
+  /** Key level deviation */
+  keyLevelDeviationMm?: number | null | undefined;
+  /** Keytop damage */
+  keytopDamage?: Array<string> | null | undefined;
+  /** Sticking keys */
+  stickingKeys?: Array<number> | null | undefined;
+  /** Silent (dead) keys */
+  deadKeys?: Array<number> | null | undefined;
+  /** Deepest string groove */
+  hammerGrooveDepthMm?: number | null | undefined;
+  /** Hammer felt */
+  hammerFelt?: string | null | undefined;
+  /** Felt left to shape */
+  hammerFeltLeft?: string | null | undefined;
+  /** Steel (treble) string corrosion */
+  steelCorrosion?: string | null | undefined;
+  /** Bass string winding */
+  bassWinding?: string | null | undefined;
+  /** Broken strings */
+  brokenStrings?: number | null | undefined;
+  /** Soundboard cracks */
+  soundboardCracks?: Array<SoundboardCrackInput> | null | undefined;
+  /** Ribs separated from the board */
+  ribsSeparated?: boolean | null | undefined;
+  /** Measured A4 */
+  a4Hz?: number | null | undefined;
+  /** Tuning pins */
+  tuningPins?: string | null | undefined;
+  /** Bass evenness */
+  bassEvenness?: number | null | undefined;
+  /** Middle evenness */
+  middleEvenness?: number | null | undefined;
+  /** Treble evenness */
+  trebleEvenness?: number | null | undefined;
+  /** Dynamic range */
+  dynamicRange?: number | null | undefined;
+  /** Overall impression */
+  overallImpression?: number | null | undefined;
+  /** Notes that stand out */
+  notesStickingOut?: Array<number> | null | undefined;
+};
+
+export type SoundboardCrackInput = {
+  lengthCm: number;
+  widestGapMm: number;
+  crossesRib?: boolean | null | undefined;
+  buzzes?: boolean | null | undefined;
+  hurtsTuning?: boolean | null | undefined;
+  note?: string | null | undefined;
+};
+
+export type CorrectionInput = {
+  pianoId: number;
+  measurements: MeasurementsInput;
+  changeNote?: string | null | undefined;
+  photoIds?: Array<number> | null | undefined;
+  recordingIds?: Array<number> | null | undefined;
+  baseVersion?: number | null | undefined;
+};
+
+export type GradeRulesInput = {
+  /** Side play is normal up to */
+  keySidePlayNormalMm: number;
+  /** Key level is sound up to */
+  keyLevelSoundMm: number;
+  /** Light regulation up to */
+  keyLevelLightRegulationMm: number;
+  /** Full regulation at */
+  keyLevelFullRegulationMm: number;
+  /** Hours for a light regulation */
+  lightRegulationHours: number;
+  /** Hours for a full regulation */
+  fullRegulationHours: number;
+  /** Grooves are normal up to */
+  hammerGrooveNormalMm: number;
+  /** Replace the hammers at */
+  hammerGrooveReplaceMm: number;
+  /** A crack is wide from a gap of */
+  wideCrackGapMm: number;
+  /** Pitch is sound within */
+  pitchSoundCents: number;
+  /** Pitch raise when flatter than */
+  pitchRaiseCents: number;
+  /** Poor at or below */
+  playPoorAtOrBelow: number;
+  /** Good at or above */
+  playGoodAtOrAbove: number;
+  /** A grade is final from this many inspected areas */
+  minInspectedAreas: number;
+};
+
 export type MeQueryVariables = Exact<{ [key: string]: never; }>;
 
 
@@ -74,6 +327,60 @@ export type SetUserActiveMutationVariables = Exact<{
 
 
 export type SetUserActiveMutation = { setUserActive: { id: number, email: string, name: string, role: UsersRole, active: boolean, createdAt: string } };
+
+export type GradePartsFragment = { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> };
+
+export type AssessmentHistoryQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type AssessmentHistoryQuery = { assessmentHistory: Array<{ id: number, version: number, kind: string, rulesVersion: string, changeNote: string | null, submittedBy: string, submittedAt: string, remeasured: Array<MeasureField>, measurements: { keySidePlayMm: number | null, keyTouchesNeighbour: boolean | null, keysTouchingNeighbour: Array<number> | null, keyLevelDeviationMm: number | null, keytopDamage: Array<KeytopDamage> | null, stickingKeys: Array<number> | null, deadKeys: Array<number> | null, hammerGrooveDepthMm: number | null, hammerFelt: HammerFelt | null, hammerFeltLeft: HammerFeltLeft | null, steelCorrosion: SteelCorrosion | null, bassWinding: BassWinding | null, brokenStrings: number | null, ribsSeparated: boolean | null, a4Hz: number | null, tuningPins: TuningPins | null, bassEvenness: number | null, middleEvenness: number | null, trebleEvenness: number | null, dynamicRange: number | null, overallImpression: number | null, notesStickingOut: Array<number> | null, soundboardCracks: Array<{ lengthCm: number, widestGapMm: number, crossesRib: boolean, buzzes: boolean, hurtsTuning: boolean, note: string | null }> | null }, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } }> };
+
+export type SetGradeRulesMutationVariables = Exact<{
+  r: GradeRulesInput;
+}>;
+
+
+export type SetGradeRulesMutation = { setGradeRules: { version: string, keySidePlayNormalMm: number, keyLevelSoundMm: number, keyLevelLightRegulationMm: number, keyLevelFullRegulationMm: number, lightRegulationHours: number, fullRegulationHours: number, hammerGrooveNormalMm: number, hammerGrooveReplaceMm: number, wideCrackGapMm: number, pitchSoundCents: number, pitchRaiseCents: number, playPoorAtOrBelow: number, playGoodAtOrAbove: number, minInspectedAreas: number } };
+
+export type GradeRulesQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type GradeRulesQuery = { gradeRules: { version: string, keySidePlayNormalMm: number, keyLevelSoundMm: number, keyLevelLightRegulationMm: number, keyLevelFullRegulationMm: number, lightRegulationHours: number, fullRegulationHours: number, hammerGrooveNormalMm: number, hammerGrooveReplaceMm: number, wideCrackGapMm: number, pitchSoundCents: number, pitchRaiseCents: number, playPoorAtOrBelow: number, playGoodAtOrAbove: number, minInspectedAreas: number } };
+
+export type IntakeRecordQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type IntakeRecordQuery = { intake: { pianoId: number, acquisition: Acquisition, receivedOn: string, inspectedAt: InspectionPlace, createdAt: string, notes: string | null, samePianoAs: { id: number, stockNumber: string } | null, seller: { name: string, phone: string | null, email: string | null, address: string | null } | null } | null };
+
+export type SamePianosQueryVariables = Exact<{
+  maker: string;
+  model?: string | null | undefined;
+  serialNumber: string;
+  exceptPianoId?: number | null | undefined;
+}>;
+
+
+export type SamePianosQuery = { samePianos: Array<{ id: number, stockNumber: string, stage: string, maker: string, model: string | null, serialNumber: string | null, createdAt: string }> };
+
+export type SubmittedPartsFragment = { pianoId: number, stockNumber: string, assessmentId: number, version: number, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } };
+
+export type SubmitIntakeMutationVariables = Exact<{
+  input: IntakeInput;
+}>;
+
+
+export type SubmitIntakeMutation = { submitIntake: { pianoId: number, stockNumber: string, assessmentId: number, version: number, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } } };
+
+export type CorrectAssessmentMutationVariables = Exact<{
+  input: CorrectionInput;
+}>;
+
+
+export type CorrectAssessmentMutation = { correctAssessment: { pianoId: number, stockNumber: string, assessmentId: number, version: number, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } } };
 
 export type PianoQueryVariables = Exact<{
   id?: number | null | undefined;
@@ -116,3 +423,7 @@ export type MovePianoMutationVariables = Exact<{
 
 
 export type MovePianoMutation = { movePiano: { id: number, stage: PianosStage } };
+
+export type MeasurementFieldsFragment = { keySidePlayMm: number | null, keyTouchesNeighbour: boolean | null, keysTouchingNeighbour: Array<number> | null, keyLevelDeviationMm: number | null, keytopDamage: Array<KeytopDamage> | null, stickingKeys: Array<number> | null, deadKeys: Array<number> | null, hammerGrooveDepthMm: number | null, hammerFelt: HammerFelt | null, hammerFeltLeft: HammerFeltLeft | null, steelCorrosion: SteelCorrosion | null, bassWinding: BassWinding | null, brokenStrings: number | null, ribsSeparated: boolean | null, a4Hz: number | null, tuningPins: TuningPins | null, bassEvenness: number | null, middleEvenness: number | null, trebleEvenness: number | null, dynamicRange: number | null, overallImpression: number | null, notesStickingOut: Array<number> | null, soundboardCracks: Array<{ lengthCm: number, widestGapMm: number, crossesRib: boolean, buzzes: boolean, hurtsTuning: boolean, note: string | null }> | null };
+
+export type GradeRuleFieldsFragment = { version: string, keySidePlayNormalMm: number, keyLevelSoundMm: number, keyLevelLightRegulationMm: number, keyLevelFullRegulationMm: number, lightRegulationHours: number, fullRegulationHours: number, hammerGrooveNormalMm: number, hammerGrooveReplaceMm: number, wideCrackGapMm: number, pitchSoundCents: number, pitchRaiseCents: number, playPoorAtOrBelow: number, playGoodAtOrAbove: number, minInspectedAreas: number };
