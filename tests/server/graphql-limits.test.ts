@@ -1,5 +1,6 @@
 import { buildSchema as buildGraphSchema, getIntrospectionQuery, parse } from 'graphql';
 
+import { HISTORY_QUERY } from '@/modules/assessment/ui/use-assessment-history';
 import { PIANOS_QUERY, pianoListVariables } from '@/modules/pianos/ui/use-pianos';
 import { validateDocument } from '@/server/graphql/http';
 import { MAX_QUERY_DEPTH, QUERY_LIMITS } from '@/server/graphql/limits';
@@ -39,8 +40,19 @@ describe('what one GraphQL document may ask for', () => {
   });
 
   it('refuses a document whose lists multiply past the cost limit', async () => {
-    // Every version of a piano's assessment (50 reckoned), each finding (10), each piece of work (10).
-    await refused('{ assessmentHistory(pianoId: 1) { id grade { findings { check fields work { task note hours } } } } }', /estimated cost is \d+, at most 10000/);
+    // Pianos (50 reckoned per page), each asked for four times over, each with its creator.
+    const page = 'pianos { id stockNumber maker model serialNumber year kind sizeCm finish stage stageChangedAt createdAt updatedAt createdBy { id name } }';
+    await refused(`{ a: ${page} b: ${page} c: ${page} d: ${page} e: ${page} f: ${page} g: ${page} h: ${page} i: ${page} j: ${page} k: ${page} l: ${page} m: ${page} n: ${page} }`, /estimated cost is \d+, at most 10000/);
+  });
+
+  it('counts a list inside a hand-written answer once with its row: the history screen asks for every version whole', async () => {
+    // Findings and their work come with the version's row; only the versions are reckoned as rows (50).
+    const { piano_id: pianoId } = await api.knex('assessments').orderBy('id').first();
+    const res = await api.gql(token, HISTORY_QUERY, { pianoId });
+    expect(res.status).toBe(200);
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.assessmentHistory.length).toBeGreaterThan(0);
+    expect(res.body.data.assessmentHistory[0].grade.findings.length).toBeGreaterThan(0);
   });
 
   it('counts the rows a variable asks for', async () => {

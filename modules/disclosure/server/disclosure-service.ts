@@ -5,6 +5,7 @@ import path from 'node:path';
 import Handlebars from 'handlebars';
 import type { Knex } from 'knex';
 
+import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
 import { gradedAssessments, remeasuredFieldsOf } from '@/modules/assessment/server/assessment-service';
@@ -38,7 +39,7 @@ const TOKEN = /^[A-Za-z0-9_-]{32}$/;
 const newToken = () => randomBytes(24).toString('base64url');
 const NOT_FOUND = () => new AppError('NOT_FOUND', 'Not found.');
 
-const canPublish = (a: Actor) => a.role === 'manager' || a.role === 'floor';
+const canPublish = (a: Actor) => can(a.role, 'showToBuyers');
 
 export function priceText(minor: number | null, currency: string | null): string | null {
   return minor != null && currency ? formatMoney(minor, currency as Currency) : null;
@@ -51,7 +52,7 @@ export async function shopTexts(): Promise<{ dealerName: string; warranty: strin
 }
 
 export async function setShopTexts(actor: Actor, raw: unknown) {
-  if (actor.role !== 'manager') throw notAllowed('edit the disclosure texts');
+  if (!can(actor.role, 'editShopTexts')) throw notAllowed('edit the disclosure texts');
   const input = textsInput.parse(raw);
   for (const [key, value] of Object.entries(input)) {
     await ShopSetting.query().insert({ key, value: JSON.stringify(value) as never, updatedById: actor.id }).onConflict('key').merge();
@@ -60,7 +61,7 @@ export async function setShopTexts(actor: Actor, raw: unknown) {
 }
 
 export async function setAskingPrice(actor: Actor, raw: unknown): Promise<Piano> {
-  if (actor.role !== 'manager') throw notAllowed('set prices');
+  if (!can(actor.role, 'setPrices')) throw notAllowed('set prices');
   const input = priceInput.parse(raw);
   const piano = await Piano.query().findById(input.pianoId);
   if (!piano) throw notFound(`piano ${input.pianoId}`);
@@ -136,7 +137,7 @@ export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pian
 }
 
 export async function disclosureVersions(actor: Actor, pianoId: number) {
-  if (!['floor', 'manager', 'intake', 'technician'].includes(actor.role)) throw notAllowed('read disclosures');
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read disclosures');
   const link = await DisclosureLink.query().findById(pianoId);
   const rows = await Disclosure.query().where('piano_id', pianoId).orderBy('version').select('id', 'version', 'digest', 'published_at', 'published_by_id');
   return { token: link?.token ?? null, versions: rows.map((r) => ({ id: r.id, version: r.version, digest: r.digest, publishedAt: r.publishedAt })) };

@@ -1,5 +1,6 @@
 import { GraphQLBoolean, GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLString } from 'graphql';
 
+import { can } from '@/modules/accounts/core/roles';
 import { submitRemeasurement } from '@/modules/assessment/server/assessment-service';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { notAllowed } from '@/server/errors';
@@ -13,7 +14,6 @@ import {
   addWorkItem,
   approvePlan,
   correctTimeEntry,
-  currentRateCard,
   decide,
   finishWorkshop,
   itemDetail,
@@ -21,6 +21,7 @@ import {
   logTime,
   overruns,
   planView,
+  rateCardFor,
   recentClimate,
   removeWorkItem,
   setRateCard,
@@ -44,12 +45,12 @@ export const shopGraph: GraphDomain = {
       listFieldName: 'workItems',
       filters: { single: ['idEq'], list: ['limit', 'offset', 'pianoIdEq', 'statusEq'] },
       readPolicy: (_builder, ctx) => {
-        if (ctx.user.role !== 'technician' && ctx.user.role !== 'manager') throw notAllowed('read workshop items');
+        if (!can(ctx.user.role, 'workAtBench')) throw notAllowed('read workshop items');
       },
     },
   ],
   queries: () => ({
-    rateCard: { type: json.type, resolve: () => currentRateCard() },
+    rateCard: { type: json.type, resolve: (_r, _a, ctx) => rateCardFor(ctx.user) },
     workQueue: {
       type: json.type,
       description: 'A page of open items on pianos in the workshop, by priority and due date: yours, the unassigned ones, or (managers) all. { scope, total, counts, items, running }.',

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { useGradeRules } from '@/modules/assessment/ui/use-grade-rules';
 import { STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
 import type { Decision } from '@/modules/shop/core/work-input';
@@ -63,8 +63,8 @@ function PianoWorkshop({ id }: { id: number | null }) {
 }
 
 function WorkshopPage({ piano }: { piano: PianoRecord }) {
-  const { user } = useSession();
-  const manager = user?.role === 'manager';
+  // Deciding, planning and approving go together (decidePianos, planWork): the manager's part of the page.
+  const manager = useCan()('planWork');
   const wide = useWide();
   const { plan, loaded: planLoaded, error: planError, refresh: refreshPlan } = useWorkPlan(piano.id);
   const { history, latest, refresh: refreshHistory } = useAssessmentHistory(piano.id);

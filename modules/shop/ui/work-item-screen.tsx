@@ -65,7 +65,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
   const [doneReason, setDoneReason] = useState('');
 
   const done = item.status === 'done';
-  const someoneElses = user?.role === 'technician' && item.assignedToId != null && item.assignedToId !== me;
+  const someoneElses = !!user && !can(user.role, 'workOnAnyItem') && item.assignedToId != null && item.assignedToId !== me;
   const blockedHard =
     piano && piano.stage !== 'in_workshop'
       ? `This piano is ${STAGE_LABELS[piano.stage].toLowerCase()}, not in the workshop: work is logged only while it is there.`
