@@ -149,6 +149,25 @@ export type InspectionPlace =
   | 'showroom'
   | 'workshop';
 
+/** Where a deposit stands. */
+export type DepositStatus =
+  | 'pending'
+  | 'holding'
+  | 'applied'
+  | 'released'
+  | 'expired'
+  | 'refunding'
+  | 'refunded'
+  | 'cancelled';
+
+/** A currency Feltwire prices in, by its ISO 4217 code. */
+export type Currency =
+  | 'USD'
+  | 'CAD'
+  | 'EUR'
+  | 'GBP'
+  | 'JPY';
+
 export type IntakeInput = {
   seller: SellerInput;
   /** trade_in, purchase, consignment */
@@ -290,6 +309,13 @@ export type GradeRulesInput = {
   minInspectedAreas: number;
 };
 
+export type DepositRulesInput = {
+  percent: number;
+  minimumMajor: number;
+  holdDays: number;
+  salesTaxPct: number;
+};
+
 export type MeQueryVariables = Exact<{ [key: string]: never; }>;
 
 
@@ -381,6 +407,52 @@ export type CorrectAssessmentMutationVariables = Exact<{
 
 
 export type CorrectAssessmentMutation = { correctAssessment: { pianoId: number, stockNumber: string, assessmentId: number, version: number, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } } };
+
+export type DepositPartsFragment = { id: number, pianoId: number, status: DepositStatus, amountMinor: number, currency: string, buyerName: string, buyerEmail: string, createdAt: string, paidAt: string | null, holdExpiresAt: string | null, closedAt: string | null, refundedMinor: number, refundId: string | null, closeReason: string | null };
+
+export type BalancePartsFragment = { priceMinor: number, taxMinor: number, totalMinor: number, depositMinor: number, balanceMinor: number, currency: Currency, salesTaxPct: number };
+
+export type DepositsQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type DepositsQuery = { deposits: { deposits: Array<{ id: number, pianoId: number, status: DepositStatus, amountMinor: number, currency: string, buyerName: string, buyerEmail: string, createdAt: string, paidAt: string | null, holdExpiresAt: string | null, closedAt: string | null, refundedMinor: number, refundId: string | null, closeReason: string | null }>, balance: { priceMinor: number, taxMinor: number, totalMinor: number, depositMinor: number, balanceMinor: number, currency: Currency, salesTaxPct: number } | null, rules: { percent: number, minimumMajor: number, holdDays: number, salesTaxPct: number } } };
+
+export type DepositRulesQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type DepositRulesQuery = { depositRules: { percent: number, minimumMajor: number, holdDays: number, salesTaxPct: number } };
+
+export type ReleaseHoldMutationVariables = Exact<{
+  depositId: number;
+  refund: boolean;
+  why?: string | null | undefined;
+}>;
+
+
+export type ReleaseHoldMutation = { releaseHold: { id: number, pianoId: number, status: DepositStatus, amountMinor: number, currency: string, buyerName: string, buyerEmail: string, createdAt: string, paidAt: string | null, holdExpiresAt: string | null, closedAt: string | null, refundedMinor: number, refundId: string | null, closeReason: string | null } };
+
+export type RefundDepositMutationVariables = Exact<{
+  depositId: number;
+}>;
+
+
+export type RefundDepositMutation = { refundDeposit: { id: number, pianoId: number, status: DepositStatus, amountMinor: number, currency: string, buyerName: string, buyerEmail: string, createdAt: string, paidAt: string | null, holdExpiresAt: string | null, closedAt: string | null, refundedMinor: number, refundId: string | null, closeReason: string | null } };
+
+export type RecordSaleMutationVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type RecordSaleMutation = { recordSale: { stage: PianosStage, balance: { priceMinor: number, taxMinor: number, totalMinor: number, depositMinor: number, balanceMinor: number, currency: Currency, salesTaxPct: number } | null } };
+
+export type SetDepositRulesMutationVariables = Exact<{
+  r: DepositRulesInput;
+}>;
+
+
+export type SetDepositRulesMutation = { setDepositRules: { percent: number, minimumMajor: number, holdDays: number, salesTaxPct: number } };
 
 export type PianoQueryVariables = Exact<{
   id?: number | null | undefined;

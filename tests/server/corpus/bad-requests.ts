@@ -230,7 +230,7 @@ const graphql: BadRequest[] = [
   graph('a rate card of junk', 'manager', 'mutation($c: JSON) { setRateCard(card: $c) }', { c: { hourlyRateMinor: 'lots' } }),
   graph('releasing a hold as floor staff', 'floor', 'mutation { releaseHold(depositId: 1, refund: true) }'),
   graph('refunding a deposit that does not exist', 'manager', 'mutation { refundDeposit(depositId: 424242) }'),
-  graph('deposit rules of 200 %', 'manager', 'mutation($r: JSON) { setDepositRules(rules: $r) }', { r: { percent: 200, minimumMajor: 0, holdDays: 7, salesTaxPct: 0 } }),
+  graph('deposit rules of 200 %', 'manager', 'mutation($r: DepositRulesInput!) { setDepositRules(rules: $r) }', { r: { percent: 200, minimumMajor: 0, holdDays: 7, salesTaxPct: 0 } }),
   graph('a mutation over GET', 'manager', 'mutation { removeWorkItem(itemId: 1) }'),
 ];
 // The one request sent by GET: a mutation, which GraphQL over HTTP refuses there.
