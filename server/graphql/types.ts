@@ -16,6 +16,8 @@ import {
   type GraphQLOutputType,
 } from 'graphql';
 
+import { CURRENCIES } from '@/modules/shop/core/money';
+
 import type { GraphContext } from './context';
 
 // Small builders for the hand-written types: every domain answer and input is a type of its own.
@@ -46,3 +48,6 @@ export function input(name: string, fields: Record<string, GraphQLInputType | Gr
   const wrap = Object.fromEntries(Object.entries(fields).map(([k, v]) => [k, isType(v) ? { type: v } : v])) as GraphQLInputFieldConfigMap;
   return new GraphQLInputObjectType({ name, description, fields: wrap });
 }
+
+/** Every money field's currency, one enum for every domain. */
+export const CurrencyType = enumOf('Currency', CURRENCIES, 'A currency Feltwire prices in, by its ISO 4217 code.');

@@ -35,7 +35,7 @@ describe('a published disclosure', () => {
     const out = (await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
     pianoId = out.pianoId;
     stockNumber = out.stockNumber;
-    await call('manager', 'mutation($i: JSON!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 349500, currency: 'USD' } });
+    await call('manager', 'mutation($i: AskingPriceInput!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 349500, currency: 'USD' } });
     const pub = (await call('manager', `mutation { publishDisclosure(pianoId: ${pianoId}) }`)).publishDisclosure;
     token = pub.token;
     expect(pub).toMatchObject({ version: 1, unchanged: false, url: `http://feltwire.test/d/${token}` });
@@ -101,7 +101,7 @@ describe('a published disclosure', () => {
   it('refuses publishing by a technician and pricing by intake staff', async () => {
     const tech = await api.gql(await api.tokenFor('technician'), `mutation { publishDisclosure(pianoId: ${pianoId}) }`);
     expect(tech.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
-    const price = await api.gql(await api.tokenFor('intake'), 'mutation($i: JSON!) { setAskingPrice(input: $i) { id } }', { i: { pianoId, askingPriceMinor: 1, currency: 'USD' } });
+    const price = await api.gql(await api.tokenFor('intake'), 'mutation($i: AskingPriceInput!) { setAskingPrice(input: $i) { id } }', { i: { pianoId, askingPriceMinor: 1, currency: 'USD' } });
     expect(price.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
   });
 

@@ -309,6 +309,17 @@ export type GradeRulesInput = {
   minInspectedAreas: number;
 };
 
+export type AskingPriceInput = {
+  pianoId: number;
+  askingPriceMinor: number;
+  currency: Currency;
+};
+
+export type ShopTextsInput = {
+  dealerName: string;
+  warranty: string;
+};
+
 export type DepositRulesInput = {
   percent: number;
   minimumMajor: number;
@@ -453,6 +464,53 @@ export type SetDepositRulesMutationVariables = Exact<{
 
 
 export type SetDepositRulesMutation = { setDepositRules: { percent: number, minimumMajor: number, holdDays: number, salesTaxPct: number } };
+
+export type DisclosuresQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type DisclosuresQuery = { disclosures: { token: string | null, versions: Array<{ id: number, version: number, digest: string, publishedAt: string }> } };
+
+export type AcknowledgementsQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type AcknowledgementsQuery = { acknowledgements: Array<{ id: number, version: number, buyerName: string, buyerEmail: string, digest: string, acknowledgedAt: string, countersignedBy: string | null, countersignedAt: string | null, hasPdf: boolean }> };
+
+export type PublishDisclosureMutationVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type PublishDisclosureMutation = { publishDisclosure: { version: number, digest: string, token: string, url: string, publishedAt: string, unchanged: boolean } };
+
+export type CountersignMutationVariables = Exact<{
+  acknowledgementId: number;
+}>;
+
+
+export type CountersignMutation = { countersign: { id: number, countersignedAt: string, countersignedBy: string } };
+
+export type SetAskingPriceMutationVariables = Exact<{
+  i: AskingPriceInput;
+}>;
+
+
+export type SetAskingPriceMutation = { setAskingPrice: { id: number, askingPriceMinor: number | null, priceCurrency: string | null } };
+
+export type ShopTextsQueryVariables = Exact<{ [key: string]: never; }>;
+
+
+export type ShopTextsQuery = { shopTexts: { dealerName: string, warranty: string } };
+
+export type SetShopTextsMutationVariables = Exact<{
+  t: ShopTextsInput;
+}>;
+
+
+export type SetShopTextsMutation = { setShopTexts: { dealerName: string, warranty: string } };
 
 export type PianoQueryVariables = Exact<{
   id?: number | null | undefined;

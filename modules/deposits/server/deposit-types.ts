@@ -2,8 +2,7 @@
 import { GraphQLFloat, type GraphQLEnumType } from 'graphql';
 
 import { DEPOSIT_STATUSES } from '@/modules/deposits/core/deposit';
-import { CURRENCIES } from '@/modules/shop/core/money';
-import { enumOf, float, input, int, list, nn, object, optStr, str } from '@/server/graphql/types';
+import { CurrencyType, enumOf, float, input, int, list, nn, object, optStr, str } from '@/server/graphql/types';
 
 export const DepositStatusType = enumOf('DepositStatus', DEPOSIT_STATUSES, 'Where a deposit stands.');
 
@@ -23,8 +22,6 @@ export const DepositType = object('Deposit', {
   refundId: optStr,
   closeReason: optStr,
 });
-
-export const CurrencyType = enumOf('Currency', CURRENCIES, 'A currency Feltwire prices in, by its ISO 4217 code.');
 
 export const BalanceType = object('Balance', { priceMinor: int, taxMinor: int, totalMinor: int, depositMinor: int, balanceMinor: int, currency: nn(CurrencyType), salesTaxPct: float }, 'What is due at the sale: price and sales tax less the deposit.');
 
