@@ -7,7 +7,7 @@ import path from 'node:path';
 import { codegen } from '@graphql-codegen/core';
 import * as operations from '@graphql-codegen/typescript-operations';
 import { gqlPluckFromCodeStringSync } from '@graphql-tools/graphql-tag-pluck';
-import { getNamedType, isObjectType, parse, printSchema, type DocumentNode, type GraphQLObjectType, type GraphQLSchema } from 'graphql';
+import { getNamedType, isObjectType, Kind, NoUnusedFragmentsRule, parse, printSchema, specifiedRules, validate, type DocumentNode, type GraphQLObjectType, type GraphQLSchema } from 'graphql';
 
 import { DOMAINS } from '@/server/graphql/domains';
 import { buildSchema } from '@/server/graphql/schema';
@@ -53,14 +53,31 @@ export function tableFragments(schema: GraphQLSchema): string {
   return `${HEADER}\n// From MEASURES (modules/assessment/core/measurements.ts) and RULE_FIELDS (rules-input.ts).\n${fragment('MEASUREMENT_FIELDS', 'MeasurementFields', 'Measurements')}${fragment('GRADE_RULE_FIELDS', 'GradeRuleFields', 'GradeRules')}`;
 }
 
+/** Every screen's document checked against the schema (with the fragments of every file), so a field a screen asks for that the server lost fails here. */
+function checkDocuments(schema: GraphQLSchema, docs: { location: string; document: DocumentNode }[]): void {
+  const fragments = docs.flatMap((d) => d.document.definitions.filter((x) => x.kind === Kind.FRAGMENT_DEFINITION));
+  const rules = specifiedRules.filter((r) => r !== NoUnusedFragmentsRule);
+  const problems: string[] = [];
+  for (const { location, document } of docs) {
+    const operations = document.definitions.filter((x) => x.kind === Kind.OPERATION_DEFINITION);
+    for (const op of operations) {
+      const errors = validate(schema, { kind: Kind.DOCUMENT, definitions: [op, ...fragments] }, rules);
+      problems.push(...errors.map((e) => `${location}: ${e.message}`));
+    }
+  }
+  if (problems.length) throw new Error(`documents that do not fit the schema:\n${[...new Set(problems)].join('\n')}`);
+}
+
 export async function generate(): Promise<{ types: string; fragments: string }> {
   const schema = buildSchema(DOMAINS);
   const fragments = tableFragments(schema);
+  const docs = documents(fragments);
+  checkDocuments(schema, docs);
   const body = await codegen({
     filename: OUTPUT,
     schema: parse(printSchema(schema)),
     schemaAst: schema,
-    documents: documents(fragments),
+    documents: docs,
     plugins: [{ operations: {} }],
     pluginMap: { operations },
     config: {

@@ -37,6 +37,11 @@ export type PianosOrder =
   | 'stockNumber'
   | 'stageChangedAt';
 
+export type WorkItemsStatus =
+  | 'planned'
+  | 'in_progress'
+  | 'done';
+
 export type KeytopDamage =
   | 'chipped'
   | 'stained'
@@ -148,6 +153,18 @@ export type InspectionPlace =
   | 'customer_home'
   | 'showroom'
   | 'workshop';
+
+/** Which open items the bench lists. */
+export type QueueScope =
+  | 'mine'
+  | 'unassigned'
+  | 'all';
+
+/** Where a work item stands. */
+export type WorkStatus =
+  | 'planned'
+  | 'in_progress'
+  | 'done';
 
 /** Where a deposit stands. */
 export type DepositStatus =
@@ -307,6 +324,52 @@ export type GradeRulesInput = {
   playGoodAtOrAbove: number;
   /** A grade is final from this many inspected areas */
   minInspectedAreas: number;
+};
+
+export type WorkItemInput = {
+  task: string;
+  title?: string | null | undefined;
+  estimatedHours: number;
+  estimatedPartsMinor?: number | null | undefined;
+  quantity?: number | null | undefined;
+  assignedToId?: number | null | undefined;
+  priority?: number | null | undefined;
+  dueOn?: string | null | undefined;
+};
+
+export type WorkItemPatch = {
+  title?: string | null | undefined;
+  estimatedHours?: number | null | undefined;
+  estimatedPartsMinor?: number | null | undefined;
+  quantity?: number | null | undefined;
+  assignedToId?: number | null | undefined;
+  priority?: number | null | undefined;
+  dueOn?: string | null | undefined;
+};
+
+export type TimeEntryInput = {
+  workItemId: number;
+  minutes: number;
+  note?: string | null | undefined;
+};
+
+export type PartUseInput = {
+  workItemId: number;
+  description: string;
+  quantity?: number | null | undefined;
+  costMinor: number;
+};
+
+export type TimeCorrectionInput = {
+  timeEntryId: number;
+  minutes: number;
+  why: string;
+};
+
+export type RemeasureInput = {
+  pianoId: number;
+  measurements: MeasurementsInput;
+  changeNote?: string | null | undefined;
 };
 
 export type AskingPriceInput = {
@@ -553,6 +616,113 @@ export type MovePianoMutationVariables = Exact<{
 
 
 export type MovePianoMutation = { movePiano: { id: number, stage: PianosStage } };
+
+export type WorkItemDetailQueryVariables = Exact<{
+  itemId: number;
+}>;
+
+
+export type WorkItemDetailQuery = { workItemDetail: { id: number, pianoId: number, task: string, title: string, status: WorkStatus, doneReason: string | null, priority: number, dueOn: string | null, assignedToId: number | null, assignedTo: string | null, because: Array<string>, quantity: number, estimatedHours: number, estimatedCostMinor: number, loggedMinutes: number, partsMinor: number, actualCostMinor: number, timerRunningFor: Array<number>, currency: string, cautions: Array<{ kind: string, text: string }>, entries: Array<{ id: number, workItemId: number, technicianId: number, startedAt: string, endedAt: string | null, minutes: number | null, note: string | null, corrections: Array<{ by: string, byId: number, at: string, oldMinutes: number, newMinutes: number, why: string }> }>, parts: Array<{ id: number, workItemId: number, description: string, quantity: number, costMinor: number, loggedById: number, createdAt: string }>, notes: Array<{ id: number, workItemId: number, authorId: number, body: string, createdAt: string }> } };
+
+export type StartTimerMutationVariables = Exact<{
+  itemId: number;
+}>;
+
+
+export type StartTimerMutation = { startTimer: { id: number, technicianId: number, startedAt: string, endedAt: string | null, minutes: number | null, note: string | null } };
+
+export type StopTimerMutationVariables = Exact<{
+  itemId: number;
+}>;
+
+
+export type StopTimerMutation = { stopTimer: { id: number, technicianId: number, startedAt: string, endedAt: string | null, minutes: number | null, note: string | null } };
+
+export type LogTimeMutationVariables = Exact<{
+  e: TimeEntryInput;
+}>;
+
+
+export type LogTimeMutation = { logTime: { id: number, technicianId: number, startedAt: string, endedAt: string | null, minutes: number | null, note: string | null } };
+
+export type AddPartMutationVariables = Exact<{
+  p: PartUseInput;
+}>;
+
+
+export type AddPartMutation = { addPart: { id: number, description: string, quantity: number, costMinor: number } };
+
+export type AddWorkNoteMutationVariables = Exact<{
+  itemId: number;
+  body: string;
+}>;
+
+
+export type AddWorkNoteMutation = { addWorkNote: { id: number, authorId: number, body: string, createdAt: string } };
+
+export type SetWorkItemDoneMutationVariables = Exact<{
+  itemId: number;
+  done: boolean;
+  reason?: string | null | undefined;
+}>;
+
+
+export type SetWorkItemDoneMutation = { setWorkItemDone: { id: number, status: WorkItemsStatus } };
+
+export type CorrectTimeEntryMutationVariables = Exact<{
+  c: TimeCorrectionInput;
+}>;
+
+
+export type CorrectTimeEntryMutation = { correctTimeEntry: { id: number, technicianId: number, startedAt: string, endedAt: string | null, minutes: number | null, note: string | null } };
+
+export type WorkPlanQueryVariables = Exact<{
+  pianoId: number;
+}>;
+
+
+export type WorkPlanQuery = { workPlan: { planId: number, pianoId: number, currency: string, hourlyRateMinor: number, rateCardVersion: string, approvedAt: string | null, items: Array<{ id: number, pianoId: number, task: string, title: string, status: WorkStatus, doneReason: string | null, priority: number, dueOn: string | null, assignedToId: number | null, assignedTo: string | null, because: Array<string>, quantity: number, estimatedHours: number, estimatedCostMinor: number, loggedMinutes: number, partsMinor: number, actualCostMinor: number, timerRunningFor: Array<number>, cautions: Array<{ kind: string, text: string }> }>, totals: { estimatedHours: number, loggedHours: number, estimatedCostMinor: number, actualCostMinor: number, varianceMinor: number }, byTask: Array<{ task: string, estimatedHours: number, loggedHours: number, estimatedCostMinor: number, actualCostMinor: number, varianceMinor: number }> } | null };
+
+export type DecidePianoMutationVariables = Exact<{
+  pianoId: number;
+  decision: string;
+  why?: string | null | undefined;
+}>;
+
+
+export type DecidePianoMutation = { decidePiano: { stage: string, planId: number | null } };
+
+export type AddWorkItemMutationVariables = Exact<{
+  pianoId: number;
+  item: WorkItemInput;
+}>;
+
+
+export type AddWorkItemMutation = { addWorkItem: { id: number, status: WorkItemsStatus } };
+
+export type UpdateWorkItemMutationVariables = Exact<{
+  itemId: number;
+  p: WorkItemPatch;
+}>;
+
+
+export type UpdateWorkItemMutation = { updateWorkItem: { id: number, status: WorkItemsStatus } };
+
+export type SubmitRemeasurementMutationVariables = Exact<{
+  i: RemeasureInput;
+}>;
+
+
+export type SubmitRemeasurementMutation = { submitRemeasurement: { version: number, grade: { rulesVersion: string, inspectedAreas: Array<Area>, minInspectedAreas: number, provisional: boolean, playTested: boolean, readiness: Readiness, referToTechnician: boolean, notRecommendedForRetail: boolean, centsFromStandard: number | null, findings: Array<{ area: Area, check: string, mark: Mark, finding: string, mustDisclose: boolean, fields: Array<MeasureField>, work: Array<{ task: WorkTask, hours: number | null, quantity: number | null, note: string | null, alternativeTo: WorkTask | null }> }> } } };
+
+export type WorkQueueQueryVariables = Exact<{
+  scope?: string | null | undefined;
+  limit?: number | null | undefined;
+  offset?: number | null | undefined;
+}>;
+
+
+export type WorkQueueQuery = { workQueue: { scope: QueueScope, total: number, counts: { mine: number, unassigned: number, all: number }, items: Array<{ id: number, pianoId: number, task: string, title: string, status: WorkStatus, doneReason: string | null, priority: number, dueOn: string | null, assignedToId: number | null, assignedTo: string | null, because: Array<string>, quantity: number, estimatedHours: number, estimatedCostMinor: number, loggedMinutes: number, partsMinor: number, actualCostMinor: number, timerRunningFor: Array<number>, stockNumber: string, piano: string, cautions: Array<{ kind: string, text: string }> }>, running: { id: number, title: string, stockNumber: string } | null } };
 
 export type MeasurementFieldsFragment = { keySidePlayMm: number | null, keyTouchesNeighbour: boolean | null, keysTouchingNeighbour: Array<number> | null, keyLevelDeviationMm: number | null, keytopDamage: Array<KeytopDamage> | null, stickingKeys: Array<number> | null, deadKeys: Array<number> | null, hammerGrooveDepthMm: number | null, hammerFelt: HammerFelt | null, hammerFeltLeft: HammerFeltLeft | null, steelCorrosion: SteelCorrosion | null, bassWinding: BassWinding | null, brokenStrings: number | null, ribsSeparated: boolean | null, a4Hz: number | null, tuningPins: TuningPins | null, bassEvenness: number | null, middleEvenness: number | null, trebleEvenness: number | null, dynamicRange: number | null, overallImpression: number | null, notesStickingOut: Array<number> | null, soundboardCracks: Array<{ lengthCm: number, widestGapMm: number, crossesRib: boolean, buzzes: boolean, hurtsTuning: boolean, note: string | null }> | null };
 

@@ -4,6 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useCan } from '@/modules/accounts/ui/use-can';
 import { useGradeRules } from '@/modules/assessment/ui/use-grade-rules';
+import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
 import { STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
 import type { Decision } from '@/modules/shop/core/work-input';
 import { makerAndModel } from '@/modules/pianos/ui/piano-format';
@@ -31,7 +32,7 @@ import { StageActions } from './stage-actions';
 import { StageTimeline } from './stage-timeline';
 import { useAssignees } from './use-assignees';
 import { useRateCard } from './use-rate-card';
-import { useAssessmentHistory, usePlanCommands, useWorkPlan, type WorkPlanView } from './use-work-plan';
+import { usePlanCommands, useWorkPlan, type WorkPlanView } from './use-work-plan';
 
 /** A piano's workshop page: the manager's decision and plan, estimate against actual, re-measuring and finishing. */
 export function PianoWorkshopScreen({ id }: { id: number | null }) {
