@@ -1,6 +1,6 @@
 // What each main screen asks the server, taken from the screens' own hooks, so the bench and the
 // statement-count tests send exactly what a browser sends.
-import { COUNTS_QUERY, PAGE_SIZE, pianoListQuery } from '@/modules/pianos/ui/use-pianos';
+import { COUNTS_QUERY, PAGE_SIZE, PIANOS_QUERY, pianoListVariables } from '@/modules/pianos/ui/use-pianos';
 import { PIANO_QUERY } from '@/modules/pianos/ui/use-piano';
 import { disclosureApi } from '@/modules/disclosure/ui/public-disclosure';
 import { OVERRUNS_PAGE, OVERRUNS_QUERY } from '@/modules/shop/ui/use-overruns';
@@ -38,7 +38,7 @@ export const STOCK_EXPORT_PATH = '/api/stock/export.csv?stages=assessed,in_works
 /** The GraphQL documents of the main screens, with the variables the screens send. */
 export function screenDocuments(t: Targets): GraphDocument[] {
   return [
-    { name: 'stock list', role: 'manager', query: pianoListQuery(null, 'newest'), variables: { limit: PAGE_SIZE, offset: 0 } },
+    { name: 'stock list', role: 'manager', query: PIANOS_QUERY, variables: pianoListVariables({ order: 'newest', limit: PAGE_SIZE, offset: 0 }) },
     { name: 'piano page', role: 'manager', query: PIANO_QUERY, variables: { id: t.pianoId } },
     { name: 'bench queue (technician)', role: 'technician', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },
     { name: 'bench queue (manager)', role: 'manager', query: WORK_QUEUE_QUERY, variables: FIRST_QUEUE_VARIABLES },

@@ -32,6 +32,9 @@ step() { log "== $*"; }
 ensure_node_modules
 ensure_chromium
 
+step "client types (stale when the schema or a screen's document changed: npm run codegen)"
+node_modules/.bin/tsx scripts/codegen.ts --check
+
 step "typecheck"
 node_modules/.bin/tsc --noEmit
 

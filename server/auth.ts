@@ -5,11 +5,12 @@ import jwt from 'jsonwebtoken';
 import passport from 'passport';
 import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 
-import { can } from '@/modules/accounts/core/roles';
+import { can, type Ability } from '@/modules/accounts/core/roles';
 import { publicUser, type User } from '@/modules/accounts/server/user-model';
 import { authenticate, findActiveUser } from '@/modules/accounts/server/user-service';
 
 import type { Limits } from './config';
+import { notAllowed } from './errors';
 import { signInLimits } from './rate-limits';
 import { jsonBody } from './requests';
 
@@ -73,6 +74,11 @@ export function requireUser(pp: passport.PassportStatic, shape: 'graphql' | 'res
       next();
     })(req, res, next);
   };
+}
+
+/** After requireUser: the signed-in role must have the ability, asked before the request's input is read. */
+export function requireAbility(ability: Ability, what: string) {
+  return (req: Request, _res: Response, next: NextFunction) => next(can((req.user as User).role, ability) ? undefined : notAllowed(what));
 }
 
 const LOOPBACK = new Set(['127.0.0.1', '::1', '::ffff:127.0.0.1']);

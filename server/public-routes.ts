@@ -14,7 +14,7 @@ import {
 
 import { publicDepositTerms } from '@/modules/deposits/server/deposit-service';
 
-import { requireUser } from './auth';
+import { requireAbility, requireUser } from './auth';
 import { idParam, optionalIntQuery } from './params';
 import { jsonBody, type Middleware } from './requests';
 
@@ -54,12 +54,13 @@ export function publicRouter(deps: DisclosureDeps, writeLimit: Middleware): Rout
 export function documentsRouter(pp: passport.PassportStatic, deps: DisclosureDeps): Router {
   const router = express.Router();
   const staff = requireUser(pp, 'rest');
-  router.get('/pianos/:id/floor-tag.pdf', staff, async (req, res) => {
+  const seller = requireAbility('showToBuyers', 'print floor tags and signed copies');
+  router.get('/pianos/:id/floor-tag.pdf', staff, seller, async (req, res) => {
     const id = idParam(req.params.id);
     const pdf = await floorTag(deps, req.user as User, id);
     sendPdf(res, pdf, `floor-tag-${id}.pdf`, true);
   });
-  router.get('/acknowledgements/:id/signed.pdf', staff, async (req, res) => {
+  router.get('/acknowledgements/:id/signed.pdf', staff, seller, async (req, res) => {
     const { pdf, filename } = await signedPdfForStaff(deps, req.user as User, idParam(req.params.id));
     sendPdf(res, pdf, filename);
   });

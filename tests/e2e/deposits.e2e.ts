@@ -28,7 +28,7 @@ it('holds a piano for a buyer who acknowledged the disclosure and paid the depos
   // The second piano on the floor: the disclosure journey uses the first.
   const piano = [...pianos].sort((a, b) => a.id - b.id)[1];
   expect(piano).toBeTruthy();
-  const { disclosures } = await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`);
+  const { disclosures } = await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) { token versions { version digest } } }`);
 
   const phone = await buyer.context.newPage();
   await phone.setViewportSize(PHONE);

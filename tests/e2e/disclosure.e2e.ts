@@ -22,7 +22,7 @@ it('walks a buyer through the disclosure on the tablet, takes their acknowledgem
   const { pianos } = await gql<{ pianos: { id: number; stockNumber: string }[] }>(floorToken, '{ pianos(stageEq: on_floor) { id stockNumber } }');
   // The first piano on the floor; the deposit journey takes another, as both run against one server.
   const piano = [...pianos].sort((a, b) => a.id - b.id)[0];
-  const { disclosures } = await gql<{ disclosures: { token: string; versions: { version: number; digest: string }[] } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`);
+  const { disclosures } = await gql<{ disclosures: { token: string; versions: { version: number; digest: string }[] } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) { token versions { version digest } } }`);
   const newest = disclosures.versions[disclosures.versions.length - 1];
 
   // Floor staff open the tablet view and step through the areas.
@@ -80,7 +80,7 @@ it('walks a buyer through the disclosure on the tablet, takes their acknowledgem
   await phone.getByTestId('ack-done').waitFor();
 
   // Floor staff see it on the tablet and countersign.
-  const acks = await gql<{ acknowledgements: { id: number; buyerEmail: string }[] }>(floorToken, `{ acknowledgements(pianoId: ${piano.id}) }`);
+  const acks = await gql<{ acknowledgements: { id: number; buyerEmail: string }[] }>(floorToken, `{ acknowledgements(pianoId: ${piano.id}) { id buyerEmail } }`);
   const ack = acks.acknowledgements.find((a) => a.buyerEmail === email)!;
   expect(ack).toBeTruthy();
   await tablet.getByTestId('present-acks-refresh').click();
@@ -113,7 +113,7 @@ it('shows the buyer one set of marks, each with its word, and what was found, do
   const floorToken = await login('floor@feltwire.test');
   const linkOf = async (stockNumber: string) => {
     const { piano } = await gql<{ piano: { id: number } }>(floorToken, `{ piano(stockNumberEq: "${stockNumber}") { id } }`);
-    return (await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) }`)).disclosures.token;
+    return (await gql<{ disclosures: { token: string } }>(floorToken, `{ disclosures(pianoId: ${piano.id}) { token versions { version digest } } }`)).disclosures.token;
   };
   const phone = await buyer.context.newPage();
   await phone.setViewportSize(PHONE);

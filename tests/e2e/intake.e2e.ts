@@ -147,7 +147,7 @@ async function intakeThroughApi(page: Page, email: string, measurements: Record<
   };
   const res = await page.request.post(`${baseUrl()}/graphql`, {
     headers: { Authorization: `Bearer ${token}` },
-    data: { query: 'mutation($input: JSON!) { submitIntake(input: $input) }', variables: { input } },
+    data: { query: 'mutation($input: IntakeInput!) { submitIntake(input: $input) { pianoId } }', variables: { input } },
   });
   const body = (await res.json()) as { data?: { submitIntake: { pianoId: number } }; errors?: unknown };
   expect(body.errors).toBeUndefined();

@@ -32,10 +32,10 @@ describe('a published disclosure', () => {
   let token: string;
   let stockNumber: string;
   beforeAll(async () => {
-    const out = (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
+    const out = (await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
     pianoId = out.pianoId;
     stockNumber = out.stockNumber;
-    await call('manager', 'mutation($i: JSON!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 349500, currency: 'USD' } });
+    await call('manager', 'mutation($i: AskingPriceInput!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 349500, currency: 'USD' } });
     const pub = (await call('manager', `mutation { publishDisclosure(pianoId: ${pianoId}) }`)).publishDisclosure;
     token = pub.token;
     expect(pub).toMatchObject({ version: 1, unchanged: false, url: `http://feltwire.test/d/${token}` });
@@ -84,7 +84,7 @@ describe('a published disclosure', () => {
     const again = (await call('manager', `mutation { publishDisclosure(pianoId: ${pianoId}) }`)).publishDisclosure;
     expect(again).toMatchObject({ version: 1, unchanged: true });
 
-    await call('intake', 'mutation($input: JSON!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements({ hammerGrooveDepthMm: 0.8 }), changeNote: 'Hammers were reshaped' } });
+    await call('intake', 'mutation($input: CorrectionInput!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements({ hammerGrooveDepthMm: 0.8 }), changeNote: 'Hammers were reshaped' } });
     const v2pub = (await call('floor', `mutation { publishDisclosure(pianoId: ${pianoId}) }`)).publishDisclosure;
     expect(v2pub.version).toBe(2);
     expect(v2pub.digest).not.toBe(v1.digest);
@@ -101,7 +101,7 @@ describe('a published disclosure', () => {
   it('refuses publishing by a technician and pricing by intake staff', async () => {
     const tech = await api.gql(await api.tokenFor('technician'), `mutation { publishDisclosure(pianoId: ${pianoId}) }`);
     expect(tech.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
-    const price = await api.gql(await api.tokenFor('intake'), 'mutation($i: JSON!) { setAskingPrice(input: $i) { id } }', { i: { pianoId, askingPriceMinor: 1, currency: 'USD' } });
+    const price = await api.gql(await api.tokenFor('intake'), 'mutation($i: AskingPriceInput!) { setAskingPrice(input: $i) { id } }', { i: { pianoId, askingPriceMinor: 1, currency: 'USD' } });
     expect(price.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
   });
 
@@ -182,7 +182,7 @@ describe('a published disclosure', () => {
 
 describe('what cannot be published', () => {
   const publish = async (pianoId: number) => api.gql(await api.tokenFor('manager'), `mutation { publishDisclosure(pianoId: ${pianoId}) }`);
-  const intake = async (measurements: Json) => (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ measurements }) })).submitIntake;
+  const intake = async (measurements: Json) => (await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ measurements }) })).submitIntake;
 
   it('refuses a provisional grade with a conflict that says why, and publishes nothing', async () => {
     const out = await intake({ keySidePlayMm: 1.2, hammerGrooveDepthMm: 0.8, overallImpression: 4 });
@@ -203,7 +203,7 @@ describe('what cannot be published', () => {
     const res = await publish(out.pianoId);
     expect(res.body.errors[0]).toMatchObject({ extensions: { code: 'CONFLICT' } });
     expect(res.body.errors[0].message).toContain('The play test is missing, and a disclosure needs it');
-    await call('intake', 'mutation($input: JSON!) { correctAssessment(input: $input) }', { input: { pianoId: out.pianoId, measurements: buildMeasurements(), changeNote: 'Play test done in the showroom' } });
+    await call('intake', 'mutation($input: CorrectionInput!) { correctAssessment(input: $input) }', { input: { pianoId: out.pianoId, measurements: buildMeasurements(), changeNote: 'Play test done in the showroom' } });
     expect((await publish(out.pianoId)).body.data.publishDisclosure.version).toBe(1);
   });
 });
@@ -235,7 +235,7 @@ describe('the demo’s disclosures', () => {
 
 describe('a version published in the first format', () => {
   it('stays readable as published, and its signed copy prints its own words', async () => {
-    const out = (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
+    const out = (await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() })).submitIntake;
     const pub = (await call('manager', `mutation { publishDisclosure(pianoId: ${out.pianoId}) }`)).publishDisclosure;
     const link = await api.knex('disclosure_links').where({ piano_id: out.pianoId }).first();
     // Content as format 1 stored it: a condition word per area, severities, no format field.

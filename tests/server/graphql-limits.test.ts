@@ -1,6 +1,8 @@
-import { getIntrospectionQuery } from 'graphql';
+import { buildSchema as buildGraphSchema, getIntrospectionQuery, parse } from 'graphql';
 
-import { pianoListQuery } from '@/modules/pianos/ui/use-pianos';
+import { HISTORY_QUERY } from '@/modules/assessment/ui/use-assessment-history';
+import { PIANOS_QUERY, pianoListVariables } from '@/modules/pianos/ui/use-pianos';
+import { validateDocument } from '@/server/graphql/http';
 import { MAX_QUERY_DEPTH, QUERY_LIMITS } from '@/server/graphql/limits';
 
 import { startTestApi, type TestApi } from '../support/api';
@@ -38,15 +40,38 @@ describe('what one GraphQL document may ask for', () => {
   });
 
   it('refuses a document whose lists multiply past the cost limit', async () => {
-    // 200 users, each with up to 200 pianos: 40,000 rows asked for in 12 tokens' worth of selection.
-    await refused('{ users(limit: 200) { id pianosLogged(limit: 200) { id stockNumber } } }', /estimated cost is \d+, at most 10000/);
+    // Pianos (50 reckoned per page), each asked for four times over, each with its creator.
+    const page = 'pianos { id stockNumber maker model serialNumber year kind sizeCm finish stage stageChangedAt createdAt updatedAt createdBy { id name } }';
+    await refused(`{ a: ${page} b: ${page} c: ${page} d: ${page} e: ${page} f: ${page} g: ${page} h: ${page} i: ${page} j: ${page} k: ${page} l: ${page} m: ${page} n: ${page} }`, /estimated cost is \d+, at most 10000/);
+  });
+
+  it('counts a list inside a hand-written answer once with its row: the history screen asks for every version whole', async () => {
+    // Findings and their work come with the version's row; only the versions are reckoned as rows (50).
+    const { piano_id: pianoId } = await api.knex('assessments').orderBy('id').first();
+    const res = await api.gql(token, HISTORY_QUERY, { pianoId });
+    expect(res.status).toBe(200);
+    expect(res.body.errors).toBeUndefined();
+    expect(res.body.data.assessmentHistory.length).toBeGreaterThan(0);
+    expect(res.body.data.assessmentHistory[0].grade.findings.length).toBeGreaterThan(0);
   });
 
   it('counts the rows a variable asks for', async () => {
-    const query = 'query($n: Int) { users(limit: 200) { id pianosLogged(limit: $n) { id } } }';
+    const page = 'pianos(limit: $n) { id stockNumber maker model serialNumber year kind sizeCm finish stage stageChangedAt createdAt updatedAt createdBy { id name } }';
+    const query = `query($n: Int) { a: ${page} b: ${page} c: ${page} d: ${page} }`;
     await refused(query, /estimated cost/, { n: 200 });
     const ok = await api.gql(token, query, { n: 2 });
     expect(ok.status).toBe(200);
+    expect(ok.body.data.d).toHaveLength(2);
+  });
+
+  // The schema has no cycle today (no relation leads back): the depth limit guards the next one.
+  const LOOPED = buildGraphSchema('type Query { node: Node } type Node { name: String next: Node }');
+  const nested = (depth: number) => `{ node { ${'next { '.repeat(depth - 1)}name${' }'.repeat(depth - 1)} } }`;
+
+  it('refuses a query nested deeper than the limit below its top field, and answers one at it', () => {
+    const deep = validateDocument(LOOPED, parse(nested(MAX_QUERY_DEPTH + 1)));
+    expect(deep.map((e) => e.message)).toEqual([`The query nests deeper than ${MAX_QUERY_DEPTH} levels below its top field.`]);
+    expect(validateDocument(LOOPED, parse(nested(MAX_QUERY_DEPTH)))).toEqual([]);
   });
 
   it('refuses a fragment cycle with a message, before any limit walks it', async () => {
@@ -79,8 +104,8 @@ describe('what one GraphQL document may ask for', () => {
   });
 
   it('answers the largest list the web app asks for, as urql sends it', async () => {
-    const query = pianoListQuery(null, 'newest').replace(/\{ (id stockNumber[^}]*)\}/, '{ $1 __typename }');
-    const res = await api.gql(token, query, { limit: 200, offset: 0 });
+    const query = PIANOS_QUERY.replace(/\{\s*(id stockNumber[^}]*)\}/, '{ $1 __typename }');
+    const res = await api.gql(token, query, pianoListVariables({ order: 'newest', limit: 200 }));
     expect(res.status).toBe(200);
     expect(res.body.errors).toBeUndefined();
     expect(res.body.data.pianos.length).toBeGreaterThan(10);

@@ -1,5 +1,5 @@
 import { DEMO_PIANOS } from '@/seeds/demo';
-import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE, MAX_QUERY_DEPTH } from '@/server/graphql/limits';
+import { DEFAULT_PAGE_SIZE, MAX_PAGE_SIZE } from '@/server/graphql/limits';
 
 import { startTestApi, type TestApi } from '../support/api';
 
@@ -53,37 +53,17 @@ describe('the piano list', () => {
     const page = await api.gql(token, '{ pianos(limit: 60) { id } }');
     expect(page.body.data.pianos).toHaveLength(60);
   });
-
-  // Fields alternate through the two relations; the leaf sits at `depth` (the root field is depth 0).
-  function nested(depth: number): string {
-    let selection = depth % 2 ? 'stockNumber' : 'name';
-    for (let d = depth - 1; d >= 1; d -= 1) selection = `${d % 2 ? 'createdBy' : 'pianosLogged(limit: 1)'} { ${selection} }`;
-    return `{ pianos(limit: 1) { ${selection} } }`;
-  }
-
-  it('refuses a query deeper than the limit', async () => {
-    const res = await api.gql(await api.tokenFor('manager'), nested(MAX_QUERY_DEPTH + 1));
-    expect(res.status).toBe(400);
-    expect(res.body.errors[0].message).toBe(`The query nests deeper than ${MAX_QUERY_DEPTH} levels below its top field.`);
-    expect(res.body.data).toBeUndefined();
-  });
-
-  it('answers a query at the depth limit', async () => {
-    const res = await api.gql(await api.tokenFor('manager'), nested(MAX_QUERY_DEPTH));
-    expect(res.body.errors).toBeUndefined();
-    expect(res.body.data.pianos[0].createdBy.pianosLogged[0].createdBy.pianosLogged[0].createdBy.name).toBe('Ines Okafor-Lind');
-  });
 });
 
 describe('createPiano', () => {
-  const CREATE = 'mutation($maker: String!, $kind: String!, $sizeCm: Int, $year: Int) { createPiano(maker: $maker, kind: $kind, sizeCm: $sizeCm, year: $year, yearIsEstimate: true) { id stockNumber stage year yearIsEstimate createdBy { email } } }';
+  const CREATE = 'mutation($maker: String!, $kind: String!, $sizeCm: Int, $year: Int) { createPiano(maker: $maker, kind: $kind, sizeCm: $sizeCm, year: $year, yearIsEstimate: true) { id stockNumber stage year yearIsEstimate createdBy { id name } } }';
 
   it('creates a received piano with the next stock number for intake staff', async () => {
     const before = await api.knex('pianos').max('id as max').first();
     const res = await api.gql(await api.tokenFor('intake'), CREATE, { maker: 'Test Maker', kind: 'grand', sizeCm: 183, year: 1961 });
     expect(res.body.errors).toBeUndefined();
     const piano = res.body.data.createPiano;
-    expect(piano).toMatchObject({ stage: 'received', year: 1961, yearIsEstimate: true, createdBy: { email: 'intake@feltwire.test' } });
+    expect(piano).toMatchObject({ stage: 'received', year: 1961, yearIsEstimate: true, createdBy: { name: 'Ines Okafor-Lind' } });
     expect(piano.stockNumber).toMatch(/^FW-\d{4}$/);
     expect(piano.id).toBeGreaterThan(before!.max);
   });

@@ -38,7 +38,7 @@ async function state() {
 }
 
 async function pianoWithAssessment() {
-  const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() });
+  const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() });
   return out.body.data.submitIntake as { pianoId: number; assessmentId: number };
 }
 
@@ -83,7 +83,7 @@ describe('POST /api/recordings', () => {
     const other = await api.gql(await api.tokenFor('manager'), RECORDINGS, { where: { draftKey } });
     expect(other.body.data.toneRecordings).toEqual([]);
 
-    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ recordingIds: [res.body.id] }) });
+    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ recordingIds: [res.body.id] }) });
     const { pianoId, assessmentId } = out.body.data.submitIntake;
     const listed = await api.gql(await api.tokenFor('technician'), RECORDINGS, { where: { pianoId } });
     expect(listed.body.data.toneRecordings).toEqual([expect.objectContaining({ id: res.body.id, pianoId, assessmentId })]);
@@ -91,7 +91,7 @@ describe('POST /api/recordings', () => {
 
   it('refuses to attach a recording someone else made', async () => {
     const res = await upload('floor', WAV, { draftKey });
-    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ recordingIds: [res.body.id] }) });
+    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ recordingIds: [res.body.id] }) });
     expect(out.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field: 'recordingIds' });
   });
 

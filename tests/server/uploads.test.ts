@@ -42,7 +42,7 @@ describe('POST /api/photos', () => {
     expect(Buffer.from(await fetched.arrayBuffer()).equals(JPEG)).toBe(true);
 
     // Submitting the intake attaches the draft photo to the new piano.
-    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ photoIds: [res.body.id] }) });
+    const out = await api.gql(await api.tokenFor('intake'), 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ photoIds: [res.body.id] }) });
     const pianoId = out.body.data.submitIntake.pianoId;
     const listed = await api.gql(await api.tokenFor('floor'), `{ photos(pianoId: ${pianoId}) }`);
     expect(listed.body.data.photos).toEqual([expect.objectContaining({ id: res.body.id, pianoId, caption: 'Bass end, keys 1-14' })]);
@@ -113,7 +113,7 @@ describe('POST /api/photos', () => {
   it('will not attach another user’s draft photo to an intake', async () => {
     const up = await api.http.post('/api/photos').set('Authorization', `Bearer ${await api.tokenFor('manager')}`).field('area', 'case').field('draftKey', draftKey).attach('photo', JPEG, 'k.jpg');
     expect(up.status).toBe(201);
-    const res = await api.gql(await api.tokenFor('intake'), 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ photoIds: [up.body.id] }) });
+    const res = await api.gql(await api.tokenFor('intake'), 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ photoIds: [up.body.id] }) });
     expect(res.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field: 'photoIds' });
     expect((await api.knex('photos').where({ id: up.body.id }).first()).piano_id).toBeNull();
   });

@@ -27,7 +27,7 @@ async function refused(role: Role, query: string, variables?: Json): Promise<Jso
 }
 
 async function assessedPiano(): Promise<number> {
-  const out = await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake() });
+  const out = await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake() });
   return out.submitIntake.pianoId;
 }
 const historyOf = async (pianoId: number) => (await call('manager', `{ stageHistory(pianoId: ${pianoId}) }`)).stageHistory as Json[];
@@ -45,7 +45,7 @@ describe('the decision and the plan', () => {
     expect(plan.totals.estimatedCostMinor).toBe(expected.totalMinor);
     expect(plan.currency).toBe('USD');
 
-    const added = await call('manager', `mutation($item: JSON!) { addWorkItem(pianoId: ${pianoId}, item: $item) }`, { item: { task: 'cabinet_touch_up', estimatedHours: 2, estimatedPartsMinor: 1000, priority: 3 } });
+    const added = await call('manager', `mutation($item: WorkItemInput!) { addWorkItem(pianoId: ${pianoId}, item: $item) }`, { item: { task: 'cabinet_touch_up', estimatedHours: 2, estimatedPartsMinor: 1000, priority: 3 } });
     expect(added.addWorkItem.title).toBe('Cabinet touch-up');
     const dropped = await call('manager', `mutation { removeWorkItem(itemId: ${added.addWorkItem.id}) }`);
     expect(dropped.removeWorkItem).toBe(true);
@@ -62,7 +62,7 @@ describe('the decision and the plan', () => {
   });
 
   it('selling as it stands a piano not recommended for retail needs a manager’s reason, kept in the stage history', async () => {
-    const out = await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ measurements: buildMeasurements({ overallImpression: 2 }) }) });
+    const out = await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) }', { input: buildIntake({ measurements: buildMeasurements({ overallImpression: 2 }) }) });
     const pianoId = out.submitIntake.pianoId;
     expect(out.submitIntake.grade).toMatchObject({ notRecommendedForRetail: true, readiness: 'wholesale' });
     for (const why of [null, '', '   ', 'cheap']) {
@@ -105,7 +105,7 @@ describe('moves through the stages', () => {
     await call('floor', `mutation { movePiano(pianoId: ${pianoId}, action: "put_on_floor") { stage } }`);
     const sell = await refused('technician', `mutation { movePiano(pianoId: ${pianoId}, action: "sell") { stage } }`);
     expect(sell).toMatchObject({ message: 'Not allowed: the technician role cannot record the sale.', extensions: { code: 'NOT_ALLOWED' } });
-    const edit = await refused('floor', 'mutation($input: JSON!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements(), changeNote: 'x' } });
+    const edit = await refused('floor', 'mutation($input: CorrectionInput!) { correctAssessment(input: $input) }', { input: { pianoId, measurements: buildMeasurements(), changeNote: 'x' } });
     expect(edit.extensions.code).toBe('NOT_ALLOWED');
     const wrongStage = await refused('floor', `mutation { movePiano(pianoId: ${pianoId}, action: "deliver") { stage } }`);
     expect(wrongStage.message).toBe('A piano in stage "on_floor" cannot record the delivery; it must be sold.');
@@ -147,7 +147,7 @@ describe('the bench', () => {
     await call('manager', `mutation { decidePiano(pianoId: ${pianoId}, decision: "recondition") }`);
     items = (await call('manager', `{ workPlan(pianoId: ${pianoId}) }`)).workPlan.items;
     const techId = (await api.knex('users').where({ email: 'tech@feltwire.test' }).first()).id;
-    await call('manager', `mutation($p: JSON!) { updateWorkItem(itemId: ${items[0].id}, patch: $p) }`, { p: { assignedToId: techId, priority: 1, dueOn: '2026-12-10' } });
+    await call('manager', `mutation($p: WorkItemPatch!) { updateWorkItem(itemId: ${items[0].id}, patch: $p) }`, { p: { assignedToId: techId, priority: 1, dueOn: '2026-12-10' } });
     await call('manager', `mutation { approvePlan(pianoId: ${pianoId}) { stage } }`);
   });
 
@@ -171,8 +171,8 @@ describe('the bench', () => {
     const second = await refused('technician', `mutation { startTimer(itemId: ${items[0].id}) }`);
     expect(second.message).toMatch(/already running/);
     await call('technician', `mutation { stopTimer(itemId: ${item.id}) }`);
-    await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 330, note: 'Filed and needled the treble' } });
-    await call('technician', 'mutation($p: JSON!) { addPart(part: $p) }', { p: { workItemId: item.id, description: 'Sandpaper strips', quantity: 4, costMinor: 250 } });
+    await call('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 330, note: 'Filed and needled the treble' } });
+    await call('technician', 'mutation($p: PartUseInput!) { addPart(part: $p) }', { p: { workItemId: item.id, description: 'Sandpaper strips', quantity: 4, costMinor: 250 } });
     await call('technician', `mutation { addWorkNote(itemId: ${item.id}, body: "Bass hammers better than expected") }`);
 
     const detail = (await call('technician', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail;
@@ -193,11 +193,11 @@ describe('the bench', () => {
 
   it('refuses bad bench input and other roles, storing nothing', async () => {
     const before = await api.knex('time_entries').count('* as n').first();
-    const zero = await refused('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: items[0].id, minutes: 0 } });
+    const zero = await refused('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: items[0].id, minutes: 0 } });
     expect(zero.extensions).toMatchObject({ code: 'BAD_INPUT', field: 'minutes' });
-    const floor = await refused('floor', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: items[0].id, minutes: 10 } });
+    const floor = await refused('floor', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: items[0].id, minutes: 10 } });
     expect(floor.extensions.code).toBe('NOT_ALLOWED');
-    const negPart = await refused('technician', 'mutation($p: JSON!) { addPart(part: $p) }', { p: { workItemId: items[0].id, description: 'x', costMinor: -5 } });
+    const negPart = await refused('technician', 'mutation($p: PartUseInput!) { addPart(part: $p) }', { p: { workItemId: items[0].id, description: 'x', costMinor: -5 } });
     expect(negPart.extensions.field).toBe('costMinor');
     expect(await api.knex('time_entries').count('* as n').first()).toEqual(before);
   });
@@ -209,7 +209,7 @@ describe('the bench', () => {
     const noAssessment = await refused('technician', `mutation { finishWorkshop(pianoId: ${pianoId}) { stage } }`);
     expect(noAssessment.message).toBe('Not yet: the post-workshop assessment has not been submitted.');
 
-    const re = await call('technician', 'mutation($i: JSON!) { submitRemeasurement(input: $i) }', { i: { pianoId, measurements: { hammerGrooveDepthMm: 0.5, keyLevelDeviationMm: 0.3, a4Hz: 440 }, changeNote: 'After voicing and regulation' } });
+    const re = await call('technician', 'mutation($i: RemeasureInput!) { submitRemeasurement(input: $i) }', { i: { pianoId, measurements: { hammerGrooveDepthMm: 0.5, keyLevelDeviationMm: 0.3, a4Hz: 440 }, changeNote: 'After voicing and regulation' } });
     expect(re.submitRemeasurement.grade.findings.find((f: Json) => f.check === 'hammers.wear').mark).toBe('fine');
     const history = (await call('technician', `{ assessmentHistory(pianoId: ${pianoId}) }`)).assessmentHistory;
     expect(history.at(-1)).toMatchObject({ kind: 'post_workshop', changeNote: 'After voicing and regulation', remeasured: ['a4Hz', 'hammerGrooveDepthMm', 'keyLevelDeviationMm'] });
@@ -254,22 +254,22 @@ describe('done, and time that needs correcting', () => {
 
   it('takes done without a reason once time is logged', async () => {
     const item = items[1];
-    await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 45 } });
+    await call('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 45 } });
     await call('technician', done(item.id));
     expect((await call('manager', `{ workItemDetail(itemId: ${item.id}) }`)).workItemDetail).toMatchObject({ status: 'done', doneReason: null, loggedMinutes: 45 });
   });
 
   it('refuses negative minutes with a message, and stores nothing', async () => {
     const before = await api.knex('time_entries').count('* as n').first();
-    const err = await refused('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: items[2].id, minutes: -30 } });
+    const err = await refused('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: items[2].id, minutes: -30 } });
     expect(err).toMatchObject({ message: 'minutes: cannot be negative: give the minutes worked; an entry logged by mistake is corrected instead', extensions: { code: 'BAD_INPUT', field: 'minutes' } });
     expect(await api.knex('time_entries').count('* as n').first()).toEqual(before);
   });
 
   it('lets the technician who logged an entry, or a manager, correct it, with the history of who, when, old, new and why', async () => {
     const item = items[2];
-    const entry = (await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 120, note: 'Pitch raise' } })).logTime;
-    const send = async (role: Role, c: Json) => api.gql(await api.tokenFor(role), 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c });
+    const entry = (await call('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 120, note: 'Pitch raise' } })).logTime;
+    const send = async (role: Role, c: Json) => api.gql(await api.tokenFor(role), 'mutation($c: TimeCorrectionInput!) { correctTimeEntry(correction: $c) }', { c });
     const first = await send('technician', { timeEntryId: entry.id, minutes: 90, why: 'Left the timer in my head over lunch' });
     expect(first.body.errors).toBeUndefined();
     expect(first.body.data.correctTimeEntry.minutes).toBe(90);
@@ -285,7 +285,7 @@ describe('done, and time that needs correcting', () => {
     expect(same.body.errors[0].extensions).toMatchObject({ code: 'BAD_INPUT', field: 'minutes' });
     await call('manager', 'mutation { createUser(email: "tech2@feltwire.test", name: "Odo Pellmark", role: "technician", password: "a-long-password") { id } }');
     const login = await api.http.post('/auth/login').send({ email: 'tech2@feltwire.test', password: 'a-long-password' });
-    const other = await api.gql(login.body.token, 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c: { timeEntryId: entry.id, minutes: 10, why: 'mine now' } });
+    const other = await api.gql(login.body.token, 'mutation($c: TimeCorrectionInput!) { correctTimeEntry(correction: $c) }', { c: { timeEntryId: entry.id, minutes: 10, why: 'mine now' } });
     expect(other.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
     const floor = await send('floor', { timeEntryId: entry.id, minutes: 10, why: 'x' });
     expect(floor.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
@@ -304,11 +304,11 @@ describe('done, and time that needs correcting', () => {
   it('refuses to correct a running timer, or to leave a done item with no time and no reason', async () => {
     const item = items[3];
     const timer = (await call('technician', `mutation { startTimer(itemId: ${item.id}) }`)).startTimer;
-    const send = async (c: Json) => api.gql(await api.tokenFor('technician'), 'mutation($c: JSON!) { correctTimeEntry(correction: $c) }', { c });
+    const send = async (c: Json) => api.gql(await api.tokenFor('technician'), 'mutation($c: TimeCorrectionInput!) { correctTimeEntry(correction: $c) }', { c });
     const running = await send({ timeEntryId: timer.id, minutes: 30, why: 'x' });
     expect(running.body.errors[0].extensions.code).toBe('CONFLICT');
     await call('technician', `mutation { stopTimer(itemId: ${item.id}) }`);
-    const entry = (await call('technician', 'mutation($e: JSON!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 20 } })).logTime;
+    const entry = (await call('technician', 'mutation($e: TimeEntryInput!) { logTime(entry: $e) }', { e: { workItemId: item.id, minutes: 20 } })).logTime;
     await call('technician', `mutation { setWorkItemDone(itemId: ${item.id}, done: true) }`);
     // the stopped timer counts 0 minutes; the manual entry holds the only time
     const empty = await send({ timeEntryId: entry.id, minutes: 0, why: 'Logged on the wrong item' });

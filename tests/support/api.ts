@@ -20,6 +20,7 @@ import { createS3, ensureBucket } from '@/server/storage';
 
 import { testClock, type TestClock } from './clock';
 import { createTestDatabase } from './test-db';
+import { wholeAnswers } from './whole-answers';
 
 export const TEST_AUTH = { jwtSecret: 'test-secret-that-is-long-enough-0123456789', jwtTtlSeconds: 3600 };
 
@@ -44,13 +45,14 @@ export interface TestApi {
   http: ReturnType<typeof request>;
   app: ReturnType<typeof createApp>;
   tokenFor: (role: Role) => Promise<string>;
+  /** A GraphQL call; a hand-written answer asked without a selection comes whole (tests/support/whole-answers.ts). */
   gql: (token: string, query: string, variables?: Record<string, unknown>) => Promise<request.Response>;
   close: () => Promise<void>;
 }
 
 /** A GraphQL call over real HTTP to a listening server (races need two requests truly in flight). */
 export async function postGql(base: string, token: string, query: string, variables?: Record<string, unknown>): Promise<{ data?: any; errors?: { message: string; extensions: { code: string } }[] }> {
-  const res = await fetch(`${base}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query, variables }) });
+  const res = await fetch(`${base}/graphql`, { method: 'POST', headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` }, body: JSON.stringify({ query: wholeAnswers(query), variables }) });
   return (await res.json()) as never;
 }
 
@@ -111,7 +113,7 @@ export async function startTestApi(options: { limits?: Limits } = {}): Promise<T
       return tokens.get(role)!;
     },
     gql: (token, query, variables) =>
-      request(app).post('/graphql').set('Authorization', `Bearer ${token}`).send({ query, variables }),
+      request(app).post('/graphql').set('Authorization', `Bearer ${token}`).send({ query: wholeAnswers(query), variables }),
     close: async () => {
       await jobs.stop();
       s3.destroy();

@@ -1,4 +1,5 @@
-// The four staff roles and what each may do; client and server read the same table.
+// The four staff roles and what each may do: the one table of rights. Services and screens ask
+// `can(role, ability)`; no other code compares role names.
 export const ROLES = ['intake', 'technician', 'floor', 'manager'] as const;
 export type Role = (typeof ROLES)[number];
 
@@ -9,43 +10,84 @@ export const ROLE_LABELS: Record<Role, string> = {
   manager: 'Manager',
 };
 
-export type Ability =
-  | 'manageUsers'
-  | 'readPianos'
-  | 'createPianos'
-  | 'readSellerDetails'
-  | 'assess'
-  | 'uploadPhotos'
-  | 'setGradeRules'
-  | 'remeasure'
-  // A play-test recording of a piano, and the pitch and level results measured from it.
-  | 'recordTone'
-  | 'readToneResults'
-  // The local demo inbox of e-mails the server sent (development and tests only).
-  | 'readDemoInbox'
-  // See the jobs that failed or stalled, and run one again.
-  | 'tendBackgroundWork'
-  // Correct a time entry one logged oneself, or one anyone logged.
-  | 'correctOwnTime'
-  | 'correctAnyTime'
-  // A trade-in offer with its lines, and the seller's answer to it (accepted, a counter-offer, agreed, declined).
-  | 'readOffers'
-  | 'answerOffers'
-  // Money the dealer keeps to itself: trade-in allowances, cost basis, margins, the stock table and its charts.
-  | 'readCostsAndMargins'
-  // Set a piano's asking price (every change kept with who, when and why), and read its price history.
-  | 'setPrices'
-  | 'setPricingRules';
+export const ABILITIES = [
+  // accounts
+  /** Create accounts, change roles, deactivate; read every account's e-mail, role and status. */
+  'manageUsers',
+  // pianos
+  /** The stock records, their stages and history, assessments, photos, disclosures' versions, the shop's rules and texts. */
+  'readPianos',
+  'createPianos',
+  /** The stock overview of every stage. */
+  'overseeStock',
+  /** Put on the floor, take off it, record the sale and the delivery; a piano's deposits and balance. */
+  'sellPianos',
+  /** Decide what happens to an assessed piano (recondition, sell as it stands, wholesale, decline), approve its plan, reopen its work. */
+  'decidePianos',
+  // assessment
+  'readSellerDetails',
+  /** Take a piano in: its intake, its inspection and corrections of it. */
+  'assess',
+  'setGradeRules',
+  /** Measure again after workshop work. */
+  'remeasure',
+  // photos
+  'uploadPhotos',
+  // shop (the workshop)
+  /** What work costs: the rate card and the plans' estimates (the trade-in offer rests on them). */
+  'readWorkCosts',
+  /** The bench: the work queue, items, timers, time, parts, notes, the workshop's climate, finishing the work. A role with it can be given work. */
+  'workAtBench',
+  /** Log work on an item someone else has taken. */
+  'workOnAnyItem',
+  /** Plan the work: add, change and drop items, assign them, the whole bench, the overruns. */
+  'planWork',
+  'setRates',
+  /** Correct a time entry one logged oneself, or one anyone logged. */
+  'correctOwnTime',
+  'correctAnyTime',
+  // disclosure
+  /** Publish a disclosure, hand it to a buyer, countersign acknowledgements, print floor tags and signed copies. */
+  'showToBuyers',
+  'editShopTexts',
+  // pricing
+  /** A trade-in offer with its lines, and the seller's answer to it (accepted, a counter-offer, agreed, declined). */
+  'readOffers',
+  'answerOffers',
+  /** Money the dealer keeps to itself: trade-in allowances, cost basis, margins, the stock table and its charts. */
+  'readCostsAndMargins',
+  /** Set a piano's asking price (every change kept with who, when and why), and read its price history. */
+  'setPrices',
+  'setPricingRules',
+  // deposits
+  /** Hold and release pianos by hand, refund deposits, set the deposit rules. */
+  'manageDeposits',
+  // tone
+  /** A play-test recording of a piano, and the pitch and level results measured from it. */
+  'recordTone',
+  'readToneResults',
+  // jobs
+  /** See the jobs that failed or stalled, and run one again. */
+  'tendBackgroundWork',
+  /** The local demo inbox of e-mails the server sent (development and tests only). */
+  'readDemoInbox',
+] as const;
+export type Ability = (typeof ABILITIES)[number];
 
-const ABILITIES: Record<Role, readonly Ability[]> = {
-  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults', 'readOffers', 'answerOffers'],
-  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults', 'correctOwnTime'],
-  floor: ['readPianos', 'recordTone', 'readToneResults'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime', 'readOffers', 'answerOffers', 'readCostsAndMargins', 'setPrices', 'setPricingRules'],
+const RIGHTS: Record<Role, readonly Ability[]> = {
+  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'readWorkCosts', 'recordTone', 'readToneResults', 'readOffers', 'answerOffers'],
+  technician: ['readPianos', 'uploadPhotos', 'remeasure', 'readWorkCosts', 'workAtBench', 'correctOwnTime', 'recordTone', 'readToneResults'],
+  floor: ['readPianos', 'sellPianos', 'showToBuyers', 'recordTone', 'readToneResults'],
+  manager: ABILITIES,
 };
 
 export function can(role: Role, ability: Ability): boolean {
-  return ABILITIES[role].includes(ability);
+  return RIGHTS[role].includes(ability);
+}
+
+/** The roles that have an ability: who gets an e-mail about it, who can be given the work. */
+export function rolesThatCan(ability: Ability): Role[] {
+  return ROLES.filter((r) => can(r, ability));
 }
 
 export function isRole(value: unknown): value is Role {

@@ -3,15 +3,19 @@ import { GraphQLBoolean, GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLString 
 import { can } from '@/modules/accounts/core/roles';
 import type { GraphDomain } from '@/server/graphql/domain';
 
+import { StaffMember } from './staff-member-model';
 import { User } from './user-model';
 import { changeRole, createUser, listUsers, setActive } from './user-service';
 
 export const accountsGraph: GraphDomain = {
   readModels: [
+    // Who logged a piano, who assessed it: a name, through those relations only.
+    { model: StaffMember },
     {
       model: User,
       fieldName: 'user',
       listFieldName: 'users',
+      filters: { single: ['idEq'], list: ['limit', 'offset'] },
       // A manager reads every account; anyone else reads only their own.
       readPolicy: (builder, ctx) => {
         if (!can(ctx.user.role, 'manageUsers')) builder.where('users.id', ctx.user.id);

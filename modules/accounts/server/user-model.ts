@@ -1,7 +1,6 @@
 import type { Pojo } from 'objection';
 
 import { ROLES, type Role } from '@/modules/accounts/core/roles';
-import { Piano } from '@/modules/pianos/server/piano-model';
 import { BaseModel } from '@/server/db/base-model';
 
 export class User extends BaseModel {
@@ -29,15 +28,6 @@ export class User extends BaseModel {
       updatedAt: { type: 'string' },
     },
   };
-
-  // A function, so the two models can name each other without an import cycle at load time.
-  static relationMappings = () => ({
-    pianosLogged: {
-      relation: BaseModel.HasManyRelation,
-      modelClass: Piano,
-      join: { from: 'users.id', to: 'pianos.created_by_id' },
-    },
-  });
 
   $formatJson(json: Pojo): Pojo {
     const out = super.$formatJson(json);

@@ -1,5 +1,5 @@
 // One nav definition for both layouts of the staff shell (bottom bar on a phone, side nav when wide).
-import type { Role } from '@/modules/accounts/core/roles';
+import { can, type Ability, type Role } from '@/modules/accounts/core/roles';
 
 export interface NavItem {
   label: string;
@@ -29,21 +29,20 @@ export const ROLE_HOME: Record<Role, string> = {
   manager: '/stock',
 };
 
-// Pages that belong to some roles only; a path not listed is open to every signed-in role.
-const OWNED_PATHS: readonly { prefix: string; roles: readonly Role[] }[] = [
-  { prefix: '/trade-ins/new', roles: ['intake', 'manager'] },
-  { prefix: '/trade-ins', roles: ['intake'] },
-  { prefix: '/bench', roles: ['technician', 'manager'] },
-  { prefix: '/workshop/rates', roles: ['manager'] },
-  { prefix: '/workshop/overruns', roles: ['manager'] },
-  { prefix: '/workshop/grading', roles: ['manager'] },
-  { prefix: '/workshop', roles: ['technician', 'manager'] },
-  { prefix: '/present/rules', roles: ['manager'] },
-  { prefix: '/present/texts', roles: ['manager'] },
-  { prefix: '/present', roles: ['floor', 'manager'] },
-  { prefix: '/showroom', roles: ['floor'] },
-  { prefix: '/stock', roles: ['manager'] },
-  { prefix: '/team', roles: ['manager'] },
+// Pages that belong to the roles with an ability; a path not listed is open to every signed-in role.
+const OWNED_PATHS: readonly { prefix: string; ability: Ability }[] = [
+  { prefix: '/trade-ins', ability: 'createPianos' },
+  { prefix: '/bench', ability: 'workAtBench' },
+  { prefix: '/workshop/rates', ability: 'setRates' },
+  { prefix: '/workshop/overruns', ability: 'planWork' },
+  { prefix: '/workshop/grading', ability: 'setGradeRules' },
+  { prefix: '/workshop', ability: 'workAtBench' },
+  { prefix: '/present/rules', ability: 'manageDeposits' },
+  { prefix: '/present/texts', ability: 'editShopTexts' },
+  { prefix: '/present', ability: 'showToBuyers' },
+  { prefix: '/showroom', ability: 'showToBuyers' },
+  { prefix: '/stock', ability: 'overseeStock' },
+  { prefix: '/team', ability: 'manageUsers' },
 ];
 
 const under = (path: string, prefix: string) => path === prefix || path.startsWith(`${prefix}/`);
@@ -51,7 +50,7 @@ const under = (path: string, prefix: string) => path === prefix || path.startsWi
 /** Where a role is sent when it opens a page that is not its own: its home; null when it may stay. */
 export function redirectFor(role: Role, pathname: string): string | null {
   const owner = OWNED_PATHS.find((p) => under(pathname, p.prefix));
-  if (!owner || owner.roles.includes(role)) return null;
+  if (!owner || can(role, owner.ability)) return null;
   return ROLE_HOME[role];
 }
 

@@ -5,10 +5,13 @@ import { graphProblem, type GraphProblem } from './graph-error';
 
 export type MutationOutcome<T> = { ok: true; data: T } | { ok: false; problem: GraphProblem };
 
+/** What a mutation document answers in its one field (`M` is its generated type). */
+export type MutationData<M> = NonNullable<M[keyof M]>;
+
 /**
  * Runs one mutation and hands back its answer or the server's problem in words. A second tap while
- * the first is on its way is refused (it would log, countersign or refund twice). Answers that are
- * JSON cannot be traced by urql's cache, so `typenames` names the cached queries to ask again.
+ * the first is on its way is refused (it would log, countersign or refund twice). `typenames` names
+ * the cached queries to ask again: urql's cache cannot trace an answer to every list it changes.
  */
 export function useGuardedMutation<T, V extends Record<string, unknown>>(document: string, field: string, typenames: readonly string[], busyMessage: string) {
   const client = useClient();

@@ -1,7 +1,7 @@
 import { useEffect } from 'react';
 import { useQuery } from 'urql';
 
-import type { Role } from '@/modules/accounts/core/roles';
+import type { MeQuery } from '@/modules/api/ui/graphql-types';
 
 import { useSession } from './use-session';
 
@@ -11,14 +11,10 @@ export const ME_QUERY = /* GraphQL */ `
   }
 `;
 
-interface MeData {
-  me: { id: number; email: string; name: string; role: Role; active: boolean };
-}
-
 /** Asks the server who is signed in once per visit; a changed name or role reaches the shell, a refused token ends the session. */
 export function useMeSync(): void {
   const { refreshUser } = useSession();
-  const [{ data }] = useQuery<MeData>({ query: ME_QUERY, requestPolicy: 'network-only' });
+  const [{ data }] = useQuery<MeQuery>({ query: ME_QUERY, requestPolicy: 'network-only' });
   const me = data?.me;
   useEffect(() => {
     if (me) refreshUser({ id: me.id, email: me.email, name: me.name, role: me.role });

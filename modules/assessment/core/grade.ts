@@ -1,7 +1,7 @@
 import { cents } from '@/modules/tone/core/pitch';
 
 import { defaultRules, type GradeRules } from './grade-rules';
-import type { Crack, Measurements } from './measurements';
+import { MEASURES, type Crack, type Measurements } from './measurements';
 import type { WorkItem } from './work-tasks';
 
 /**
@@ -47,31 +47,7 @@ export const AREA_LABELS: Record<Area, string> = {
 export type MeasureField = keyof Measurements;
 
 /** The area each measurement belongs to: an area is inspected when one of its measurements is given. */
-export const FIELD_AREAS: Record<MeasureField, Area> = {
-  keySidePlayMm: 'keys',
-  keyTouchesNeighbour: 'keys',
-  keysTouchingNeighbour: 'keys',
-  keyLevelDeviationMm: 'keys',
-  keytopDamage: 'keys',
-  stickingKeys: 'keys',
-  deadKeys: 'keys',
-  hammerGrooveDepthMm: 'hammers',
-  hammerFelt: 'hammers',
-  hammerFeltLeft: 'hammers',
-  steelCorrosion: 'strings',
-  bassWinding: 'strings',
-  brokenStrings: 'strings',
-  soundboardCracks: 'soundboard',
-  ribsSeparated: 'soundboard',
-  a4Hz: 'tuning',
-  tuningPins: 'tuning',
-  bassEvenness: 'play',
-  middleEvenness: 'play',
-  trebleEvenness: 'play',
-  dynamicRange: 'play',
-  notesStickingOut: 'play',
-  overallImpression: 'play',
-};
+export const FIELD_AREAS = Object.fromEntries(MEASURES.map((m) => [m.key, m.area])) as Record<MeasureField, Area>;
 
 /** The readiness verdict a dealer acts on. */
 export const READINESS = ['floor', 'work_first', 'wholesale', 'unjudged'] as const;
@@ -115,6 +91,9 @@ export interface Grade {
   /** Cents of the measured A4 from 440 Hz, when A4 was measured. */
   centsFromStandard: number | null;
 }
+
+/** A grade as screens and reports read it: everything but the record's own format number. */
+export type GradeView = Omit<Grade, 'format'>;
 
 const fmt = (n: number, digits = 1) => String(Number(n.toFixed(digits)));
 const keyList = (keys: number[]) => keys.map((k) => `${k}`).join(', ');

@@ -62,10 +62,10 @@ export const WORK_TASK_AREAS: Record<WorkTask, WorkArea> = {
 /** One recommended piece of work; `hours` only where the finding itself sizes the job. */
 export interface WorkItem {
   task: WorkTask;
-  hours?: number;
+  hours?: number | null;
   /** How many units the task covers where the rate card prices it per unit (strings, keytops). */
-  quantity?: number;
-  note?: string;
+  quantity?: number | null;
+  note?: string | null;
   /** A cheaper partial fix offered instead of the full one. */
-  alternativeTo?: WorkTask;
+  alternativeTo?: WorkTask | null;
 }

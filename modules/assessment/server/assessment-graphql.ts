@@ -1,12 +1,13 @@
-import { GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLString } from 'graphql';
+import { GraphQLInt, GraphQLNonNull, GraphQLString } from 'graphql';
 
 import { can } from '@/modules/accounts/core/roles';
 import { notAllowed } from '@/server/errors';
 import type { GraphDomain } from '@/server/graphql/domain';
-import { GraphQLJSON } from '@/server/graphql/json-scalar';
+import { list, nn } from '@/server/graphql/types';
 
 import { Assessment } from './assessment-models';
-import { assessmentHistory, correctAssessment, currentRules, findSamePianos, intakeRecord, setGradeRules, submitIntake } from './assessment-service';
+import { assessmentHistory, correctAssessment, findSamePianos, gradeRulesInForce, intakeRecord, setGradeRules, submitIntake } from './assessment-service';
+import { AssessmentVersionType, CorrectionInputType, GradeRulesInputType, GradeRulesType, IntakeInputType, IntakeRecordType, SamePianoType, SubmittedAssessmentType } from './assessment-types';
 
 const pianoId = { pianoId: { type: new GraphQLNonNull(GraphQLInt) } };
 
@@ -16,6 +17,7 @@ export const assessmentGraph: GraphDomain = {
       model: Assessment,
       fieldName: 'assessment',
       listFieldName: 'assessments',
+      filters: { single: ['idEq'], list: ['limit', 'offset', 'pianoIdEq'] },
       readPolicy: (_builder, ctx) => {
         if (!can(ctx.user.role, 'readPianos')) throw notAllowed('read assessments');
       },
@@ -23,24 +25,24 @@ export const assessmentGraph: GraphDomain = {
   ],
   queries: () => ({
     gradeRules: {
-      type: new GraphQLNonNull(GraphQLJSON),
+      type: nn(GradeRulesType),
       description: 'The grading rules in force (shop defaults until a manager changes them).',
-      resolve: () => currentRules(),
+      resolve: (_root, _args, ctx) => gradeRulesInForce(ctx.user),
     },
     assessmentHistory: {
-      type: new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(GraphQLJSON))),
-      description: 'Every version of a piano’s assessment, oldest first, each with what it changed.',
+      type: list(AssessmentVersionType),
+      description: 'Every version of a piano’s assessment, oldest first.',
       args: pianoId,
       resolve: (_root, args: { pianoId: number }, ctx) => assessmentHistory(ctx.user, args.pianoId),
     },
     samePianos: {
-      type: new GraphQLNonNull(new GraphQLList(new GraphQLNonNull(GraphQLJSON))),
+      type: list(SamePianoType),
       description: 'Pianos already on record with this maker, model and serial number: the same piano taken in before.',
       args: { maker: { type: new GraphQLNonNull(GraphQLString) }, model: { type: GraphQLString }, serialNumber: { type: new GraphQLNonNull(GraphQLString) }, exceptPianoId: { type: GraphQLInt } },
       resolve: (_root, args: Record<string, unknown>, ctx) => findSamePianos(ctx.user, args),
     },
     intake: {
-      type: GraphQLJSON,
+      type: IntakeRecordType,
       description: 'Where a piano came from; seller details for intake staff and managers only.',
       args: pianoId,
       resolve: (_root, args: { pianoId: number }, ctx) => intakeRecord(ctx.user, args.pianoId),
@@ -48,20 +50,19 @@ export const assessmentGraph: GraphDomain = {
   }),
   mutations: () => ({
     submitIntake: {
-      type: new GraphQLNonNull(GraphQLJSON),
-      args: { input: { type: new GraphQLNonNull(GraphQLJSON) } },
+      type: nn(SubmittedAssessmentType),
+      args: { input: { type: nn(IntakeInputType) } },
       resolve: (_root, args: { input: unknown }, ctx) => submitIntake(ctx.user, args.input),
     },
     correctAssessment: {
-      type: new GraphQLNonNull(GraphQLJSON),
-      args: { input: { type: new GraphQLNonNull(GraphQLJSON) } },
+      type: nn(SubmittedAssessmentType),
+      args: { input: { type: nn(CorrectionInputType) } },
       resolve: (_root, args: { input: unknown }, ctx) => correctAssessment(ctx.user, args.input),
     },
     setGradeRules: {
-      type: new GraphQLNonNull(GraphQLJSON),
-      args: { rules: { type: new GraphQLNonNull(GraphQLJSON) } },
+      type: nn(GradeRulesType),
+      args: { rules: { type: nn(GradeRulesInputType) } },
       resolve: (_root, args: { rules: unknown }, ctx) => setGradeRules(ctx.user, args.rules),
     },
   }),
 };
-

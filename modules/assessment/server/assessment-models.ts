@@ -1,7 +1,7 @@
 import type { Grade } from '@/modules/assessment/core/grade';
 import type { GradeRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
-import { User } from '@/modules/accounts/server/user-model';
+import { StaffMember } from '@/modules/accounts/server/staff-member-model';
 import { BaseModel } from '@/server/db/base-model';
 
 export class Intake extends BaseModel {
@@ -40,7 +40,7 @@ export class Assessment extends BaseModel {
   changeNote!: string | null;
   submittedById!: number;
   submittedAt!: string;
-  submittedBy?: User;
+  submittedBy?: StaffMember;
 
   // The JSON documents stay out of the generated read type; hand-written queries serve them whole.
   static jsonSchema = {
@@ -60,7 +60,7 @@ export class Assessment extends BaseModel {
   };
 
   static relationMappings = () => ({
-    submittedBy: { relation: BaseModel.BelongsToOneRelation, modelClass: User, join: { from: 'assessments.submitted_by_id', to: 'users.id' } },
+    submittedBy: { relation: BaseModel.BelongsToOneRelation, modelClass: StaffMember, join: { from: 'assessments.submitted_by_id', to: 'staff_members.id' } },
   });
 }
 

@@ -6,7 +6,7 @@ import type { Actor } from '@/modules/accounts/server/user-service';
 import { gradeAssessment, inspectedAreas, type Grade, type MeasureField } from '@/modules/assessment/core/grade';
 import { completeRules, defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
 import { correctionInput, intakeInput, remeasureInput, type SamePiano } from '@/modules/assessment/core/intake-input';
-import { diffMeasurements, type FieldChange } from '@/modules/assessment/core/measurement-diff';
+import { diffMeasurements } from '@/modules/assessment/core/measurement-diff';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { gradeRulesInput, withVersion } from '@/modules/assessment/core/rules-input';
 import { Photo } from '@/modules/photos/server/photo-model';
@@ -22,6 +22,12 @@ import { Assessment, GradeRuleSet, Intake } from './assessment-models';
 export async function currentRules(trx?: Knex.Transaction): Promise<GradeRules> {
   const latest = await GradeRuleSet.query(trx).orderBy('id', 'desc').first();
   return latest ? completeRules({ ...latest.rules, version: latest.version }) : defaultRules;
+}
+
+/** The rules in force, as a screen reads them. */
+export async function gradeRulesInForce(actor: Actor): Promise<GradeRules> {
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read the grading rules');
+  return currentRules();
 }
 
 /** The rules of each version named, as they were saved (completed with defaults for rules added since). */
@@ -278,8 +284,6 @@ export interface AssessmentVersion {
   changeNote: string | null;
   submittedBy: string;
   submittedAt: string;
-  /** What this version changed from the one before it. */
-  changes: FieldChange[];
   /** A re-measurement: the fields measured again after the work. */
   remeasured: string[];
 }
@@ -297,7 +301,6 @@ export async function assessmentHistory(actor: Actor, pianoId: number): Promise<
     changeNote: a.changeNote,
     submittedBy: a.submittedBy?.name ?? 'unknown',
     submittedAt: a.submittedAt,
-    changes: i === 0 ? [] : diffMeasurements(rows[i - 1].measurements, a.measurements),
     remeasured: remeasuredFieldsOf(a, rows[i - 1]),
   }));
 }

@@ -2,13 +2,13 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem, problemWithoutField } from '@/modules/accounts/ui/graph-error';
-import { AREAS, MARKS, MARK_WORDS, READINESS_WORDS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
+import { MARKS, MARK_WORDS, READINESS_WORDS, gradeAssessment, type Grade } from '@/modules/assessment/core/grade';
 import { defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
-import { gradeRulesInput, type GradeRulesInput } from '@/modules/assessment/core/rules-input';
+import { RULE_FIELDS, RULE_GROUPS, gradeRulesInput, rangeText, type GradeRulesInput, type RuleKey } from '@/modules/assessment/core/rules-input';
 import { CellInput } from '@/modules/shop/ui/components/cell-input';
 import { Feedback, type FeedbackState } from '@/modules/shop/ui/components/feedback';
-import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { useRateCard } from '@/modules/shop/ui/use-rate-card';
 import { conditionReport } from '@/modules/shop/core/condition-report';
 import type { RateCard } from '@/modules/shop/core/rate-card';
@@ -25,89 +25,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 import { ConditionSummary } from './components/condition-summary';
 import { useGradeRulesInForce, useSaveGradeRules } from './use-grade-rules-editor';
 
-/** A field of the rules by its name in `GradeRules`, as the schema and the server name it. */
-type RuleKey = keyof GradeRulesInput;
-
-interface RuleField {
-  key: RuleKey;
-  label: string;
-  unit: string;
-  min: number;
-  max: number;
-  whole?: boolean;
-  hint?: string;
-}
-
-interface RuleGroup {
-  title: string;
-  description: string;
-  fields: readonly RuleField[];
-}
-
-const MM = { unit: 'mm', min: 0, max: 15 } as const;
-const HOURS = { unit: 'h', min: 0, max: 200 } as const;
-const RATING = { unit: 'of 5', min: 1, max: 5, whole: true } as const;
-
-const GROUPS: readonly RuleGroup[] = [
-  {
-    title: 'Keys',
-    description: 'Sideways play at the key front, and how far the keys rest out of level.',
-    fields: [
-      { key: 'keySidePlayNormalMm', label: 'Side play is normal up to', ...MM },
-      { key: 'keyLevelSoundMm', label: 'Key level is sound up to', ...MM },
-      { key: 'keyLevelLightRegulationMm', label: 'Light regulation up to', ...MM },
-      { key: 'keyLevelFullRegulationMm', label: 'Full regulation at', ...MM, hint: 'Between the two, the hours rise step by step.' },
-      { key: 'lightRegulationHours', label: 'Hours for a light regulation', ...HOURS },
-      { key: 'fullRegulationHours', label: 'Hours for a full regulation', ...HOURS },
-    ],
-  },
-  {
-    title: 'Hammers',
-    description: 'The depth of the string grooves worn into the hammer felt.',
-    fields: [
-      { key: 'hammerGrooveNormalMm', label: 'Grooves are normal up to', ...MM },
-      { key: 'hammerGrooveReplaceMm', label: 'Replace the hammers at', ...MM },
-    ],
-  },
-  {
-    title: 'Soundboard',
-    description: 'When a crack counts as wide.',
-    fields: [
-      {
-        key: 'wideCrackGapMm',
-        label: 'A crack is wide from a gap of',
-        unit: 'mm',
-        min: 0.1,
-        max: 10,
-        // ISO/IEC 7810 ID-1: a payment card is 0.76 mm thick.
-        hint: '0.76 mm is the thickness of a payment card (ISO/IEC 7810): a card that slides in marks a wide crack.',
-      },
-    ],
-  },
-  {
-    title: 'Pitch',
-    description: 'Measured A4 against the standard 440 Hz.',
-    fields: [
-      { key: 'pitchSoundCents', label: 'Pitch is sound within', unit: 'cents', min: 0, max: 100 },
-      { key: 'pitchRaiseCents', label: 'Pitch raise when flatter than', unit: 'cents', min: 1, max: 300 },
-    ],
-  },
-  {
-    title: 'Play test',
-    description: 'The tester’s overall impression, from 1 to 5.',
-    fields: [
-      { key: 'playPoorAtOrBelow', label: 'Poor at or below', ...RATING, hint: 'A poor play test marks the piano “not for retail as it stands”.' },
-      { key: 'playGoodAtOrAbove', label: 'Good at or above', ...RATING },
-    ],
-  },
-  {
-    title: 'Provisional grades',
-    description: `A grade over too few areas claims too much: it is provisional, gives no readiness verdict of quality, and no disclosure is published from it. There are ${AREAS.length} areas.`,
-    fields: [{ key: 'minInspectedAreas', label: 'A grade is final from this many inspected areas', unit: 'areas', min: 1, max: AREAS.length, whole: true }],
-  },
-];
-
-const FIELDS: readonly RuleField[] = GROUPS.flatMap((g) => g.fields);
+const FIELDS = RULE_FIELDS;
 const LABELS = Object.fromEntries(FIELDS.map((f) => [f.key, f.label])) as Record<RuleKey, string>;
 
 type Draft = Record<RuleKey, string>;
@@ -140,10 +58,6 @@ function numbersOf(d: Draft): GradeRulesInput | null {
 /** "must not be below keyLevelSoundMm" reads "must not be below “Key level is sound up to”". */
 function inWords(message: string): string {
   return FIELDS.reduce((text, f) => text.split(f.key).join(`“${f.label}”`), message);
-}
-
-function rangeText(f: RuleField): string {
-  return `${f.whole ? 'A whole number' : 'A number'} from ${f.min} to ${f.max}${f.unit === 'of 5' ? '' : ` ${f.unit}`}.`;
 }
 
 /** Each field's problem in words, from the same schema the server checks with. */
@@ -181,9 +95,9 @@ const SAMPLE_WORDS = 'Side play 1.8 mm, keys 1.8 mm out of level, hammer grooves
 /** The manager's page for the grading rules: the shop defaults that turn measurements into a grade. Saving makes a new version. */
 export function GradeRulesScreen() {
   return (
-    <RoleGate roles={['manager']} title="Grading rules">
+    <AbilityGate ability="setGradeRules" title="Grading rules">
       <GradeRulesLoader />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 
@@ -252,7 +166,7 @@ function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () =
     </Card>
   );
 
-  const fields = GROUPS.map((g) => (
+  const fields = RULE_GROUPS.map((g) => (
     <Card key={g.title} role="group" accessibilityLabel={g.title} testID={`grading-group-${g.title.toLowerCase().replace(/\s+/g, '-')}`}>
       <View style={styles.groupHead}>
         <Heading level={3}>{g.title}</Heading>

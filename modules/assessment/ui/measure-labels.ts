@@ -1,16 +1,19 @@
 // Words for every measurement: field labels, answer labels and how a stored value reads back.
 import type { CaseCondition, PianoKind } from '@/modules/pianos/core/piano';
-import type { BASS_WINDING, FELT_LEFT, FELT_STATES, KEYTOP_DAMAGE, Measurements, STEEL_CORROSION, TUNING_PINS } from '@/modules/assessment/core/measurements';
+import { CRACK_FIELDS, MEASURE_BY_KEY, MEASURES, type BASS_WINDING, type FELT_LEFT, type FELT_STATES, type KEYTOP_DAMAGE, type Measurements, type STEEL_CORROSION, type TUNING_PINS } from '@/modules/assessment/core/measurements';
 
 export const KIND_LABELS: Record<PianoKind, string> = { upright: 'Upright', grand: 'Grand' };
 export const CASE_CONDITION_LABELS: Record<CaseCondition, string> = { excellent: 'Excellent', good: 'Good', worn: 'Worn', damaged: 'Damaged' };
 
-export const KEYTOP_DAMAGE_LABELS: Record<(typeof KEYTOP_DAMAGE)[number], string> = { chipped: 'Chipped', stained: 'Stained', yellowed: 'Yellowed', missing: 'Missing' };
-export const FELT_STATE_LABELS: Record<(typeof FELT_STATES)[number], string> = { soft: 'Soft', firm: 'Firm', hard: 'Hard', chemically_hardened: 'Chemically hardened' };
-export const FELT_LEFT_LABELS: Record<(typeof FELT_LEFT)[number], string> = { ample: 'Ample', thin: 'Thin', none: 'None left' };
-export const STEEL_CORROSION_LABELS: Record<(typeof STEEL_CORROSION)[number], string> = { none: 'None', light: 'Light', moderate: 'Moderate', heavy: 'Heavy' };
-export const BASS_WINDING_LABELS: Record<(typeof BASS_WINDING)[number], string> = { bright: 'Bright', dull: 'Dull', dark: 'Dark', green: 'Green' };
-export const TUNING_PIN_LABELS: Record<(typeof TUNING_PINS)[number], string> = { firm: 'Firm', some_loose: 'Some loose', loose: 'Loose' };
+// The answers' words come from the measurement's own description in core.
+const optionWords = <K extends 'keytopDamage' | 'hammerFelt' | 'hammerFeltLeft' | 'steelCorrosion' | 'bassWinding' | 'tuningPins'>(key: K) =>
+  Object.fromEntries(MEASURE_BY_KEY[key].options.map((o) => [o.value, o.label]));
+export const KEYTOP_DAMAGE_LABELS = optionWords('keytopDamage') as Record<(typeof KEYTOP_DAMAGE)[number], string>;
+export const FELT_STATE_LABELS = optionWords('hammerFelt') as Record<(typeof FELT_STATES)[number], string>;
+export const FELT_LEFT_LABELS = optionWords('hammerFeltLeft') as Record<(typeof FELT_LEFT)[number], string>;
+export const STEEL_CORROSION_LABELS = optionWords('steelCorrosion') as Record<(typeof STEEL_CORROSION)[number], string>;
+export const BASS_WINDING_LABELS = optionWords('bassWinding') as Record<(typeof BASS_WINDING)[number], string>;
+export const TUNING_PIN_LABELS = optionWords('tuningPins') as Record<(typeof TUNING_PINS)[number], string>;
 export const YES_NO = ['yes', 'no'] as const;
 export const YES_NO_LABELS: Record<(typeof YES_NO)[number], string> = { yes: 'Yes', no: 'No' };
 export const RATINGS = ['1', '2', '3', '4', '5'] as const;
@@ -19,40 +22,9 @@ export const RATING_LABELS: Record<(typeof RATINGS)[number], string> = { 1: '1',
 export type MeasureField = keyof Measurements;
 
 /** What each measurement is called on screen, in the history and in error messages. */
-export const MEASURE_LABELS: Record<MeasureField, string> = {
-  keySidePlayMm: 'Key side play',
-  keyTouchesNeighbour: 'A key can be pushed until it touches its neighbour',
-  keysTouchingNeighbour: 'Keys that touch a neighbour',
-  keyLevelDeviationMm: 'Key level deviation',
-  keytopDamage: 'Keytop damage',
-  stickingKeys: 'Sticking keys',
-  deadKeys: 'Silent (dead) keys',
-  hammerGrooveDepthMm: 'Deepest string groove',
-  hammerFelt: 'Hammer felt',
-  hammerFeltLeft: 'Felt left to shape',
-  steelCorrosion: 'Steel (treble) string corrosion',
-  bassWinding: 'Bass string winding',
-  brokenStrings: 'Broken strings',
-  soundboardCracks: 'Soundboard cracks',
-  ribsSeparated: 'Ribs separated from the board',
-  a4Hz: 'Measured A4',
-  tuningPins: 'Tuning pins',
-  bassEvenness: 'Bass evenness',
-  middleEvenness: 'Middle evenness',
-  trebleEvenness: 'Treble evenness',
-  dynamicRange: 'Dynamic range',
-  notesStickingOut: 'Notes that stand out',
-  overallImpression: 'Overall impression',
-};
+export const MEASURE_LABELS = Object.fromEntries(MEASURES.map((m) => [m.key, m.label])) as Record<MeasureField, string>;
 
-const CRACK_LABELS: Record<string, string> = {
-  lengthCm: 'Crack length',
-  widestGapMm: 'Widest gap',
-  crossesRib: 'Crosses a rib',
-  buzzes: 'Buzzes',
-  hurtsTuning: 'Affects tuning stability',
-  note: 'Crack note',
-};
+const CRACK_LABELS: Record<string, string> = Object.fromEntries(Object.entries(CRACK_FIELDS).map(([k, f]) => [k, f.label]));
 
 const INPUT_LABELS: Record<string, string> = {
   'seller.name': 'Seller name',

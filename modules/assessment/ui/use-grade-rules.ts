@@ -1,9 +1,12 @@
 import { useEffect } from 'react';
 import { useQuery } from 'urql';
 
+import { withFragments } from '@/modules/api/ui/document';
+import type { GradeRulesQuery } from '@/modules/api/ui/graphql-types';
+import { GRADE_RULE_FIELDS } from '@/modules/api/ui/table-fragments';
 import { completeRules, defaultRules, type GradeRules } from '@/modules/assessment/core/grade-rules';
 
-export const GRADE_RULES_QUERY = 'query GradeRules { gradeRules }';
+export const GRADE_RULES_QUERY = withFragments(/* GraphQL */ `query GradeRules { gradeRules { ...GradeRuleFields } }`, GRADE_RULE_FIELDS);
 
 const CACHE_KEY = 'feltwire.grade-rules';
 
@@ -25,7 +28,7 @@ function cachedRules(): GradeRules | null {
 
 /** The grading rules in force; the last ones seen (or the shop defaults) while they load or when offline. */
 export function useGradeRules(): GradeRules {
-  const [result] = useQuery<{ gradeRules: unknown }>({ query: GRADE_RULES_QUERY, requestPolicy: 'cache-and-network' });
+  const [result] = useQuery<GradeRulesQuery>({ query: GRADE_RULES_QUERY, requestPolicy: 'cache-and-network' });
   const loaded = result.data?.gradeRules;
   useEffect(() => {
     if (!looksLikeRules(loaded)) return;

@@ -1,28 +1,22 @@
 import { useQuery } from 'urql';
 
-import type { Acquisition, InspectionPlace } from './intake-draft';
+import type { IntakeRecordQuery, IntakeRecordQueryVariables } from '@/modules/api/ui/graphql-types';
 
-export const INTAKE_QUERY = 'query IntakeRecord($pianoId: Int!) { intake(pianoId: $pianoId) }';
+export const INTAKE_QUERY = /* GraphQL */ `
+  query IntakeRecord($pianoId: Int!) {
+    intake(pianoId: $pianoId) { pianoId acquisition receivedOn inspectedAt createdAt samePianoAs { id stockNumber } seller { name phone email address } notes }
+  }
+`;
 
 /** Where a piano came from; `seller` and `notes` only reach intake staff and managers. */
-export interface IntakeRecord {
-  pianoId: number;
-  acquisition: Acquisition;
-  receivedOn: string;
-  inspectedAt: InspectionPlace;
-  createdAt: string;
-  seller?: { name: string; phone: string | null; email: string | null; address: string | null };
-  /** the earlier record intake staff matched it with: the same piano taken in again */
-  samePianoAs?: { id: number; stockNumber: string } | null;
-  notes?: string | null;
-}
+export type IntakeRecord = NonNullable<IntakeRecordQuery['intake']>;
 
 const CONTEXT = { additionalTypenames: ['Assessments'] };
 
 export function useIntakeRecord(pianoId: number | null) {
-  const [result] = useQuery<{ intake: IntakeRecord | null }>({
+  const [result] = useQuery<IntakeRecordQuery, IntakeRecordQueryVariables>({
     query: INTAKE_QUERY,
-    variables: { pianoId },
+    variables: { pianoId: pianoId ?? 0 },
     pause: pianoId == null,
     context: CONTEXT,
     requestPolicy: 'cache-and-network',

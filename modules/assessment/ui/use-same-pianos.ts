@@ -1,10 +1,13 @@
 import { useEffect, useState } from 'react';
 import { useQuery } from 'urql';
 
-import type { SamePiano } from '@/modules/assessment/core/intake-input';
+import type { SamePianosQuery, SamePianosQueryVariables } from '@/modules/api/ui/graphql-types';
 
+export type SamePiano = SamePianosQuery['samePianos'][number];
 
-export const SAME_PIANOS_QUERY = 'query SamePianos($maker: String!, $model: String, $serialNumber: String!, $exceptPianoId: Int) { samePianos(maker: $maker, model: $model, serialNumber: $serialNumber, exceptPianoId: $exceptPianoId) }';
+export const SAME_PIANOS_QUERY = /* GraphQL */ `query SamePianos($maker: String!, $model: String, $serialNumber: String!, $exceptPianoId: Int) {
+  samePianos(maker: $maker, model: $model, serialNumber: $serialNumber, exceptPianoId: $exceptPianoId) { id stockNumber stage maker model serialNumber createdAt }
+}`;
 
 /** Asks the server once typing pauses; null while there is nothing to ask or no answer yet. */
 export function useSamePianos(maker: string, model: string, serialNumber: string, exceptPianoId: number | null): SamePiano[] | null {
@@ -16,7 +19,7 @@ export function useSamePianos(maker: string, model: string, serialNumber: string
     return () => clearTimeout(timer);
   }, [key]);
   const variables = JSON.parse(asked) as typeof typed;
-  const [result] = useQuery<{ samePianos: SamePiano[] }>({
+  const [result] = useQuery<SamePianosQuery, SamePianosQueryVariables>({
     query: SAME_PIANOS_QUERY,
     variables,
     pause: !variables.maker || !variables.serialNumber,

@@ -2,20 +2,17 @@ import type { CombinedError } from '@urql/core';
 import { useCallback, useState } from 'react';
 import { useClient } from 'urql';
 
-import type { Grade } from '@/modules/assessment/core/grade';
+import { withFragments } from '@/modules/api/ui/document';
+import type { CorrectAssessmentMutation, CorrectionInput, IntakeInput, SubmitIntakeMutation } from '@/modules/api/ui/graphql-types';
 
+import { GRADE_PARTS } from './grade-fragment';
 import type { DraftMode } from './intake-draft';
 
-export const SUBMIT_INTAKE = 'mutation SubmitIntake($input: JSON!) { submitIntake(input: $input) }';
-export const CORRECT_ASSESSMENT = 'mutation CorrectAssessment($input: JSON!) { correctAssessment(input: $input) }';
+const SUBMITTED = /* GraphQL */ `fragment SubmittedParts on SubmittedAssessment { pianoId stockNumber assessmentId version grade { ...GradeParts } }`;
+export const SUBMIT_INTAKE = withFragments(/* GraphQL */ `mutation SubmitIntake($input: IntakeInput!) { submitIntake(input: $input) { ...SubmittedParts } }`, SUBMITTED, GRADE_PARTS);
+export const CORRECT_ASSESSMENT = withFragments(/* GraphQL */ `mutation CorrectAssessment($input: CorrectionInput!) { correctAssessment(input: $input) { ...SubmittedParts } }`, SUBMITTED, GRADE_PARTS);
 
-export interface SubmittedAssessment {
-  pianoId: number;
-  stockNumber: string;
-  assessmentId: number;
-  version: number;
-  grade: Grade;
-}
+export type SubmittedAssessment = SubmitIntakeMutation['submitIntake'];
 
 export type SubmitOutcome = { ok: true; result: SubmittedAssessment } | { ok: false; error: CombinedError | undefined };
 
@@ -30,9 +27,12 @@ export function useSubmitAssessment(mode: DraftMode) {
     async (input: Record<string, unknown>): Promise<SubmitOutcome> => {
       setSubmitting(true);
       try {
-        const doc = mode === 'intake' ? SUBMIT_INTAKE : CORRECT_ASSESSMENT;
-        const result = await client.mutation<Record<string, SubmittedAssessment>>(doc, { input }, TYPENAMES).toPromise();
-        const data = result.data?.[mode === 'intake' ? 'submitIntake' : 'correctAssessment'];
+        // The input was checked with the server's own schema (intake-input.ts) when the draft was built.
+        const result =
+          mode === 'intake'
+            ? await client.mutation<SubmitIntakeMutation>(SUBMIT_INTAKE, { input: input as IntakeInput }, TYPENAMES).toPromise()
+            : await client.mutation<CorrectAssessmentMutation>(CORRECT_ASSESSMENT, { input: input as CorrectionInput }, TYPENAMES).toPromise();
+        const data = result.data && ('submitIntake' in result.data ? result.data.submitIntake : result.data.correctAssessment);
         if (data && !result.error) return { ok: true, result: data };
         return { ok: false, error: result.error };
       } finally {

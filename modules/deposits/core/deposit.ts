@@ -3,6 +3,10 @@ import { z } from '@/modules/input/core/zod';
 import { CURRENCY_DIGITS, roundMinor, toMinor, type Currency } from '@/modules/shop/core/money';
 
 // Shop rules for deposits and the balance at sale: shop defaults, set by a manager.
+/** Where a deposit stands: paid and holding the piano, applied at the sale, or ended otherwise. */
+export const DEPOSIT_STATUSES = ['pending', 'holding', 'applied', 'released', 'expired', 'refunding', 'refunded', 'cancelled'] as const;
+export type DepositStatus = (typeof DEPOSIT_STATUSES)[number];
+
 export interface DepositRules {
   /** Share of the asking price taken as a deposit. */
   percent: number;

@@ -1,6 +1,7 @@
+import type { DepositStatus } from '@/modules/deposits/core/deposit';
 import { BaseModel } from '@/server/db/base-model';
 
-export type DepositStatus = 'pending' | 'holding' | 'applied' | 'released' | 'expired' | 'refunding' | 'refunded' | 'cancelled';
+export type { DepositStatus };
 
 export class Deposit extends BaseModel {
   static tableName = 'deposits';

@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import { UniqueViolationError } from 'objection';
 import type Stripe from 'stripe';
 
+import { can, rolesThatCan } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
 import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
@@ -10,6 +11,7 @@ import { disclosureByToken } from '@/modules/disclosure/server/disclosure-servic
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
 import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
 import type { JobRun } from '@/modules/jobs/server/worker';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
@@ -30,7 +32,6 @@ const DAY = 86_400_000;
 const WEBHOOK_TOLERANCE_S = 300;
 // A hold's end job that wakes this little before the end still ends it (clocks differ slightly).
 const EXPIRY_GRACE_MS = 5_000;
-const pianoName = (p: Piano) => [p.maker, p.model].filter(Boolean).join(' ');
 const money = (minor: number, currency: string) => formatMoney(minor, currency as Currency);
 const expiryKey = (depositId: number) => `expire-hold:${depositId}`;
 
@@ -40,7 +41,7 @@ export async function depositRules(trx?: Knex.Transaction): Promise<DepositRules
 }
 
 export async function setDepositRules(actor: Actor, raw: unknown): Promise<DepositRules> {
-  if (actor.role !== 'manager') throw notAllowed('change the deposit rules');
+  if (!can(actor.role, 'manageDeposits')) throw notAllowed('change the deposit rules');
   const rules = depositRulesInput.parse(raw);
   await ShopSetting.query().insert({ key: 'depositRules', value: rules, updatedById: actor.id }).onConflict('key').merge();
   return rules;
@@ -117,7 +118,7 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
 }
 
 async function staffEmails(trx: Knex.Transaction): Promise<string[]> {
-  return (await User.query(trx).whereIn('role', ['floor', 'manager']).where('active', true)).map((u) => u.email);
+  return (await User.query(trx).whereIn('role', rolesThatCan('sellPianos')).where('active', true)).map((u) => u.email);
 }
 
 function receiptMail(deposit: Deposit, piano: Piano, rules: DepositRules): QueuedMail {
@@ -256,7 +257,7 @@ async function loadHolding(trx: Knex.Transaction, depositId: number): Promise<De
 
 /** A manager frees a held piano, refunding the deposit or keeping it as the shop's terms allow. */
 export async function releaseHold(deps: DepositDeps, actor: Actor, depositId: number, refund: boolean, why?: string | null): Promise<Deposit> {
-  if (actor.role !== 'manager') throw notAllowed('release holds');
+  if (!can(actor.role, 'manageDeposits')) throw notAllowed('release holds');
   return Deposit.transaction(async (trx) => {
     const d = await loadHolding(trx, depositId);
     await movePiano({ pianoId: d.pianoId, action: 'release_hold', by: actor.role, userId: actor.id, why: why ?? (refund ? 'Hold released, deposit refunded' : 'Hold released, deposit kept') }, trx);
@@ -292,7 +293,7 @@ export async function expireHoldJob(deps: DepositDeps, depositId: number): Promi
 
 /** A manager refunds a deposit kept after a release or an expired hold; the refund job makes it. */
 export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: number): Promise<Deposit> {
-  if (actor.role !== 'manager') throw notAllowed('refund deposits');
+  if (!can(actor.role, 'manageDeposits')) throw notAllowed('refund deposits');
   return Deposit.transaction(async (trx) => {
     const deposit = await Deposit.query(trx).findById(depositId).forUpdate();
     if (!deposit) throw notFound(`deposit ${depositId}`);
@@ -303,6 +304,7 @@ export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: 
 
 /** The sale: a held piano's deposit counts toward the price; the balance due is what is left. */
 export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number) {
+  if (!can(actor.role, 'sellPianos')) throw notAllowed('record sales');
   return Piano.transaction(async (trx) => {
     const holding = await Deposit.query(trx).findOne({ piano_id: pianoId, status: 'holding' }).forUpdate();
     const piano = await movePiano({ pianoId, action: 'sell', by: actor.role, userId: actor.id, why: holding ? `Deposit of ${money(holding.amountMinor, holding.currency)} applied` : null }, trx);
@@ -316,7 +318,7 @@ export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: numbe
 }
 
 export async function depositsFor(actor: Actor, pianoId: number) {
-  if (!['floor', 'manager'].includes(actor.role)) throw notAllowed('see deposits');
+  if (!can(actor.role, 'sellPianos')) throw notAllowed('see deposits');
   const piano = await Piano.query().findById(pianoId);
   if (!piano) throw notFound(`piano ${pianoId}`);
   const deposits = await Deposit.query().where('piano_id', pianoId).orderBy('id', 'desc');

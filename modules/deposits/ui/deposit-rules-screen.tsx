@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
@@ -12,13 +12,13 @@ import { useDepositRules } from './use-deposits';
 
 /** A manager's page for the deposit rules: share of the price, least deposit, hold, sales tax. */
 export function DepositRulesScreen() {
-  const { user } = useSession();
+  const allowed = useCan()('manageDeposits');
   const router = useRouter();
   const { rules, error } = useDepositRules();
   // Back to the piano the manager came from; a page opened directly goes to the manager's home.
   const back = () => (router.canGoBack() ? router.back() : router.replace('/stock'));
   const problem = graphProblem(error);
-  if (user?.role !== 'manager') {
+  if (!allowed) {
     return (
       <Screen title="Deposit rules" eyebrow="Deposits" width="form">
         <Notice tone="info">Only a manager sets the deposit rules.</Notice>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { balanceDue, type Balance } from '@/modules/deposits/core/deposit';
 import { dayAndTime, isCurrency, longDay, money } from '@/modules/disclosure/ui/disclosure-format';
 import { PALETTE, RADIUS, SPACE, STAGE_TONES } from '@/modules/theme/core/palette';
@@ -48,7 +48,6 @@ export function depositStatusText(d: DepositRow): string {
  * refunding (managers), and recording the sale and the delivery (floor staff and managers).
  */
 export function DepositsPanel({ pianoId, onChanged }: { pianoId: number; onChanged?: () => void }) {
-  const { user } = useSession();
   const { data, error, refresh } = usePianoDeposits(pianoId);
   const { piano, refresh: refreshStage } = usePianoStage(pianoId);
   const sale = useRecordSale();
@@ -57,8 +56,9 @@ export function DepositsPanel({ pianoId, onChanged }: { pianoId: number; onChang
   const [feedback, setFeedback] = useState<Feedback>(null);
   const [soldBalance, setSoldBalance] = useState<Balance | null>(null);
   const problem = graphProblem(error);
-  const manager = user?.role === 'manager';
-  const seller = user?.role === 'manager' || user?.role === 'floor';
+  const can = useCan();
+  const manager = can('manageDeposits');
+  const seller = can('sellPianos');
 
   const changed = () => {
     refresh();

@@ -1,8 +1,8 @@
 // The buyer's side of a deposit: start a checkout, then read how the payment stands. No sign-in.
-import type { Balance } from '@/modules/deposits/core/deposit';
+import type { Balance, DepositStatus } from '@/modules/deposits/core/deposit';
 import { disclosureApi, errorMessage, UNREACHABLE, type Loaded } from '@/modules/disclosure/ui/public-disclosure';
 
-export type DepositStatus = 'pending' | 'holding' | 'refunding' | 'refunded' | 'applied' | 'released' | 'expired' | 'cancelled';
+export type { DepositStatus };
 
 export interface PublicDepositStatus {
   status: DepositStatus | string;

@@ -1,41 +1,42 @@
 import { useCallback, useEffect } from 'react';
 import { useQuery } from 'urql';
 
-import type { Balance, DepositRules } from '@/modules/deposits/core/deposit';
+import { withFragments } from '@/modules/api/ui/document';
+import type { DepositRulesQuery, DepositsQuery, DepositsQueryVariables, RecordSaleMutation, RefundDepositMutation, ReleaseHoldMutation, SetDepositRulesMutation } from '@/modules/api/ui/graphql-types';
+import type { MutationData } from '@/modules/accounts/ui/use-guarded-mutation';
+import type { DepositRules } from '@/modules/deposits/core/deposit';
 import { useStaffMutation } from '@/modules/disclosure/ui/use-staff-mutation';
 import type { Stage } from '@/modules/pianos/core/piano';
 
-import type { DepositStatus } from './public-deposit';
+const DEPOSIT_PARTS = /* GraphQL */ `
+  fragment DepositParts on Deposit { id pianoId status amountMinor currency buyerName buyerEmail createdAt paidAt holdExpiresAt closedAt refundedMinor refundId closeReason }
+`;
+const BALANCE_PARTS = /* GraphQL */ `
+  fragment BalanceParts on Balance { priceMinor taxMinor totalMinor depositMinor balanceMinor currency salesTaxPct }
+`;
 
-export interface DepositRow {
-  id: number;
-  status: DepositStatus;
-  amountMinor: number;
-  currency: string;
-  buyerName: string;
-  buyerEmail: string;
-  createdAt: string;
-  paidAt: string | null;
-  holdExpiresAt: string | null;
-  closedAt: string | null;
-  refundedMinor: number;
-  refundId: string | null;
-  closeReason: string | null;
-}
-
-export interface PianoDeposits {
-  deposits: DepositRow[];
-  balance: Balance | null;
-  rules: DepositRules;
-}
-
-const DEPOSITS_QUERY = 'query Deposits($pianoId: Int!) { deposits(pianoId: $pianoId) }';
-const RULES_QUERY = 'query DepositRules { depositRules }';
+export const DEPOSITS_QUERY = withFragments(
+  /* GraphQL */ `
+    query Deposits($pianoId: Int!) {
+      deposits(pianoId: $pianoId) { deposits { ...DepositParts } balance { ...BalanceParts } rules { percent minimumMajor holdDays salesTaxPct } }
+    }
+  `,
+  DEPOSIT_PARTS,
+  BALANCE_PARTS,
+);
+const RULES_QUERY = /* GraphQL */ `
+  query DepositRules {
+    depositRules { percent minimumMajor holdDays salesTaxPct }
+  }
+`;
 const STAGE_QUERY = 'query PianoStage($id: Int) { piano(idEq: $id) { id stockNumber stage askingPriceMinor priceCurrency } }';
+
+export type PianoDeposits = DepositsQuery['deposits'];
+export type DepositRow = PianoDeposits['deposits'][number];
 
 /** A piano's deposits, the balance due and the rules; asked again every `everyMs` so a hold paid online shows up. */
 export function usePianoDeposits(pianoId: number, everyMs = 10_000) {
-  const [result, reexecute] = useQuery<{ deposits: PianoDeposits }>({ query: DEPOSITS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<DepositsQuery, DepositsQueryVariables>({ query: DEPOSITS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   useEffect(() => {
     if (!everyMs) return;
@@ -57,24 +58,51 @@ export function usePianoStage(pianoId: number) {
 }
 
 export function useDepositRules() {
-  const [result, reexecute] = useQuery<{ depositRules: DepositRules }>({ query: RULES_QUERY, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<DepositRulesQuery>({ query: RULES_QUERY, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   return { rules: result.data?.depositRules ?? null, error: result.error, refresh };
 }
 
 export function useReleaseHold() {
-  return useStaffMutation<DepositRow, { depositId: number; refund: boolean; why: string | null }>(
-    'mutation ReleaseHold($depositId: Int!, $refund: Boolean!, $why: String) { releaseHold(depositId: $depositId, refund: $refund, why: $why) }',
+  return useStaffMutation<MutationData<ReleaseHoldMutation>, { depositId: number; refund: boolean; why: string | null }>(
+    withFragments(
+      /* GraphQL */ `
+        mutation ReleaseHold($depositId: Int!, $refund: Boolean!, $why: String) {
+          releaseHold(depositId: $depositId, refund: $refund, why: $why) { ...DepositParts }
+        }
+      `,
+      DEPOSIT_PARTS,
+    ),
     'releaseHold',
   );
 }
 
 export function useRefundDeposit() {
-  return useStaffMutation<DepositRow, { depositId: number }>('mutation RefundDeposit($depositId: Int!) { refundDeposit(depositId: $depositId) }', 'refundDeposit');
+  return useStaffMutation<MutationData<RefundDepositMutation>, { depositId: number }>(
+    withFragments(
+      /* GraphQL */ `
+        mutation RefundDeposit($depositId: Int!) {
+          refundDeposit(depositId: $depositId) { ...DepositParts }
+        }
+      `,
+      DEPOSIT_PARTS,
+    ),
+    'refundDeposit',
+  );
 }
 
 export function useRecordSale() {
-  return useStaffMutation<{ stage: Stage; balance: Balance | null }, { pianoId: number }>('mutation RecordSale($pianoId: Int!) { recordSale(pianoId: $pianoId) }', 'recordSale');
+  return useStaffMutation<MutationData<RecordSaleMutation>, { pianoId: number }>(
+    withFragments(
+      /* GraphQL */ `
+        mutation RecordSale($pianoId: Int!) {
+          recordSale(pianoId: $pianoId) { stage balance { ...BalanceParts } }
+        }
+      `,
+      BALANCE_PARTS,
+    ),
+    'recordSale',
+  );
 }
 
 export function useRecordDelivery() {
@@ -82,5 +110,12 @@ export function useRecordDelivery() {
 }
 
 export function useSetDepositRules() {
-  return useStaffMutation<DepositRules, { r: DepositRules }>('mutation SetDepositRules($r: JSON!) { setDepositRules(rules: $r) }', 'setDepositRules');
+  return useStaffMutation<MutationData<SetDepositRulesMutation>, { r: DepositRules }>(
+    /* GraphQL */ `
+      mutation SetDepositRules($r: DepositRulesInput!) {
+        setDepositRules(rules: $r) { percent minimumMajor holdDays salesTaxPct }
+      }
+    `,
+    'setDepositRules',
+  );
 }

@@ -5,6 +5,7 @@ import QRCode from 'qrcode';
 
 import type { AreaMark } from '@/modules/assessment/core/grade';
 import { areaSections, isFormat2, notDoneSummary, pitchWhen, type AnyDisclosureContent, type DisclosureContent, type DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { MARK_LOOKS, PALETTE } from '@/modules/theme/core/palette';
 
 import { markWord, paperDay } from './disclosure-paper';
@@ -115,7 +116,7 @@ export async function signedCopyPdf(content: AnyDisclosureContent, meta: SignedC
   const doc = await newDoc(`Condition disclosure ${content.piano.stockNumber} v${meta.version}`);
   const p = content.piano;
   doc.fontSize(10).fillColor('#4a4238').text(`${content.dealerName} · condition disclosure · signed copy`);
-  doc.moveDown(0.5).font('bold').fontSize(20).fillColor('#1d1a16').text(`${p.maker}${p.model ? ` ${p.model}` : ''}`);
+  doc.moveDown(0.5).font('bold').fontSize(20).fillColor('#1d1a16').text(pianoName(p));
   doc.font('body').fontSize(11).text(`Stock number ${p.stockNumber}${p.serialNumber ? ` · serial ${p.serialNumber}` : ''} · ${p.year} · ${p.size}${p.finish ? ` · ${p.finish}` : ''}`);
   if (meta.price) doc.font('bold').text(`Asking price: ${meta.price}`).font('body');
   doc.text(`Version ${meta.version}.`);

@@ -5,14 +5,15 @@ import path from 'node:path';
 import Handlebars from 'handlebars';
 import type { Knex } from 'knex';
 
-import type { Actor } from '@/modules/accounts/server/user-service';
 import { can } from '@/modules/accounts/core/roles';
+import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
 import { gradedAssessments, remeasuredFieldsOf } from '@/modules/assessment/server/assessment-service';
 import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, publishBlockers, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
 import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { changeAskingPrice, type PricingDeps } from '@/modules/pricing/server/pricing-service';
 import { StageMove } from '@/modules/pianos/server/stage-move-model';
@@ -39,7 +40,7 @@ const TOKEN = /^[A-Za-z0-9_-]{32}$/;
 const newToken = () => randomBytes(24).toString('base64url');
 const NOT_FOUND = () => new AppError('NOT_FOUND', 'Not found.');
 
-const canPublish = (a: Actor) => a.role === 'manager' || a.role === 'floor';
+const canPublish = (a: Actor) => can(a.role, 'showToBuyers');
 
 export function priceText(minor: number | null, currency: string | null): string | null {
   return minor != null && currency ? formatMoney(minor, currency as Currency) : null;
@@ -52,7 +53,7 @@ export async function shopTexts(): Promise<{ dealerName: string; warranty: strin
 }
 
 export async function setShopTexts(actor: Actor, raw: unknown) {
-  if (actor.role !== 'manager') throw notAllowed('edit the disclosure texts');
+  if (!can(actor.role, 'editShopTexts')) throw notAllowed('edit the disclosure texts');
   const input = textsInput.parse(raw);
   for (const [key, value] of Object.entries(input)) {
     await ShopSetting.query().insert({ key, value: JSON.stringify(value) as never, updatedById: actor.id }).onConflict('key').merge();
@@ -137,7 +138,7 @@ export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pian
 }
 
 export async function disclosureVersions(actor: Actor, pianoId: number) {
-  if (!['floor', 'manager', 'intake', 'technician'].includes(actor.role)) throw notAllowed('read disclosures');
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read disclosures');
   const link = await DisclosureLink.query().findById(pianoId);
   const rows = await Disclosure.query().where('piano_id', pianoId).orderBy('version').select('id', 'version', 'digest', 'published_at', 'published_by_id');
   return { token: link?.token ?? null, versions: rows.map((r) => ({ id: r.id, version: r.version, digest: r.digest, publishedAt: r.publishedAt })) };
@@ -242,13 +243,13 @@ export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledg
     await deps.photos.put(pdfKey, pdf, 'application/pdf');
     await signed.$query(trx).patch({ pdfKey });
     const c = disclosure.content;
-    const pianoName = `${c.piano.maker}${c.piano.model ? ` ${c.piano.model}` : ''}`;
+    const named = pianoName(c.piano);
     await enqueue(trx, 'send-email', {
       to: signed.buyerEmail,
-      subject: `Your signed condition disclosure: ${pianoName}, ${c.piano.stockNumber}`,
+      subject: `Your signed condition disclosure: ${named}, ${c.piano.stockNumber}`,
       text: SIGNED_COPY_EMAIL({
         buyerName: signed.buyerName,
-        piano: pianoName,
+        piano: named,
         stockNumber: c.piano.stockNumber,
         dealerName: c.dealerName,
         version: disclosure.version,
@@ -286,7 +287,7 @@ export async function floorTag(deps: DisclosureDeps, actor: Actor, pianoId: numb
   if (!link) throw new AppError('CONFLICT', 'Publish the disclosure first: the tag carries its link.');
   return floorTagPdf({
     stockNumber: piano.stockNumber,
-    title: [piano.maker, piano.model].filter(Boolean).join(' '),
+    title: pianoName(piano),
     price: priceText(piano.askingPriceMinor, piano.priceCurrency),
     url: `${deps.publicUrl}/d/${link.token}`,
     dealerName: (await shopTexts()).dealerName,

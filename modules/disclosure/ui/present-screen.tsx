@@ -4,7 +4,9 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { AskingPriceForm } from '@/modules/pricing/ui/components/asking-price-form';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -30,7 +32,8 @@ import { usePublicDisclosure } from './use-public-disclosure';
 /** The floor tablet: the disclosure one area at a time for a buyer beside you, and the desk work around it. */
 export function PresentScreen({ id }: { id: number | null }) {
   const { user } = useSession();
-  if (user && user.role !== 'floor' && user.role !== 'manager') {
+  const can = useCan();
+  if (user && !can('showToBuyers')) {
     return (
       <Screen title="Showing a piano" eyebrow="Floor tablet">
         <Notice tone="info">This view is for floor staff and managers, who show pianos to buyers.</Notice>
@@ -38,7 +41,7 @@ export function PresentScreen({ id }: { id: number | null }) {
     );
   }
   if (id == null) return <NoPiano />;
-  return <PresentView pianoId={id} manager={user?.role === 'manager'} />;
+  return <PresentView pianoId={id} manager={can('setPrices')} />;
 }
 
 function NoPiano() {
@@ -83,7 +86,7 @@ function PresentView({ pianoId, manager }: { pianoId: number; manager: boolean }
   }
 
   const disclosure = result?.state === 'ok' ? result.data : null;
-  const title = [piano.maker, piano.model].filter(Boolean).join(' ');
+  const title = pianoName(piano);
   const twoColumns = width >= 1200;
 
   const walkthrough = !token ? null : disclosure ? (

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem, problemWithoutField } from '@/modules/accounts/ui/graph-error';
-import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -33,9 +33,9 @@ function problemsOf(t: ShopTexts): FieldErrors {
 /** The manager's page for the texts every new disclosure carries: the dealer's name and the warranty. */
 export function ShopTextsScreen() {
   return (
-    <RoleGate roles={['manager']} title="Disclosure texts">
+    <AbilityGate ability="editShopTexts" title="Disclosure texts">
       <ShopTextsLoader />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

@@ -1,36 +1,15 @@
 import { useCallback, useEffect } from 'react';
 import { useQuery } from 'urql';
 
+import type { MutationData } from '@/modules/accounts/ui/use-guarded-mutation';
+import type { AcknowledgementsQuery, AcknowledgementsQueryVariables, CountersignMutation, DisclosuresQuery, DisclosuresQueryVariables, PublishDisclosureMutation } from '@/modules/api/ui/graphql-types';
 import type { Stage } from '@/modules/pianos/core/piano';
 
 import { useStaffMutation } from './use-staff-mutation';
 
-export interface DisclosureVersions {
-  token: string | null;
-  versions: { id: number; version: number; digest: string; publishedAt: string }[];
-}
-
-export interface Published {
-  version: number;
-  digest: string;
-  token: string;
-  url: string;
-  publishedAt: string;
-  /** nothing had changed: the newest version stays */
-  unchanged: boolean;
-}
-
-export interface AcknowledgementRow {
-  id: number;
-  version: number;
-  buyerName: string;
-  buyerEmail: string;
-  digest: string;
-  acknowledgedAt: string;
-  countersignedBy: string | null;
-  countersignedAt: string | null;
-  hasPdf: boolean;
-}
+export type DisclosureVersions = DisclosuresQuery['disclosures'];
+export type Published = MutationData<PublishDisclosureMutation>;
+export type AcknowledgementRow = AcknowledgementsQuery['acknowledgements'][number];
 
 export interface PresentPiano {
   id: number;
@@ -44,8 +23,16 @@ export interface PresentPiano {
 }
 
 const PIANO_QUERY = 'query PresentPiano($id: Int) { piano(idEq: $id) { id stockNumber maker model stage stageChangedAt askingPriceMinor priceCurrency } }';
-const VERSIONS_QUERY = 'query Disclosures($pianoId: Int!) { disclosures(pianoId: $pianoId) }';
-const ACKS_QUERY = 'query Acknowledgements($pianoId: Int!) { acknowledgements(pianoId: $pianoId) }';
+const VERSIONS_QUERY = /* GraphQL */ `
+  query Disclosures($pianoId: Int!) {
+    disclosures(pianoId: $pianoId) { token versions { id version digest publishedAt } }
+  }
+`;
+const ACKS_QUERY = /* GraphQL */ `
+  query Acknowledgements($pianoId: Int!) {
+    acknowledgements(pianoId: $pianoId) { id version buyerName buyerEmail digest acknowledgedAt countersignedBy countersignedAt hasPdf }
+  }
+`;
 
 /** The piano as the floor tablet needs it: its name, stage and price. */
 export function usePresentPiano(id: number) {
@@ -56,14 +43,14 @@ export function usePresentPiano(id: number) {
 
 /** The piano's public link and every published version. */
 export function useDisclosureVersions(pianoId: number) {
-  const [result, reexecute] = useQuery<{ disclosures: DisclosureVersions }>({ query: VERSIONS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<DisclosuresQuery, DisclosuresQueryVariables>({ query: VERSIONS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   return { data: result.data?.disclosures ?? null, error: result.error, refresh };
 }
 
 /** Buyers' acknowledgements, newest first; asked again every `everyMs` so a buyer's phone shows up on the tablet. */
 export function useAcknowledgements(pianoId: number, everyMs = 10_000) {
-  const [result, reexecute] = useQuery<{ acknowledgements: AcknowledgementRow[] }>({ query: ACKS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<AcknowledgementsQuery, AcknowledgementsQueryVariables>({ query: ACKS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   useEffect(() => {
     if (!everyMs) return;
@@ -74,12 +61,23 @@ export function useAcknowledgements(pianoId: number, everyMs = 10_000) {
 }
 
 export function usePublishDisclosure() {
-  return useStaffMutation<Published, { pianoId: number }>('mutation PublishDisclosure($pianoId: Int!) { publishDisclosure(pianoId: $pianoId) }', 'publishDisclosure');
+  return useStaffMutation<Published, { pianoId: number }>(
+    /* GraphQL */ `
+      mutation PublishDisclosure($pianoId: Int!) {
+        publishDisclosure(pianoId: $pianoId) { version digest token url publishedAt unchanged }
+      }
+    `,
+    'publishDisclosure',
+  );
 }
 
 export function useCountersign() {
-  return useStaffMutation<{ id: number; countersignedAt: string; countersignedBy: string; pdfKey: string }, { acknowledgementId: number }>(
-    'mutation Countersign($acknowledgementId: Int!) { countersign(acknowledgementId: $acknowledgementId) }',
+  return useStaffMutation<MutationData<CountersignMutation>, { acknowledgementId: number }>(
+    /* GraphQL */ `
+      mutation Countersign($acknowledgementId: Int!) {
+        countersign(acknowledgementId: $acknowledgementId) { id countersignedAt countersignedBy }
+      }
+    `,
     'countersign',
   );
 }

@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { dayAndTime } from '@/modules/disclosure/ui/disclosure-format';
-import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { EmptyState } from '@/modules/theme/ui/empty-state';
@@ -33,9 +33,9 @@ function nextLine(j: BackgroundJob): string {
 /** Background work that needs a manager: refunds, e-mails and hold ends that failed, gave up or stalled. */
 export function BackgroundWorkScreen() {
   return (
-    <RoleGate roles={['manager']} title="Background work">
+    <AbilityGate ability="tendBackgroundWork" title="Background work">
       <BackgroundWork />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

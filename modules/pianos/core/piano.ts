@@ -105,6 +105,13 @@ export function describeSize(kind: PianoKind, sizeCm: number | null | undefined)
   return kind === 'grand' ? `grand, ${sizeCm} cm long` : `upright, ${sizeCm} cm tall`;
 }
 
+/** A piano as people name it: its maker and model ("Halvorsen Model 112"), the maker alone when no model is known. */
+export function pianoName(p: { maker: string; model?: string | null }): string {
+  const maker = p.maker.trim();
+  const model = p.model?.trim();
+  return model ? `${maker} ${model}` : maker;
+}
+
 /** A serial number as compared between records: case, spaces and punctuation do not make another piano. */
 export function serialKey(serial: string): string {
   return serial.toLowerCase().replace(/[^a-z0-9]/g, '');

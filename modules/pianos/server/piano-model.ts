@@ -1,5 +1,5 @@
 import { CASE_CONDITIONS, PIANO_KINDS, STAGES, type CaseCondition, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
-import { User } from '@/modules/accounts/server/user-model';
+import { StaffMember } from '@/modules/accounts/server/staff-member-model';
 import { BaseModel } from '@/server/db/base-model';
 
 export class Piano extends BaseModel {
@@ -25,7 +25,7 @@ export class Piano extends BaseModel {
   stageChangedAt!: string;
   createdById!: number | null;
   createdAt!: string;
-  createdBy?: User;
+  createdBy?: StaffMember;
 
   static jsonSchema = {
     type: 'object',
@@ -56,11 +56,11 @@ export class Piano extends BaseModel {
   };
 
   static relationMappings = () => ({
-    // Who logged the piano in; staff names are readable by every staff role.
+    // Who logged the piano in, by name: every staff role reads it.
     createdBy: {
       relation: BaseModel.BelongsToOneRelation,
-      modelClass: User,
-      join: { from: 'pianos.created_by_id', to: 'users.id' },
+      modelClass: StaffMember,
+      join: { from: 'pianos.created_by_id', to: 'staff_members.id' },
     },
   });
 }

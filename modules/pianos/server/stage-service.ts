@@ -1,9 +1,10 @@
 import type { Knex } from 'knex';
 
-import { can, isRole } from '@/modules/accounts/core/roles';
-import { decideMove, STAGE_ACTIONS, type GuardFacts, type Mover, type StageAction } from '@/modules/pianos/core/stage-machine';
+import { can } from '@/modules/accounts/core/roles';
+import type { Actor } from '@/modules/accounts/server/user-service';
+import { decideMove, STAGE_ACTIONS, type GuardFacts, type MoveRefusal, type Mover, type StageAction } from '@/modules/pianos/core/stage-machine';
 import type { Stage } from '@/modules/pianos/core/piano';
-import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
+import { AppError, badInput, notAllowed, notFound, type ErrorCode } from '@/server/errors';
 
 import { Piano } from './piano-model';
 import { StageMove } from './stage-move-model';
@@ -23,16 +24,15 @@ export async function recordArrival(trx: Knex.Transaction, piano: Piano, userId:
   await StageMove.query(trx).insert({ pianoId: piano.id, action: 'receive', fromStage: null, toStage: 'received', byUserId: userId, byRole: role });
 }
 
+const REFUSAL_CODES: Record<MoveRefusal, ErrorCode> = { unknown_move: 'BAD_INPUT', not_allowed: 'NOT_ALLOWED', wrong_stage: 'CONFLICT', not_yet: 'CONFLICT' };
+
 async function moveIn(trx: Knex.Transaction, req: MoveRequest): Promise<Piano> {
   // The row lock makes two moves of one piano take turns: the second sees the first one's stage.
   const piano = await Piano.query(trx).findById(req.pianoId).forUpdate();
   if (!piano) throw notFound(`piano ${req.pianoId}`);
   const facts = req.facts ? await req.facts(trx, piano) : {};
   const decided = decideMove(piano, req.action, req.by, new Date(), facts);
-  if (!decided.ok) {
-    if (decided.reason.startsWith('Not allowed')) throw new AppError('NOT_ALLOWED', decided.reason);
-    throw new AppError('CONFLICT', decided.reason);
-  }
+  if (!decided.ok) throw new AppError(REFUSAL_CODES[decided.kind], decided.reason);
   await StageMove.query(trx).insert({
     pianoId: piano.id,
     action: req.action,
@@ -63,8 +63,8 @@ export interface StageHistoryEntry {
   at: string;
 }
 
-export async function stageHistory(role: string, pianoId: number): Promise<StageHistoryEntry[]> {
-  if (!isRole(role) || !can(role, 'readPianos')) throw notAllowed('read stage history');
+export async function stageHistory(actor: Actor, pianoId: number): Promise<StageHistoryEntry[]> {
+  if (!can(actor.role, 'readPianos')) throw notAllowed('read stage history');
   const rows = (await StageMove.query()
     .leftJoin('users', 'users.id', 'stage_moves.by_user_id')
     .where('stage_moves.piano_id', pianoId)

@@ -1,4 +1,4 @@
-import { STAGES, describeSize, describeYear, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
+import { STAGES, describeSize, describeYear, pianoName, type PianoKind, type Stage } from '@/modules/pianos/core/piano';
 
 /** A stage from the address bar, or null when it names none. */
 export function parseStage(value: unknown): Stage | null {
@@ -39,5 +39,5 @@ export function formatDayTime(iso: string | null | undefined): string {
 }
 
 export function makerAndModel(maker: string, model: string | null): string {
-  return model ? `${maker} ${model}` : maker;
+  return pianoName({ maker, model });
 }

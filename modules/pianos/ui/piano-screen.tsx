@@ -58,7 +58,7 @@ export function PianoScreen({ id }: { id: number | null }) {
       </Screen>
     );
   }
-  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  const onFloorSide = !!user && can(user.role, 'showToBuyers');
   return (
     <Screen
       title={piano.stockNumber}
@@ -127,7 +127,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
         <PlayTestRecordings pianoId={piano.id} />
       </Section>
     ) : null;
-  const onFloorSide = user?.role === 'floor' || user?.role === 'manager';
+  const onFloorSide = !!user && can(user.role, 'sellPianos');
   // Money sections for the roles that may see them; the server checks each field again.
   const offer =
     user && can(user.role, 'readOffers') ? (

@@ -1,13 +1,14 @@
 import { useQuery } from 'urql';
 
-import { PIANO_FIELDS, type PianoRecord } from './use-pianos';
+import { withFragments } from '@/modules/api/ui/document';
+import type { PianoQuery, PianoQueryVariables } from '@/modules/api/ui/graphql-types';
 
-export const PIANO_QUERY = `query Piano($id: Int) {
-  piano(idEq: $id) { ${PIANO_FIELDS} }
-}`;
+import { PIANO_RECORD } from './use-pianos';
+
+export const PIANO_QUERY = withFragments(/* GraphQL */ `query Piano($id: Int) { piano(idEq: $id) { ...PianoRecord } }`, PIANO_RECORD);
 
 export function usePiano(id: number | null) {
-  const [result] = useQuery<{ piano: PianoRecord | null }>({
+  const [result] = useQuery<PianoQuery, PianoQueryVariables>({
     query: PIANO_QUERY,
     variables: { id },
     pause: id == null,

@@ -7,7 +7,7 @@ import { RETAIL_READINESS, type PricingRules, type RetailReadiness } from '@/mod
 import { READINESS_WORDS } from '@/modules/assessment/core/grade';
 import { CURRENCIES, CURRENCY_DIGITS, toMinor, type Currency } from '@/modules/shop/core/money';
 import { Feedback, type FeedbackState } from '@/modules/shop/ui/components/feedback';
-import { RoleGate } from '@/modules/shop/ui/components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { minorToText, parseNumber } from '@/modules/shop/ui/work-format';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -99,9 +99,9 @@ function rulesOf(d: RulesDraft): Omit<PricingRules, 'version'> {
 /** The manager's pricing rules: what each piano is worth by kind, size, age and condition, and what an offer keeps back. */
 export function PricingRulesScreen() {
   return (
-    <RoleGate roles={['manager']} title="Pricing rules">
+    <AbilityGate ability="setPricingRules" title="Pricing rules" eyebrow="Manager">
       <Loader />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

@@ -1,4 +1,4 @@
-import { AREAS, AREA_LABELS, readinessReasons, worstMark, type Area, type AreaMark, type Finding, type Grade, type Readiness } from '@/modules/assessment/core/grade';
+import { AREAS, AREA_LABELS, readinessReasons, worstMark, type Area, type AreaMark, type Finding, type GradeView, type Readiness } from '@/modules/assessment/core/grade';
 import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 
 import { estimateReconditioning, type Estimate, type EstimateLine } from './estimate';
@@ -40,7 +40,7 @@ export interface ConditionReport {
 }
 
 /** Builds the condition report from a grade and the shop's rate card. Pure: same grade and card, same report. */
-export function conditionReport(grade: Grade, card: RateCard): ConditionReport {
+export function conditionReport(grade: GradeView, card: RateCard): ConditionReport {
   const estimate = estimateReconditioning(grade.findings, card);
   const owner = new Map<WorkTask, Area>();
   for (const line of [...estimate.lines, ...estimate.options]) {

@@ -50,7 +50,7 @@ export function estimateReconditioning(findings: Finding[], card: RateCard): Est
       const quantity = w.quantity ?? 1;
       const hours = w.hours ?? rate.hours * (rate.perUnit ? quantity : 1);
       const prev = wanted.get(w.task);
-      if (!prev) wanted.set(w.task, { hours, quantity, because: [f.check], alternativeTo: w.alternativeTo });
+      if (!prev) wanted.set(w.task, { hours, quantity, because: [f.check], alternativeTo: w.alternativeTo ?? undefined });
       else {
         prev.hours = Math.max(prev.hours, hours);
         prev.quantity = Math.max(prev.quantity, quantity);

@@ -1,12 +1,13 @@
 import type { Knex } from 'knex';
 import { UniqueViolationError } from 'objection';
 
-import { can, type Role } from '@/modules/accounts/core/roles';
+import { can, rolesThatCan, type Ability } from '@/modules/accounts/core/roles';
 import { User } from '@/modules/accounts/server/user-model';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { Assessment } from '@/modules/assessment/server/assessment-models';
 import { latestGradedAssessment } from '@/modules/assessment/server/assessment-service';
+import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { cautionsFor } from '@/modules/shop/core/cautions';
@@ -22,10 +23,9 @@ import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { ClimateReadingRow, PartUse, RateCardSet, TimeEntry, TimeEntryCorrection, WorkItem, WorkNote, WorkPlan } from './shop-models';
 
-const isManager = (a: Actor) => a.role === 'manager';
-const atBench = (a: Actor) => a.role === 'technician' || a.role === 'manager';
-function requireRole(actor: Actor, ok: (a: Actor) => boolean, what: string): void {
-  if (!ok(actor)) throw notAllowed(what);
+// Asked first, before the input is read: a caller without the right learns nothing from it.
+function requireAbility(actor: Actor, ability: Ability, what: string): void {
+  if (!can(actor.role, ability)) throw notAllowed(what);
 }
 
 // ---- rate card ----
@@ -35,8 +35,14 @@ export async function currentRateCard(trx?: Knex.Transaction): Promise<RateCard>
   return latest ? latest.card : demoRateCard;
 }
 
+/** The rate card as a screen reads it: what work costs is for those who price it. */
+export async function rateCardFor(actor: Actor): Promise<RateCard> {
+  requireAbility(actor, 'readWorkCosts', 'see the rate card');
+  return currentRateCard();
+}
+
 export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard> {
-  requireRole(actor, isManager, 'change the rate card');
+  requireAbility(actor, 'setRates', 'change the rate card');
   const input = rateCardInput.parse(raw);
   return RateCardSet.transaction(async (trx) => {
     const card: RateCard = { ...input, version: await nextVersion(trx, RateCardSet.tableName, 'rates') };
@@ -49,7 +55,7 @@ export async function setRateCard(actor: Actor, raw: unknown): Promise<RateCard>
 
 /** The manager's choice for an assessed piano. Recondition drafts a plan; the others move the piano. */
 export async function decide(actor: Actor, raw: { pianoId: number; decision: string; why?: string | null }): Promise<{ stage: string; planId: number | null }> {
-  requireRole(actor, isManager, 'decide what happens to a piano');
+  requireAbility(actor, 'decidePianos', 'decide what happens to a piano');
   if (!DECISIONS.includes(raw.decision as Decision)) throw badInput('decision', `must be one of ${DECISIONS.join(', ')}`);
   const decision = raw.decision as Decision;
   if (decision === 'sell_as_is') {
@@ -111,11 +117,11 @@ async function planFor(trx: Knex.Transaction | undefined, pianoId: number): Prom
 async function checkAssignee(id: number | null | undefined): Promise<void> {
   if (id == null) return;
   const user = await User.query().findById(id);
-  if (!user || !user.active || !(['technician', 'manager'] as Role[]).includes(user.role)) throw badInput('assignedToId', 'must be an active technician or manager');
+  if (!user || !user.active || !rolesThatCan('workAtBench').includes(user.role)) throw badInput('assignedToId', 'must be an active member of staff who works at the bench');
 }
 
 export async function addWorkItem(actor: Actor, pianoId: number, raw: unknown): Promise<WorkItem> {
-  requireRole(actor, isManager, 'plan workshop work');
+  requireAbility(actor, 'planWork', 'plan workshop work');
   const input = workItemInput.parse(raw);
   if (input.task === 'custom' && !input.title) throw badInput('title', 'is required for a custom item');
   await checkAssignee(input.assignedToId);
@@ -143,7 +149,7 @@ async function loadItem(trx: Knex.Transaction | undefined, itemId: number, lock 
 }
 
 export async function updateWorkItem(actor: Actor, itemId: number, raw: unknown): Promise<WorkItem> {
-  requireRole(actor, isManager, 'change workshop work');
+  requireAbility(actor, 'planWork', 'change workshop work');
   const patch = workItemPatch.parse(raw);
   await checkAssignee(patch.assignedToId);
   const item = await loadItem(undefined, itemId);
@@ -151,7 +157,7 @@ export async function updateWorkItem(actor: Actor, itemId: number, raw: unknown)
 }
 
 export async function removeWorkItem(actor: Actor, itemId: number): Promise<boolean> {
-  requireRole(actor, isManager, 'drop workshop work');
+  requireAbility(actor, 'planWork', 'drop workshop work');
   return WorkItem.transaction(async (trx) => {
     // Locked, so a timer cannot start on the item while it is being dropped.
     const item = await loadItem(trx, itemId, true);
@@ -164,7 +170,7 @@ export async function removeWorkItem(actor: Actor, itemId: number): Promise<bool
 }
 
 export async function approvePlan(actor: Actor, pianoId: number, why?: string | null): Promise<Piano> {
-  requireRole(actor, isManager, 'approve plans');
+  requireAbility(actor, 'decidePianos', 'approve plans');
   return Piano.transaction(async (trx) => {
     const plan = await planFor(trx, pianoId);
     const piano = await movePiano(
@@ -186,9 +192,9 @@ export async function approvePlan(actor: Actor, pianoId: number, why?: string | 
 // ---- the bench ----
 
 async function benchItem(trx: Knex.Transaction | undefined, actor: Actor, itemId: number, lock = false): Promise<WorkItem> {
-  requireRole(actor, atBench, 'log workshop work');
+  requireAbility(actor, 'workAtBench', 'log workshop work');
   const item = await loadItem(trx, itemId, lock);
-  if (actor.role === 'technician' && item.assignedToId != null && item.assignedToId !== actor.id) {
+  if (!can(actor.role, 'workOnAnyItem') && item.assignedToId != null && item.assignedToId !== actor.id) {
     // Taking an unassigned item is first come; the one who came second is told who has it.
     if (lock) throw new AppError('CONFLICT', `${(await User.query(trx).findById(item.assignedToId))?.name ?? 'Someone else'} has taken this item: ask a manager to assign it to you.`);
     throw notAllowed('log work on an item assigned to someone else');
@@ -228,18 +234,21 @@ export async function stopTimer(actor: Actor, itemId: number): Promise<TimeEntry
 }
 
 export async function logTime(actor: Actor, raw: unknown): Promise<TimeEntry> {
+  requireAbility(actor, 'workAtBench', 'log workshop work');
   const input = timeEntryInput.parse(raw);
   await benchItem(undefined, actor, input.workItemId);
   return TimeEntry.query().insertAndFetch({ workItemId: input.workItemId, technicianId: actor.id, startedAt: new Date().toISOString(), minutes: input.minutes, note: input.note ?? null });
 }
 
 export async function addPart(actor: Actor, raw: unknown): Promise<PartUse> {
+  requireAbility(actor, 'workAtBench', 'log workshop work');
   const input = partUseInput.parse(raw);
   await benchItem(undefined, actor, input.workItemId);
   return PartUse.query().insertAndFetch({ ...input, loggedById: actor.id });
 }
 
 export async function addNote(actor: Actor, itemId: number, body: string): Promise<WorkNote> {
+  requireAbility(actor, 'workAtBench', 'log workshop work');
   const text = (body ?? '').trim();
   if (!text || text.length > 2000) throw badInput('body', 'must be 1 to 2000 characters');
   await benchItem(undefined, actor, itemId);
@@ -251,6 +260,7 @@ export async function addNote(actor: Actor, itemId: number, body: string): Promi
  * the reason is kept on the item and in its notes.
  */
 export async function setWorkItemDone(actor: Actor, raw: unknown): Promise<WorkItem> {
+  requireAbility(actor, 'workAtBench', 'log workshop work');
   const input = doneInput.parse(raw);
   return WorkItem.transaction(async (trx) => {
     const item = await benchItem(trx, actor, input.itemId);
@@ -269,7 +279,7 @@ export async function setWorkItemDone(actor: Actor, raw: unknown): Promise<WorkI
 
 /** A time entry corrected by the technician who logged it or a manager; each correction is kept. */
 export async function correctTimeEntry(actor: Actor, raw: unknown): Promise<TimeEntry> {
-  requireRole(actor, (a) => can(a.role, 'correctOwnTime'), 'correct logged time');
+  requireAbility(actor, 'correctOwnTime', 'correct logged time');
   const input = timeCorrectionInput.parse(raw);
   return TimeEntry.transaction(async (trx) => {
     const entry = await TimeEntry.query(trx).findById(input.timeEntryId).forUpdate();
@@ -290,6 +300,7 @@ export async function correctTimeEntry(actor: Actor, raw: unknown): Promise<Time
 
 /** Every item done, and a post-workshop assessment since the plan was approved: the piano is ready. */
 export async function finishWorkshop(actor: Actor, pianoId: number): Promise<Piano> {
+  requireAbility(actor, 'workAtBench', 'finish workshop work');
   return Piano.transaction(async (trx) => {
     const plan = await planFor(trx, pianoId);
     return movePiano(
@@ -361,8 +372,8 @@ async function itemViews(items: WorkItem[], hourlyRateMinor: (pianoId: number, i
  * (for managers) every open item on pianos in the workshop. A fixed number of statements per page.
  */
 export async function workQueue(actor: Actor, raw: { scope?: string | null; limit?: number | null; offset?: number | null } = {}): Promise<QueuePage> {
-  requireRole(actor, atBench, 'see the work queue');
-  const manager = isManager(actor);
+  requireAbility(actor, 'workAtBench', 'see the work queue');
+  const manager = can(actor.role, 'planWork');
   const scope = (raw.scope ?? (manager ? 'all' : 'mine')) as QueueScope;
   if (!QUEUE_SCOPES.includes(scope)) throw badInput('scope', `must be one of ${QUEUE_SCOPES.join(', ')}`);
   if (scope === 'all' && !manager) throw notAllowed('see every open item in the workshop');
@@ -410,7 +421,7 @@ export async function workQueue(actor: Actor, raw: { scope?: string | null; limi
     scope,
     total: counts[scope],
     counts,
-    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: [items[n].maker, items[n].model].filter(Boolean).join(' ') })),
+    items: views.map((v, n) => ({ ...v, stockNumber: items[n].stockNumber, piano: pianoName(items[n]) })),
     running: running ? { id: running.id, title: running.title, stockNumber: running.stockNumber } : null,
   };
 }
@@ -430,7 +441,7 @@ export interface PlanView {
 const hoursOf = (minutes: number) => Math.round((minutes / 60) * 100) / 100;
 
 export async function planView(actor: Actor, pianoId: number): Promise<PlanView | null> {
-  requireRole(actor, (a) => can(a.role, 'readPianos') && a.role !== 'floor', 'see workshop plans');
+  requireAbility(actor, 'readWorkCosts', 'see workshop plans');
   const plan = await WorkPlan.query().findOne({ piano_id: pianoId });
   if (!plan) return null;
   const items = await itemViews(await WorkItem.query().where('plan_id', plan.id).orderBy([{ column: 'priority' }, { column: 'id' }]), () => plan.hourlyRateMinor);
@@ -524,7 +535,7 @@ interface OverrunRow {
  * offset it. One statement, whatever the number of plans (two past the last page, to count them).
  */
 export async function overruns(actor: Actor, page: { limit?: number | null; offset?: number | null } = {}): Promise<{ total: number; overruns: Overrun[] }> {
-  requireRole(actor, isManager, 'see workshop overruns');
+  requireAbility(actor, 'planWork', 'see workshop overruns');
   const limit = page.limit ?? DEFAULT_PAGE_SIZE;
   const offset = page.offset ?? 0;
   if (!Number.isInteger(limit) || limit < 1 || limit > MAX_PAGE_SIZE) throw badInput('limit', `must be between 1 and ${MAX_PAGE_SIZE}`);
@@ -564,7 +575,7 @@ export async function overruns(actor: Actor, page: { limit?: number | null; offs
 }
 
 export async function itemDetail(actor: Actor, itemId: number) {
-  requireRole(actor, atBench, 'open workshop items');
+  requireAbility(actor, 'workAtBench', 'open workshop items');
   const item = await loadItem(undefined, itemId);
   const plan = (await WorkPlan.query().findById(item.planId))!;
   const [view] = await itemViews([item], () => plan.hourlyRateMinor);
@@ -590,7 +601,7 @@ export async function itemDetail(actor: Actor, itemId: number) {
 // ---- climate ----
 
 export async function logClimate(actor: Actor, raw: unknown) {
-  requireRole(actor, atBench, 'log the workshop climate');
+  requireAbility(actor, 'workAtBench', 'log the workshop climate');
   const input = climateInput.parse(raw);
   const reading = readClimate(input.tempC, input.relativeHumidity);
   const row = await ClimateReadingRow.query().insertAndFetch({ tempC: input.tempC, relativeHumidity: input.relativeHumidity, emcPct: Math.round(reading.emcPct * 100) / 100, loggedById: actor.id });
@@ -598,7 +609,7 @@ export async function logClimate(actor: Actor, raw: unknown) {
 }
 
 export async function recentClimate(actor: Actor, limit = 20) {
-  requireRole(actor, atBench, 'read the workshop climate');
+  requireAbility(actor, 'workAtBench', 'read the workshop climate');
   const rows = await ClimateReadingRow.query().orderBy('at', 'desc').limit(limit);
   return rows.map((r) => ({ ...r, warning: readClimate(r.tempC, r.relativeHumidity).warning }));
 }

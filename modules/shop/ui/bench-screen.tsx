@@ -3,6 +3,7 @@ import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { ChoiceGroup } from '@/modules/theme/ui/choice-group';
@@ -22,7 +23,8 @@ import { PRIORITIES, PRIORITY_LABELS } from './work-format';
 /** The technician's bench: their open items, most urgent first, and those waiting for someone; a manager also sees every open item. */
 export function BenchScreen() {
   const { user } = useSession();
-  const manager = user?.role === 'manager';
+  // The whole bench is for those who plan the work.
+  const manager = useCan()('planWork');
   return (
     <Screen
       title="Bench"

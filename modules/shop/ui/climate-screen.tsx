@@ -16,7 +16,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { Feedback, type FeedbackState } from './components/feedback';
 import { FieldRow } from './components/field-row';
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { useClimateReadings, useLogClimate, type ClimateReadingView } from './use-climate';
 import { formatWhen, parseNumber } from './work-format';
 
@@ -26,9 +26,9 @@ const band = `${HUMIDITY_BAND.low}-${HUMIDITY_BAND.high} %`;
 /** The workshop's air: log a reading, see the wood's moisture content and whether the air is too dry or damp. */
 export function ClimateScreen() {
   return (
-    <RoleGate roles={['technician', 'manager']} title="Workshop climate">
+    <AbilityGate ability="workAtBench" title="Workshop climate">
       <Climate />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

@@ -15,7 +15,7 @@ import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { VarianceTag } from './components/variance-tag';
 import { OVERRUNS_PAGE, useOverruns, type Overrun } from './use-overruns';
 import { money } from './work-format';
@@ -34,9 +34,9 @@ function rowLabel(o: Overrun): string {
 /** Pianos whose workshop items have cost more than their estimates, worst first. */
 export function OverrunsScreen() {
   return (
-    <RoleGate roles={['manager']} title="Workshop overruns">
+    <AbilityGate ability="planWork" title="Workshop overruns">
       <Overruns />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

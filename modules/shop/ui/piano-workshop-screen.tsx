@@ -2,8 +2,9 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { useGradeRules } from '@/modules/assessment/ui/use-grade-rules';
+import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
 import { STAGE_LABELS, type Stage } from '@/modules/pianos/core/piano';
 import type { Decision } from '@/modules/shop/core/work-input';
 import { makerAndModel } from '@/modules/pianos/ui/piano-format';
@@ -26,19 +27,19 @@ import { Feedback, type FeedbackState } from './components/feedback';
 import { FinishPanel } from './components/finish-panel';
 import { PlanPanel } from './components/plan-panel';
 import { RemeasurePanel } from './components/remeasure-panel';
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { StageActions } from './stage-actions';
 import { StageTimeline } from './stage-timeline';
 import { useAssignees } from './use-assignees';
 import { useRateCard } from './use-rate-card';
-import { useAssessmentHistory, usePlanCommands, useWorkPlan, type WorkPlanView } from './use-work-plan';
+import { usePlanCommands, useWorkPlan, type WorkPlanView } from './use-work-plan';
 
 /** A piano's workshop page: the manager's decision and plan, estimate against actual, re-measuring and finishing. */
 export function PianoWorkshopScreen({ id }: { id: number | null }) {
   return (
-    <RoleGate roles={['technician', 'manager']} title="Workshop">
+    <AbilityGate ability="workAtBench" title="Workshop">
       <PianoWorkshop id={id} />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 
@@ -63,8 +64,8 @@ function PianoWorkshop({ id }: { id: number | null }) {
 }
 
 function WorkshopPage({ piano }: { piano: PianoRecord }) {
-  const { user } = useSession();
-  const manager = user?.role === 'manager';
+  // Deciding, planning and approving go together (decidePianos, planWork): the manager's part of the page.
+  const manager = useCan()('planWork');
   const wide = useWide();
   const { plan, loaded: planLoaded, error: planError, refresh: refreshPlan } = useWorkPlan(piano.id);
   const { history, latest, refresh: refreshHistory } = useAssessmentHistory(piano.id);

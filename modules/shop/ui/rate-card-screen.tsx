@@ -19,7 +19,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { CellInput } from './components/cell-input';
 import { Feedback, type FeedbackState } from './components/feedback';
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { useRateCard, useSaveRateCard } from './use-rate-card';
 import { minorToText, money, parseAmount, parseNumber } from './work-format';
 
@@ -53,9 +53,9 @@ const CURRENCY_LABELS = Object.fromEntries(CURRENCIES.map((c) => [c, c])) as Rec
 /** The workshop's rate card: the hourly rate and, per task, the usual hours and parts. Saving makes a new version. */
 export function RateCardScreen() {
   return (
-    <RoleGate roles={['manager']} title="Rate card">
+    <AbilityGate ability="setRates" title="Rate card">
       <RateCardLoader />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 

@@ -1,6 +1,6 @@
 import { useQuery } from 'urql';
 
-import type { Role } from '@/modules/accounts/core/roles';
+import { can, type Role } from '@/modules/accounts/core/roles';
 
 export interface Assignee {
   id: number;
@@ -14,5 +14,7 @@ export const ASSIGNEES_QUERY = 'query Assignees { team { id name role active } }
 export function useAssignees(pause: boolean) {
   const [result] = useQuery<{ team: (Assignee & { active: boolean })[] }>({ query: ASSIGNEES_QUERY, pause, requestPolicy: 'cache-and-network' });
   const team = result.data?.team ?? null;
-  return team ? team.filter((m) => m.active && (m.role === 'technician' || m.role === 'manager')).sort((a, b) => (a.role === b.role ? a.name.localeCompare(b.name) : a.role === 'technician' ? -1 : 1)) : null;
+  // Those who work at the bench first, then those who also plan the work; by name within each.
+  const planner = (m: Assignee) => (can(m.role, 'planWork') ? 1 : 0);
+  return team ? team.filter((m) => m.active && can(m.role, 'workAtBench')).sort((a, b) => planner(a) - planner(b) || a.name.localeCompare(b.name)) : null;
 }

@@ -1,54 +1,31 @@
 import { useCallback } from 'react';
 import { useClient, useQuery } from 'urql';
 
+import type { MutationData } from '@/modules/accounts/ui/use-guarded-mutation';
+import type { AddPartMutation, AddWorkNoteMutation, CorrectTimeEntryMutation, LogTimeMutation, SetWorkItemDoneMutation, StartTimerMutation, StopTimerMutation, WorkItemDetailQuery, WorkItemDetailQueryVariables } from '@/modules/api/ui/graphql-types';
+
 import { SHOP_CONTEXT, useShopMutation } from './use-shop-mutation';
-import type { WorkItemView } from './use-work-queue';
 
-export interface TimeCorrectionView {
-  by: string;
-  byId: number;
-  at: string;
-  oldMinutes: number;
-  newMinutes: number;
-  why: string;
-}
+export const WORK_ITEM_QUERY = /* GraphQL */ `
+  query WorkItemDetail($itemId: Int!) {
+    workItemDetail(itemId: $itemId) {
+      id pianoId task title status doneReason priority dueOn assignedToId assignedTo because quantity estimatedHours estimatedCostMinor loggedMinutes partsMinor actualCostMinor timerRunningFor cautions { kind text }
+      currency
+      entries { id workItemId technicianId startedAt endedAt minutes note corrections { by byId at oldMinutes newMinutes why } }
+      parts { id workItemId description quantity costMinor loggedById createdAt }
+      notes { id workItemId authorId body createdAt }
+    }
+  }
+`;
 
-export interface TimeEntryView {
-  id: number;
-  technicianId: number;
-  startedAt: string;
-  endedAt: string | null;
-  minutes: number | null;
-  note: string | null;
-  /** every correction of the entry, oldest first */
-  corrections?: TimeCorrectionView[];
-}
-
-export interface PartView {
-  id: number;
-  description: string;
-  quantity: number;
-  costMinor: number;
-}
-
-export interface NoteView {
-  id: number;
-  authorId: number;
-  body: string;
-  createdAt: string;
-}
-
-export interface WorkItemDetail extends WorkItemView {
-  currency: string;
-  entries: TimeEntryView[];
-  parts: PartView[];
-  notes: NoteView[];
-}
-
-export const WORK_ITEM_QUERY = 'query WorkItemDetail($itemId: Int!) { workItemDetail(itemId: $itemId) }';
+export type WorkItemDetail = WorkItemDetailQuery['workItemDetail'];
+export type TimeEntryView = Pick<WorkItemDetail['entries'][number], 'id' | 'technicianId' | 'startedAt' | 'endedAt' | 'minutes' | 'note'> & Partial<Pick<WorkItemDetail['entries'][number], 'corrections'>>;
+export type TimeCorrectionView = WorkItemDetail['entries'][number]['corrections'][number];
+export type PartView = WorkItemDetail['parts'][number];
+export type NoteView = WorkItemDetail['notes'][number];
 
 export function useWorkItem(itemId: number | null) {
-  const [result] = useQuery<{ workItemDetail: WorkItemDetail }>({
+  const [result] = useQuery<WorkItemDetailQuery, WorkItemDetailQueryVariables>({
     query: WORK_ITEM_QUERY,
     variables: { itemId: itemId ?? 0 },
     pause: itemId == null,
@@ -75,23 +52,60 @@ export function entryMinutes(e: TimeEntryView, now: number): number {
 }
 
 export function useBenchCommands() {
-  const start = useShopMutation<TimeEntryView, { itemId: number }>('mutation StartTimer($itemId: Int!) { startTimer(itemId: $itemId) }', 'startTimer');
-  const stop = useShopMutation<TimeEntryView, { itemId: number }>('mutation StopTimer($itemId: Int!) { stopTimer(itemId: $itemId) }', 'stopTimer');
-  const logTime = useShopMutation<TimeEntryView, { e: { workItemId: number; minutes: number; note: string | null } }>(
-    'mutation LogTime($e: JSON!) { logTime(entry: $e) }',
+  const start = useShopMutation<MutationData<StartTimerMutation>, { itemId: number }>(
+    /* GraphQL */ `
+      mutation StartTimer($itemId: Int!) {
+        startTimer(itemId: $itemId) { id technicianId startedAt endedAt minutes note }
+      }
+    `,
+    'startTimer',
+  );
+  const stop = useShopMutation<MutationData<StopTimerMutation>, { itemId: number }>(
+    /* GraphQL */ `
+      mutation StopTimer($itemId: Int!) {
+        stopTimer(itemId: $itemId) { id technicianId startedAt endedAt minutes note }
+      }
+    `,
+    'stopTimer',
+  );
+  const logTime = useShopMutation<MutationData<LogTimeMutation>, { e: { workItemId: number; minutes: number; note: string | null } }>(
+    /* GraphQL */ `
+      mutation LogTime($e: TimeEntryInput!) {
+        logTime(entry: $e) { id technicianId startedAt endedAt minutes note }
+      }
+    `,
     'logTime',
   );
-  const addPart = useShopMutation<PartView, { p: { workItemId: number; description: string; quantity: number; costMinor: number } }>(
-    'mutation AddPart($p: JSON!) { addPart(part: $p) }',
+  const addPart = useShopMutation<MutationData<AddPartMutation>, { p: { workItemId: number; description: string; quantity: number; costMinor: number } }>(
+    /* GraphQL */ `
+      mutation AddPart($p: PartUseInput!) {
+        addPart(part: $p) { id description quantity costMinor }
+      }
+    `,
     'addPart',
   );
-  const addNote = useShopMutation<NoteView, { itemId: number; body: string }>('mutation AddWorkNote($itemId: Int!, $body: String!) { addWorkNote(itemId: $itemId, body: $body) }', 'addWorkNote');
-  const setDone = useShopMutation<WorkItemView, { itemId: number; done: boolean; reason?: string | null }>(
-    'mutation SetWorkItemDone($itemId: Int!, $done: Boolean!, $reason: String) { setWorkItemDone(itemId: $itemId, done: $done, reason: $reason) }',
+  const addNote = useShopMutation<MutationData<AddWorkNoteMutation>, { itemId: number; body: string }>(
+    /* GraphQL */ `
+      mutation AddWorkNote($itemId: Int!, $body: String!) {
+        addWorkNote(itemId: $itemId, body: $body) { id authorId body createdAt }
+      }
+    `,
+    'addWorkNote',
+  );
+  const setDone = useShopMutation<MutationData<SetWorkItemDoneMutation>, { itemId: number; done: boolean; reason?: string | null }>(
+    /* GraphQL */ `
+      mutation SetWorkItemDone($itemId: Int!, $done: Boolean!, $reason: String) {
+        setWorkItemDone(itemId: $itemId, done: $done, reason: $reason) { id status }
+      }
+    `,
     'setWorkItemDone',
   );
-  const correctTime = useShopMutation<TimeEntryView, { c: { timeEntryId: number; minutes: number; why: string } }>(
-    'mutation CorrectTimeEntry($c: JSON!) { correctTimeEntry(correction: $c) }',
+  const correctTime = useShopMutation<MutationData<CorrectTimeEntryMutation>, { c: { timeEntryId: number; minutes: number; why: string } }>(
+    /* GraphQL */ `
+      mutation CorrectTimeEntry($c: TimeCorrectionInput!) {
+        correctTimeEntry(correction: $c) { id technicianId startedAt endedAt minutes note }
+      }
+    `,
     'correctTimeEntry',
   );
   return { start, stop, logTime, addPart, addNote, setDone, correctTime };

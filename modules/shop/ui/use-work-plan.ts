@@ -1,37 +1,31 @@
 import { useCallback } from 'react';
 import { useQuery } from 'urql';
 
-import type { Grade } from '@/modules/assessment/core/grade';
+import type { MutationData } from '@/modules/accounts/ui/use-guarded-mutation';
+import { withFragments } from '@/modules/api/ui/document';
+import type { AddWorkItemMutation, DecidePianoMutation, SubmitRemeasurementMutation, UpdateWorkItemMutation, WorkPlanQuery, WorkPlanQueryVariables } from '@/modules/api/ui/graphql-types';
 import type { Measurements } from '@/modules/assessment/core/measurements';
+import { GRADE_PARTS } from '@/modules/assessment/ui/grade-fragment';
 import type { Decision } from '@/modules/shop/core/work-input';
 
 import { SHOP_CONTEXT, useShopMutation } from './use-shop-mutation';
-import type { WorkItemView } from './use-work-queue';
 
-export interface CostLine {
-  estimatedHours: number;
-  loggedHours: number;
-  estimatedCostMinor: number;
-  actualCostMinor: number;
-  varianceMinor: number;
-}
+export const WORK_PLAN_QUERY = /* GraphQL */ `
+  query WorkPlan($pianoId: Int!) {
+    workPlan(pianoId: $pianoId) {
+      planId pianoId currency hourlyRateMinor rateCardVersion approvedAt
+      items { id pianoId task title status doneReason priority dueOn assignedToId assignedTo because quantity estimatedHours estimatedCostMinor loggedMinutes partsMinor actualCostMinor timerRunningFor cautions { kind text } }
+      totals { estimatedHours loggedHours estimatedCostMinor actualCostMinor varianceMinor }
+      byTask { task estimatedHours loggedHours estimatedCostMinor actualCostMinor varianceMinor }
+    }
+  }
+`;
 
-export interface WorkPlanView {
-  planId: number;
-  pianoId: number;
-  currency: string;
-  hourlyRateMinor: number;
-  rateCardVersion: string;
-  approvedAt: string | null;
-  items: WorkItemView[];
-  totals: CostLine;
-  byTask: (CostLine & { task: string })[];
-}
-
-export const WORK_PLAN_QUERY = 'query WorkPlan($pianoId: Int!) { workPlan(pianoId: $pianoId) }';
+export type WorkPlanView = NonNullable<WorkPlanQuery['workPlan']>;
+export type CostLine = WorkPlanView['totals'];
 
 export function useWorkPlan(pianoId: number | null) {
-  const [result, reexecute] = useQuery<{ workPlan: WorkPlanView | null }>({
+  const [result, reexecute] = useQuery<WorkPlanQuery, WorkPlanQueryVariables>({
     query: WORK_PLAN_QUERY,
     variables: { pianoId: pianoId ?? 0 },
     pause: pianoId == null,
@@ -40,32 +34,6 @@ export function useWorkPlan(pianoId: number | null) {
   });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   return { plan: result.data?.workPlan ?? null, loaded: result.data !== undefined, fetching: result.fetching, error: result.error, refresh };
-}
-
-export interface AssessmentVersionView {
-  version: number;
-  kind: 'intake' | 'correction' | 'post_workshop' | string;
-  measurements: Measurements;
-  grade: Grade;
-  changeNote: string | null;
-  submittedBy: string;
-  submittedAt: string;
-}
-
-export const ASSESSMENT_HISTORY_QUERY = 'query AssessmentHistory($pianoId: Int!) { assessmentHistory(pianoId: $pianoId) }';
-
-/** Every assessment of a piano, oldest first; the last is the one in force. */
-export function useAssessmentHistory(pianoId: number | null) {
-  const [result, reexecute] = useQuery<{ assessmentHistory: AssessmentVersionView[] }>({
-    query: ASSESSMENT_HISTORY_QUERY,
-    variables: { pianoId: pianoId ?? 0 },
-    pause: pianoId == null,
-    context: SHOP_CONTEXT,
-    requestPolicy: 'cache-and-network',
-  });
-  const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
-  const list = result.data?.assessmentHistory ?? null;
-  return { history: list, latest: list?.length ? list[list.length - 1] : null, error: result.error, refresh };
 }
 
 export interface ItemInput {
@@ -82,16 +50,28 @@ export interface ItemInput {
 export type ItemPatch = Partial<Omit<ItemInput, 'task'>>;
 
 export function usePlanCommands() {
-  const decide = useShopMutation<{ stage: string; planId: number | null }, { pianoId: number; decision: Decision; why: string | null }>(
-    'mutation DecidePiano($pianoId: Int!, $decision: String!, $why: String) { decidePiano(pianoId: $pianoId, decision: $decision, why: $why) }',
+  const decide = useShopMutation<MutationData<DecidePianoMutation>, { pianoId: number; decision: Decision; why: string | null }>(
+    /* GraphQL */ `
+      mutation DecidePiano($pianoId: Int!, $decision: String!, $why: String) {
+        decidePiano(pianoId: $pianoId, decision: $decision, why: $why) { stage planId }
+      }
+    `,
     'decidePiano',
   );
-  const addItem = useShopMutation<WorkItemView, { pianoId: number; item: ItemInput }>(
-    'mutation AddWorkItem($pianoId: Int!, $item: JSON!) { addWorkItem(pianoId: $pianoId, item: $item) }',
+  const addItem = useShopMutation<MutationData<AddWorkItemMutation>, { pianoId: number; item: ItemInput }>(
+    /* GraphQL */ `
+      mutation AddWorkItem($pianoId: Int!, $item: WorkItemInput!) {
+        addWorkItem(pianoId: $pianoId, item: $item) { id status }
+      }
+    `,
     'addWorkItem',
   );
-  const updateItem = useShopMutation<WorkItemView, { itemId: number; p: ItemPatch }>(
-    'mutation UpdateWorkItem($itemId: Int!, $p: JSON!) { updateWorkItem(itemId: $itemId, patch: $p) }',
+  const updateItem = useShopMutation<MutationData<UpdateWorkItemMutation>, { itemId: number; p: ItemPatch }>(
+    /* GraphQL */ `
+      mutation UpdateWorkItem($itemId: Int!, $p: WorkItemPatch!) {
+        updateWorkItem(itemId: $itemId, patch: $p) { id status }
+      }
+    `,
     'updateWorkItem',
   );
   const removeItem = useShopMutation<boolean, { itemId: number }>('mutation RemoveWorkItem($itemId: Int!) { removeWorkItem(itemId: $itemId) }', 'removeWorkItem');
@@ -103,8 +83,15 @@ export function usePlanCommands() {
     'mutation FinishWorkshop($pianoId: Int!) { finishWorkshop(pianoId: $pianoId) { id stage } }',
     'finishWorkshop',
   );
-  const remeasure = useShopMutation<{ version: number; grade: Grade }, { i: { pianoId: number; measurements: Partial<Measurements>; changeNote: string | null } }>(
-    'mutation SubmitRemeasurement($i: JSON!) { submitRemeasurement(input: $i) }',
+  const remeasure = useShopMutation<MutationData<SubmitRemeasurementMutation>, { i: { pianoId: number; measurements: Partial<Measurements>; changeNote: string | null } }>(
+    withFragments(
+      /* GraphQL */ `
+        mutation SubmitRemeasurement($i: RemeasureInput!) {
+          submitRemeasurement(input: $i) { version grade { ...GradeParts } }
+        }
+      `,
+      GRADE_PARTS,
+    ),
     'submitRemeasurement',
   );
   return { decide, addItem, updateItem, removeItem, approve, finish, remeasure };

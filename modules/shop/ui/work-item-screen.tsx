@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
-import { STAGE_LABELS } from '@/modules/pianos/core/piano';
+import { pianoName, STAGE_LABELS } from '@/modules/pianos/core/piano';
 import { usePiano } from '@/modules/pianos/ui/use-piano';
 import { PALETTE, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -65,7 +65,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
   const [doneReason, setDoneReason] = useState('');
 
   const done = item.status === 'done';
-  const someoneElses = user?.role === 'technician' && item.assignedToId != null && item.assignedToId !== me;
+  const someoneElses = !!user && !can(user.role, 'workOnAnyItem') && item.assignedToId != null && item.assignedToId !== me;
   const blockedHard =
     piano && piano.stage !== 'in_workshop'
       ? `This piano is ${STAGE_LABELS[piano.stage].toLowerCase()}, not in the workshop: work is logged only while it is there.`
@@ -197,7 +197,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
       }
     >
       <CautionsNotice cautions={item.cautions} testID="item-cautions" />
-      <ItemSummary wide={wide} item={item} piano={piano ? `${piano.stockNumber} · ${[piano.maker, piano.model].filter(Boolean).join(' ')}` : stock} due={due} />
+      <ItemSummary wide={wide} item={item} piano={piano ? `${piano.stockNumber} · ${pianoName(piano)}` : stock} due={due} />
       {blockedHard ? <Notice tone="info">{blockedHard}</Notice> : null}
       {wide ? (
         <View style={styles.columns}>

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import type { Stage } from '@/modules/pianos/core/piano';
 import { makerAndModel } from '@/modules/pianos/ui/piano-format';
 import { usePianos } from '@/modules/pianos/ui/use-pianos';
@@ -16,21 +16,20 @@ import { StageBadge } from '@/modules/theme/ui/stage-badge';
 import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
-import { RoleGate } from './components/role-gate';
+import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { formatDate } from './work-format';
 
 /** The workshop at a glance: pianos waiting for a decision, pianos in the workshop, and the way to rates, overruns and climate. */
 export function WorkshopScreen() {
   return (
-    <RoleGate roles={['technician', 'manager']} title="Workshop">
+    <AbilityGate ability="workAtBench" title="Workshop">
       <Workshop />
-    </RoleGate>
+    </AbilityGate>
   );
 }
 
 function Workshop() {
-  const { user } = useSession();
-  const manager = user?.role === 'manager';
+  const can = useCan();
   return (
     <Screen
       title="Workshop"
@@ -39,15 +38,15 @@ function Workshop() {
       actions={
         <>
           <Button label="Bench" variant="secondary" href="/bench" />
-          {manager ? <Button label="Overruns" variant="secondary" href="/workshop/overruns" testID="workshop-overruns" /> : null}
-          {manager ? <Button label="Rate card" variant="secondary" href="/workshop/rates" testID="workshop-rates" /> : null}
-          {manager ? <Button label="Grading rules" variant="secondary" href="/workshop/grading" testID="workshop-grading" /> : null}
-          {manager ? <Button label="Disclosure texts" variant="secondary" href="/present/texts" testID="workshop-texts" /> : null}
+          {can('planWork') ? <Button label="Overruns" variant="secondary" href="/workshop/overruns" testID="workshop-overruns" /> : null}
+          {can('setRates') ? <Button label="Rate card" variant="secondary" href="/workshop/rates" testID="workshop-rates" /> : null}
+          {can('setGradeRules') ? <Button label="Grading rules" variant="secondary" href="/workshop/grading" testID="workshop-grading" /> : null}
+          {can('editShopTexts') ? <Button label="Disclosure texts" variant="secondary" href="/present/texts" testID="workshop-texts" /> : null}
           <Button label="Climate" variant="secondary" href="/workshop/climate" testID="workshop-climate" />
         </>
       }
     >
-      {manager ? (
+      {can('decidePianos') ? (
         <Section title="Waiting for a decision" description="Assessed pianos: recondition, sell as they stand, wholesale or decline. Longest waiting first.">
           <StageList stage="assessed" empty="No assessed piano is waiting." testID="workshop-assessed" />
         </Section>

@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
-import { useSession } from '@/modules/accounts/ui/use-session';
+import { useCan } from '@/modules/accounts/ui/use-can';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -15,13 +15,13 @@ import { formatHours, money } from './work-format';
  * cost so far) and the way to the piano's workshop page. Floor staff, who do not read plans, see nothing.
  */
 export function WorkshopSummary({ pianoId, testID = 'workshop-summary' }: { pianoId: number; testID?: string }) {
-  const { user } = useSession();
-  const pause = !user || user.role === 'floor';
+  const can = useCan();
+  const pause = !can('readWorkCosts');
   const { plan, loaded, error } = useWorkPlan(pause ? null : pianoId);
   if (pause || error || !loaded) return null;
-  const bench = user.role === 'technician' || user.role === 'manager';
+  const bench = can('workAtBench');
   if (!plan) {
-    if (user.role !== 'manager') return null;
+    if (!can('planWork')) return null;
     return (
       <Card testID={testID}>
         <Heading level={3}>Workshop</Heading>

@@ -1,4 +1,4 @@
-import { User } from '@/modules/accounts/server/user-model';
+import { StaffMember } from '@/modules/accounts/server/staff-member-model';
 import { BaseModel } from '@/server/db/base-model';
 
 export class ToneRecording extends BaseModel {
@@ -16,11 +16,11 @@ export class ToneRecording extends BaseModel {
   durationS!: number;
   recordedById!: number;
   recordedAt!: string | Date;
-  recordedBy?: User;
+  recordedBy?: StaffMember;
   notes?: ToneNoteRow[];
 
   static relationMappings = () => ({
-    recordedBy: { relation: BaseModel.BelongsToOneRelation, modelClass: User, join: { from: 'tone_recordings.recorded_by_id', to: 'users.id' } },
+    recordedBy: { relation: BaseModel.BelongsToOneRelation, modelClass: StaffMember, join: { from: 'tone_recordings.recorded_by_id', to: 'staff_members.id' } },
     notes: { relation: BaseModel.HasManyRelation, modelClass: ToneNoteRow, join: { from: 'tone_recordings.id', to: 'tone_notes.recording_id' } },
   });
 }

@@ -1,6 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 
-import { AREAS, AREA_LABELS, READINESS_MARKS, READINESS_WORDS, provisionalRule, worstMark, type Area, type Finding, type Grade } from '@/modules/assessment/core/grade';
+import { AREAS, AREA_LABELS, READINESS_MARKS, READINESS_WORDS, provisionalRule, worstMark, type Area, type Finding, type GradeView } from '@/modules/assessment/core/grade';
 import { WORK_TASK_LABELS, type WorkItem } from '@/modules/assessment/core/work-tasks';
 import { conditionReport, type AreaReport, type ConditionReport } from '@/modules/shop/core/condition-report';
 import { formatMoney } from '@/modules/shop/core/money';
@@ -19,12 +19,12 @@ export function describeWork(w: WorkItem): string {
 }
 
 /** The report over the rate card when there is one; hours from the grade alone until it loads. */
-function reportOf(grade: Grade, card: RateCard | null): ConditionReport | null {
+function reportOf(grade: GradeView, card: RateCard | null): ConditionReport | null {
   return card ? conditionReport(grade, card) : null;
 }
 
 /** The readiness verdict: one of four, with its mark, whether it is provisional, and why. */
-export function ReadinessVerdict({ grade, report, testID = 'readiness' }: { grade: Grade; report: ConditionReport | null; testID?: string }) {
+export function ReadinessVerdict({ grade, report, testID = 'readiness' }: { grade: GradeView; report: ConditionReport | null; testID?: string }) {
   const mark = READINESS_MARKS[grade.readiness];
   const look = MARK_LOOKS[mark];
   const reasons = report?.reasons ?? [];
@@ -56,7 +56,7 @@ export function ReadinessVerdict({ grade, report, testID = 'readiness' }: { grad
 }
 
 // Without the rate card the hours still show: each task's own hours where the finding sizes it.
-function estimateHoursOnly(grade: Grade): number {
+function estimateHoursOnly(grade: GradeView): number {
   return grade.findings.flatMap((f) => f.work.filter((w) => !w.alternativeTo)).reduce((s, w) => s + (w.hours ?? 0), 0);
 }
 
@@ -112,7 +112,7 @@ function AreaWork({ area, report, currency }: { area: AreaReport; report: Condit
 }
 
 interface ConditionSummaryProps {
-  grade: Grade;
+  grade: GradeView;
   /** the shop's rate card: the work in money; hours alone while it loads */
   card: RateCard | null;
   /** the areas the user is measuring now: listed first and marked */

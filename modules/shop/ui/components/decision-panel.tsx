@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { AREAS, READINESS_WORDS, type Grade } from '@/modules/assessment/core/grade';
+import { AREAS, READINESS_WORDS, type GradeView } from '@/modules/assessment/core/grade';
 import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import type { RateCard } from '@/modules/shop/core/rate-card';
 import { DECISIONS, SELL_AS_IS_REASON_MIN, type Decision } from '@/modules/shop/core/work-input';
@@ -31,7 +31,7 @@ const DECISION_HINTS: Record<Decision, string> = {
 };
 
 interface DecisionPanelProps {
-  grade: Grade | null;
+  grade: GradeView | null;
   card: RateCard | null;
   busy: boolean;
   onDecide: (decision: Decision, why: string | null) => Promise<FeedbackState>;

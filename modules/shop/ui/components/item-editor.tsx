@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
+import { can, ROLE_LABELS } from '@/modules/accounts/core/roles';
 import { WORK_TASKS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { toMinor, type Currency } from '@/modules/shop/core/money';
 import type { RateCard } from '@/modules/shop/core/rate-card';
@@ -73,7 +74,7 @@ export function ItemEditor({ item, currency, hourlyRateMinor, assignees, card, b
   const people = assignees ?? [];
   // Someone assigned earlier who is no longer active still shows, so the choice is not silently lost.
   const assigneeOptions = [UNASSIGNED, ...people.map((p) => String(p.id)), ...(item?.assignedToId != null && !people.some((p) => p.id === item.assignedToId) ? [String(item.assignedToId)] : [])];
-  const assigneeLabels: Record<string, string> = { [UNASSIGNED]: 'Unassigned', ...Object.fromEntries(people.map((p) => [String(p.id), p.role === 'manager' ? `${p.name} (manager)` : p.name])) };
+  const assigneeLabels: Record<string, string> = { [UNASSIGNED]: 'Unassigned', ...Object.fromEntries(people.map((p) => [String(p.id), can(p.role, 'planWork') ? `${p.name} (${ROLE_LABELS[p.role].toLowerCase()})` : p.name])) };
   if (item?.assignedToId != null && !assigneeLabels[String(item.assignedToId)]) assigneeLabels[String(item.assignedToId)] = item.assignedTo ?? `User ${item.assignedToId}`;
 
   const pickTask = (task: TaskChoice) => {

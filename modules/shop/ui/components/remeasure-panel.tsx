@@ -1,7 +1,7 @@
 import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { READINESS_WORDS, gradeAssessment, type Area, type Grade } from '@/modules/assessment/core/grade';
+import { READINESS_WORDS, gradeAssessment, type Area, type GradeView } from '@/modules/assessment/core/grade';
 import type { GradeRules } from '@/modules/assessment/core/grade-rules';
 import { FELT_LEFT, FELT_STATES, TUNING_PINS, measurementsInput, type Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, type WorkTask } from '@/modules/assessment/core/work-tasks';
@@ -56,10 +56,10 @@ const YES_NO_LABELS: Record<(typeof YES_NO)[number], string> = { yes: 'Yes', no:
 
 interface RemeasurePanelProps {
   tasks: readonly string[];
-  latest: { version: number; measurements: Measurements; grade: Grade } | null;
+  latest: { version: number; measurements: Measurements; grade: GradeView } | null;
   rules: GradeRules;
   busy: boolean;
-  onSubmit: (measurements: Partial<Measurements>, changeNote: string | null) => Promise<{ ok: true; version: number; grade: Grade } | { ok: false; message: string }>;
+  onSubmit: (measurements: Partial<Measurements>, changeNote: string | null) => Promise<{ ok: true; version: number; grade: GradeView } | { ok: false; message: string }>;
 }
 
 const shown = (v: unknown, unit: string) => (v == null ? 'not measured' : `${v}${unit === 'strings' ? '' : ` ${unit}`}`);
@@ -76,7 +76,7 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
   const { card } = useRateCard();
   const [note, setNote] = useState('');
   const [feedback, setFeedback] = useState<FeedbackState>(null);
-  const [result, setResult] = useState<{ version: number; grade: Grade } | null>(null);
+  const [result, setResult] = useState<{ version: number; grade: GradeView } | null>(null);
 
   const filled: Partial<Measurements> = {};
   const typeErrors: Record<string, string> = {};

@@ -1,4 +1,4 @@
-import { can, isRole, ROLES } from '@/modules/accounts/core/roles';
+import { ABILITIES, can, isRole, ROLES, rolesThatCan } from '@/modules/accounts/core/roles';
 
 describe('roles', () => {
   it('has the four staff roles', () => expect(ROLES).toEqual(['intake', 'technician', 'floor', 'manager']));
@@ -20,7 +20,22 @@ describe('roles', () => {
     ['technician', 'correctAnyTime', false],
     ['manager', 'correctAnyTime', true],
     ['floor', 'correctOwnTime', false],
+    ['floor', 'readWorkCosts', false],
+    ['intake', 'readWorkCosts', true],
+    ['intake', 'workAtBench', false],
+    ['technician', 'workOnAnyItem', false],
+    ['floor', 'showToBuyers', true],
+    ['technician', 'showToBuyers', false],
+    ['floor', 'manageDeposits', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
+  it('gives a manager every ability, and no other role one no role has', () => {
+    expect(ABILITIES.filter((a) => !can('manager', a))).toEqual([]);
+    expect(new Set(ABILITIES).size).toBe(ABILITIES.length);
+  });
+  it('names the roles that can do a thing', () => {
+    expect(rolesThatCan('sellPianos')).toEqual(['floor', 'manager']);
+    expect(rolesThatCan('workAtBench')).toEqual(['technician', 'manager']);
+  });
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);
     expect(isRole('floor')).toBe(true);
