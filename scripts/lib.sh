@@ -77,7 +77,8 @@ start_postgres() {
   fi
   if ! as_pg "$bin/pg_ctl" -D "$dir/db" status >/dev/null 2>&1; then
     log "starting PostgreSQL on 127.0.0.1:$port"
-    as_pg "$bin/pg_ctl" -D "$dir/db" -l "$dir/server.log" -w -t 60 start >/dev/null
+    # The port is given at each start too: a cluster made for one port is reused for another.
+    as_pg "$bin/pg_ctl" -D "$dir/db" -l "$dir/server.log" -o "-p $port" -w -t 60 start >/dev/null
   fi
   PG_CTL_STOP=("$bin/pg_ctl" -D "$dir/db" -m fast -w stop)
 }
