@@ -27,13 +27,19 @@ export type Ability =
   | 'tendBackgroundWork'
   // Correct a time entry one logged oneself, or one anyone logged.
   | 'correctOwnTime'
-  | 'correctAnyTime';
+  | 'correctAnyTime'
+  // The dealer's address, contact, locale and time zone on the papers, and the workshop's idle rule.
+  | 'editShopProfile'
+  // Set a piano's asking price.
+  | 'setPrices'
+  // See the pianos sitting in the workshop with no work planned.
+  | 'seeIdleWorkshop';
 
 const ABILITIES: Record<Role, readonly Ability[]> = {
   intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'recordTone', 'readToneResults'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure', 'recordTone', 'readToneResults', 'correctOwnTime'],
   floor: ['readPianos', 'recordTone', 'readToneResults'],
-  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime'],
+  manager: ['manageUsers', 'readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'setGradeRules', 'remeasure', 'recordTone', 'readToneResults', 'readDemoInbox', 'tendBackgroundWork', 'correctOwnTime', 'correctAnyTime', 'editShopProfile', 'setPrices', 'seeIdleWorkshop'],
 };
 
 export function can(role: Role, ability: Ability): boolean {

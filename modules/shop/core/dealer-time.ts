@@ -48,24 +48,26 @@ const instant = (iso: string): Date | null => {
 };
 
 const LONG_DAY: Intl.DateTimeFormatOptions = { day: 'numeric', month: 'long', year: 'numeric' };
+// Some ICU versions put a narrow no-break space before "PM": a plain space reads the same and every font has it.
+const plainSpaces = (text: string) => text.replace(/[\u202f\u00a0]/g, ' ');
 
 /** The day an instant falls on in the shop, written out: "3 December 2026" (en-GB), "December 3, 2026" (en-US). */
 export function formatDay(iso: string, where: DealerLocality): string {
   const d = instant(iso);
-  return d ? formatter(where, LONG_DAY).format(d) : '';
+  return d ? plainSpaces(formatter(where, LONG_DAY).format(d)) : '';
 }
 
 /** Day and time in the shop, with the zone's short name: "3 December 2026 at 14:05 CET". */
 export function formatDayTime(iso: string, where: DealerLocality): string {
   const d = instant(iso);
-  return d ? formatter(where, { ...LONG_DAY, hour: 'numeric', minute: '2-digit', timeZoneName: 'short' }).format(d) : '';
+  return d ? plainSpaces(formatter(where, { ...LONG_DAY, hour: 'numeric', minute: '2-digit', timeZoneName: 'short' }).format(d)) : '';
 }
 
 /** A calendar day kept as YYYY-MM-DD (an inspection's day) in the shop's words; it is that day wherever it is read. */
 export function formatCalendarDay(day: string, locale: string): string {
   const m = /^(\d{4})-(\d{2})-(\d{2})/.exec(day);
   if (!m) return '';
-  return formatter({ locale, timeZone: 'UTC' }, LONG_DAY).format(new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3]))));
+  return plainSpaces(formatter({ locale, timeZone: 'UTC' }, LONG_DAY).format(new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])))));
 }
 
 /** The YYYY-MM-DD an instant falls on in a time zone (an intake at 23:30 UTC is the next day in Berlin). */

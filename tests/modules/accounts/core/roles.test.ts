@@ -20,6 +20,13 @@ describe('roles', () => {
     ['technician', 'correctAnyTime', false],
     ['manager', 'correctAnyTime', true],
     ['floor', 'correctOwnTime', false],
+    ['manager', 'editShopProfile', true],
+    ['floor', 'editShopProfile', false],
+    ['manager', 'setPrices', true],
+    ['floor', 'setPrices', false],
+    ['intake', 'setPrices', false],
+    ['manager', 'seeIdleWorkshop', true],
+    ['technician', 'seeIdleWorkshop', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('rejects what is not a role', () => {
     expect(isRole('owner')).toBe(false);
