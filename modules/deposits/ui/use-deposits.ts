@@ -33,9 +33,12 @@ const DEPOSITS_QUERY = 'query Deposits($pianoId: Int!) { deposits(pianoId: $pian
 const RULES_QUERY = 'query DepositRules { depositRules }';
 const STAGE_QUERY = 'query PianoStage($id: Int) { piano(idEq: $id) { id stockNumber stage askingPriceMinor priceCurrency } }';
 
+// The balance is worked out from the piano's price (JSON, so untraced by the cache): a price change asks again.
+const DEPOSITS_CONTEXT = { additionalTypenames: ['Pianos'] };
+
 /** A piano's deposits, the balance due and the rules; asked again every `everyMs` so a hold paid online shows up. */
 export function usePianoDeposits(pianoId: number, everyMs = 10_000) {
-  const [result, reexecute] = useQuery<{ deposits: PianoDeposits }>({ query: DEPOSITS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<{ deposits: PianoDeposits }>({ query: DEPOSITS_QUERY, variables: { pianoId }, context: DEPOSITS_CONTEXT, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   useEffect(() => {
     if (!everyMs) return;

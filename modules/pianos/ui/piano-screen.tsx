@@ -6,6 +6,8 @@ import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { AssessmentHistory, IntakeFacts, LatestAssessment } from '@/modules/assessment/ui/components/assessment-record';
 import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { AskingPriceForm } from '@/modules/disclosure/ui/components/asking-price-form';
+import { money } from '@/modules/disclosure/ui/disclosure-format';
 import { CASE_CONDITION_LABELS } from '@/modules/assessment/ui/measure-labels';
 import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
 import { useIntakeRecord } from '@/modules/assessment/ui/use-intake-record';
@@ -29,8 +31,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { formatDay, formatDayTime, formatKindAndSize, formatYear, makerAndModel } from './piano-format';
 import { takePianoFlash } from './piano-flash';
-import { usePiano } from './use-piano';
-import type { PianoRecord } from './use-pianos';
+import { usePiano, type PianoPage } from './use-piano';
 
 /** One piano's page: what it is, its condition and photos, where it came from, and every change to its assessment. */
 export function PianoScreen({ id }: { id: number | null }) {
@@ -81,7 +82,7 @@ export function PianoScreen({ id }: { id: number | null }) {
   );
 }
 
-function PianoRecordParts({ piano }: { piano: PianoRecord }) {
+function PianoRecordParts({ piano }: { piano: PianoPage }) {
   const wide = useWide();
   const { user } = useSession();
   const { history, error: historyError } = useAssessmentHistory(piano.id);
@@ -129,6 +130,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
   const workshop = <WorkshopSummary pianoId={piano.id} />;
   const sale = onFloorSide ? (
     <Section title="Deposit and sale">
+      <PriceCard piano={piano} mayPrice={!!user && can(user.role, 'setPrices')} />
       <DepositsPanel pianoId={piano.id} />
     </Section>
   ) : null;
@@ -218,11 +220,26 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
   );
 }
 
+/** The asking price, and for a manager the form to set it: saved here, it shows at once on every panel of this piano. */
+function PriceCard({ piano, mayPrice }: { piano: PianoPage; mayPrice: boolean }) {
+  return (
+    <Card testID="piano-price-card">
+      <Body variant="label" tone="secondary">
+        Asking price
+      </Body>
+      <Body variant="title" testID="piano-price">
+        {piano.askingPriceMinor != null && piano.priceCurrency ? money(piano.askingPriceMinor, piano.priceCurrency) : 'No asking price yet'}
+      </Body>
+      {mayPrice ? <AskingPriceForm pianoId={piano.id} priceMinor={piano.askingPriceMinor} currency={piano.priceCurrency} testID="piano-price-form" /> : null}
+    </Card>
+  );
+}
+
 function Column({ children }: { children: ReactNode }) {
   return <View style={styles.column}>{children}</View>;
 }
 
-function PianoSummary({ piano }: { piano: PianoRecord }) {
+function PianoSummary({ piano }: { piano: PianoPage }) {
   return (
     <View style={styles.summary}>
       <Body variant="subheading" testID="piano-title">

@@ -3,11 +3,16 @@ import { useQuery } from 'urql';
 import { PIANO_FIELDS, type PianoRecord } from './use-pianos';
 
 export const PIANO_QUERY = `query Piano($id: Int) {
-  piano(idEq: $id) { ${PIANO_FIELDS} }
+  piano(idEq: $id) { ${PIANO_FIELDS} askingPriceMinor priceCurrency }
 }`;
 
+export interface PianoPage extends PianoRecord {
+  askingPriceMinor: number | null;
+  priceCurrency: string | null;
+}
+
 export function usePiano(id: number | null) {
-  const [result] = useQuery<{ piano: PianoRecord | null }>({
+  const [result] = useQuery<{ piano: PianoPage | null }>({
     query: PIANO_QUERY,
     variables: { id },
     pause: id == null,

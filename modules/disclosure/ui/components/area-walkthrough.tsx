@@ -29,7 +29,7 @@ interface AreaWalkthroughProps {
 /** One area at a time in large type, with big previous and next controls: a tablet handed to a buyer. */
 export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }: AreaWalkthroughProps) {
   const c = disclosure.content;
-  const shown = useMemo(() => shownDocument(c), [c]);
+  const shown = useMemo(() => shownDocument(c, disclosure.dealer), [c, disclosure.dealer]);
   const steps = walkSteps(disclosure);
   const at = Math.min(Math.max(step, 0), steps.length - 1);
   const { open, viewer } = usePhotoViewer(c.photos);

@@ -25,11 +25,12 @@ interface AskingPriceFormProps {
   pianoId: number;
   priceMinor: number | null;
   currency: string | null;
-  onSaved: () => void;
+  onSaved?: () => void;
+  testID?: string;
 }
 
 /** A manager sets the asking price in major units; it is stored in minor units (ISO 4217). */
-export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved }: AskingPriceFormProps) {
+export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved, testID = 'present-price-form' }: AskingPriceFormProps) {
   const start: Currency = currency && isCurrency(currency) ? currency : 'USD';
   const [cur, setCur] = useState<Currency>(start);
   const [text, setText] = useState(priceMinor != null ? (priceMinor / 10 ** CURRENCY_DIGITS[start]).toFixed(CURRENCY_DIGITS[start]) : '');
@@ -52,11 +53,11 @@ export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved }: Aski
       return;
     }
     setFeedback({ tone: 'success', text: `Asking price set to ${money(minor, cur)}. Publish the disclosure again so buyers see it.` });
-    onSaved();
+    onSaved?.();
   };
 
   return (
-    <View style={styles.form} testID="present-price-form">
+    <View style={styles.form} testID={testID}>
       <ChoiceGroup label="Currency" options={CURRENCIES} labels={CURRENCY_LABELS} value={cur} onChange={setCur} testID="price-currency" />
       <TextField label="Asking price" unit={cur} value={text} onChangeText={setText} error={error} inputMode="decimal" keyboardType="decimal-pad" onSubmitEditing={submit} testID="price-amount" />
       <View style={styles.buttons}>
