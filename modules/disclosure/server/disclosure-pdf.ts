@@ -89,9 +89,11 @@ function drawMark(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, x: nu
 /** One line led by a mark and its word; work not done by an open box. */
 function markedLine(doc: PDFKit.PDFDocument, mark: AreaMark | 'done' | null, text: string, openBox = false): void {
   const x = doc.page.margins.left + 8;
+  const word = markWord(mark);
+  // The mark and its line go on one page: room for the whole line first.
+  keepRoom(doc, doc.font('body').heightOfString(`${word ? `${word}: ` : ''}${text}`, { width: doc.page.width - doc.page.margins.right - x - 14 }) + 2);
   if (openBox) doc.save().lineWidth(1).rect(x + 0.5, doc.y + 3.5, 7, 7).stroke(PALETTE.walnut).restore();
   else drawMark(doc, mark, x, doc.y + 3);
-  const word = markWord(mark);
   doc.fillColor(INK);
   if (word) doc.font('bold').text(`${word}: `, x + 14, doc.y, { continued: true }).font('body').text(text);
   else doc.text(text, x + 14, doc.y);
@@ -155,6 +157,8 @@ function areasV2(doc: PDFKit.PDFDocument, c: DisclosureContent, locale: string):
     keepRoom(doc, 70);
     doc.moveDown(0.8).font('bold').fontSize(13).fillColor(INK).text(`${area.label}: `, { continued: true }).text(area.condition).font('body').fontSize(11);
     for (const section of areaSections(area, c, day)) {
+      // A section's title keeps its first line with it.
+      keepRoom(doc, 36);
       doc.moveDown(0.3).font('bold').fontSize(10).fillColor(QUIET).text(section.title.toUpperCase(), { characterSpacing: 0.4 }).font('body').fontSize(11);
       for (const item of section.items) markedLine(doc, item.mark, item.text, section.kind === 'not_done');
     }

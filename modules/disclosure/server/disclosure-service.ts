@@ -30,11 +30,11 @@ import { systemClock, type Clock } from '@/server/clock';
 import { AppError, notAllowed, notFound } from '@/server/errors';
 
 import { contentDigest } from './digest';
-
-export type { AcknowledgementAnswer };
 import { paperView } from './disclosure-paper';
 import { floorTagPdf, signedCopyPdf, type SignedCopyMeta } from './disclosure-pdf';
 import { Acknowledgement, Disclosure, DisclosureLink, ShopSetting } from './disclosure-models';
+
+export type { AcknowledgementAnswer };
 
 const template = (name: string, options?: Parameters<typeof Handlebars.compile>[1]) => Handlebars.compile(fs.readFileSync(path.join(__dirname, 'templates', name), 'utf8'), options);
 const DISCLOSURE_HTML = template('disclosure.hbs');

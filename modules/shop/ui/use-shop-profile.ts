@@ -23,3 +23,21 @@ export function useSaveShopProfile() {
     'Still saving the shop details: wait a moment.',
   );
 }
+
+export interface IdlePiano {
+  pianoId: number;
+  stockNumber: string;
+  maker: string;
+  model: string | null;
+  inWorkshopSince: string;
+  days: number;
+}
+
+/** Pianos in the workshop past the shop's idle days with no work items (managers). */
+export function useIdleInWorkshop() {
+  const [result] = useQuery<{ idleInWorkshop: { idleDays: number; pianos: IdlePiano[] } }>({
+    query: 'query IdleInWorkshop { idleInWorkshop { idleDays pianos { pianoId stockNumber maker model inWorkshopSince days } } }',
+    requestPolicy: 'cache-and-network',
+  });
+  return { idle: result.data?.idleInWorkshop ?? null, error: result.error };
+}

@@ -77,7 +77,8 @@ export async function settle(page: Page, inFlight: () => number = () => 0): Prom
     await page.waitForTimeout(50);
   }
   await page
-    .waitForFunction(() => !document.querySelector('[role="progressbar"]') && !!document.querySelector('#root *'), undefined, { timeout: 10_000 })
+    // Drawn means a screen's title is up: a screen caught mid-redirect has none yet (axe still reports one that never comes).
+    .waitForFunction(() => !document.querySelector('[role="progressbar"]') && !!document.querySelector('#root h1, #root [role="heading"][aria-level="1"]'), undefined, { timeout: 10_000 })
     .catch(() => undefined);
 }
 

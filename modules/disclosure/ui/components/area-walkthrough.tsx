@@ -205,18 +205,20 @@ function StepButton({ direction, label, onPress, testID }: { direction: 'prev' |
   const narrow = useWindowDimensions().width < 600;
   const disabled = label == null;
   const next = direction === 'next';
+  // The spoken name starts with the word shown, so what is heard matches what is read (WCAG 2.5.3).
+  const word = next ? 'Next' : narrow ? 'Back' : 'Previous';
   return (
     <Pressable
       role="button"
       aria-disabled={disabled || undefined}
       disabled={disabled}
       onPress={onPress}
-      accessibilityLabel={disabled ? (next ? 'Next: this is the last part' : 'Previous: this is the first part') : `${next ? 'Next' : 'Previous'}: ${label}`}
+      accessibilityLabel={disabled ? `${word}: this is the ${next ? 'last' : 'first'} part` : `${word}: ${label}`}
       testID={testID}
       style={({ pressed }) => [styles.stepButton, narrow && styles.stepButtonNarrow, next ? styles.stepNext : styles.stepPrev, pressed && !disabled && (next ? styles.stepNextPressed : styles.stepPrevPressed), disabled && styles.stepDisabled]}
     >
       <Text numberOfLines={1} style={[TYPE_SCALE.subheading, { color: next ? PALETTE.vellum : PALETTE.felt }]}>
-        {next ? 'Next  →' : narrow ? '←  Back' : '←  Previous'}
+        {word}
       </Text>
       {label ? (
         <Text numberOfLines={1} style={[TYPE_SCALE.small, { color: next ? PALETTE.feltLichen : PALETTE.walnut }]}>
