@@ -49,3 +49,13 @@ export function contactLines(p: Pick<ShopProfile, 'address' | 'phone' | 'email' 
   const reach = [p.phone && `Telephone ${p.phone}`, p.email && `E-mail ${p.email}`, p.website].filter(Boolean) as string[];
   return [...address, ...reach];
 }
+
+/** A piano in the workshop past the shop's idle days with no work items. */
+export interface IdlePiano {
+  pianoId: number;
+  stockNumber: string;
+  maker: string;
+  model: string | null;
+  inWorkshopSince: string;
+  days: number;
+}

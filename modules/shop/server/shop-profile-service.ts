@@ -5,7 +5,7 @@ import type { Actor } from '@/modules/accounts/server/user-service';
 import { ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import type { DealerLocality } from '@/modules/shop/core/dealer-time';
-import { DEFAULT_SHOP_PROFILE, shopProfileInput, type ShopProfile } from '@/modules/shop/core/shop-profile';
+import { DEFAULT_SHOP_PROFILE, shopProfileInput, type IdlePiano, type ShopProfile } from '@/modules/shop/core/shop-profile';
 import { notAllowed } from '@/server/errors';
 
 import { WorkItem } from './shop-models';
@@ -37,14 +37,6 @@ export async function setShopProfile(actor: Actor, raw: unknown): Promise<ShopPr
   return profile;
 }
 
-export interface IdlePiano {
-  pianoId: number;
-  stockNumber: string;
-  maker: string;
-  model: string | null;
-  inWorkshopSince: string;
-  days: number;
-}
 
 /** The most a manager's list of idle pianos shows at once (GraphQL `maxRows`). */
 export const MAX_IDLE_LISTED = 50;

@@ -2,7 +2,7 @@ import { useCallback } from 'react';
 import { useQuery } from 'urql';
 
 import { useGuardedMutation } from '@/modules/accounts/ui/use-guarded-mutation';
-import type { ShopProfile } from '@/modules/shop/core/shop-profile';
+import type { IdlePiano, ShopProfile } from '@/modules/shop/core/shop-profile';
 
 const PROFILE_FIELDS = 'address phone email website locale timeZone workshopIdleDays';
 export const SHOP_PROFILE_QUERY = `query ShopProfile { shopProfile { ${PROFILE_FIELDS} } }`;
@@ -24,14 +24,6 @@ export function useSaveShopProfile() {
   );
 }
 
-export interface IdlePiano {
-  pianoId: number;
-  stockNumber: string;
-  maker: string;
-  model: string | null;
-  inWorkshopSince: string;
-  days: number;
-}
 
 /** Pianos in the workshop past the shop's idle days with no work items (managers). */
 export function useIdleInWorkshop() {
