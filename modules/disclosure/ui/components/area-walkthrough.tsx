@@ -205,7 +205,7 @@ function StepButton({ direction, label, onPress, testID }: { direction: 'prev' |
   const narrow = useWindowDimensions().width < 600;
   const disabled = label == null;
   const next = direction === 'next';
-  // The spoken name starts with the word shown, so what is heard matches what is read (WCAG 2.5.3).
+  // Named by what it shows (the word and the part), so what is heard matches what is read (WCAG 2.5.3).
   const word = next ? 'Next' : narrow ? 'Back' : 'Previous';
   return (
     <Pressable
@@ -213,7 +213,7 @@ function StepButton({ direction, label, onPress, testID }: { direction: 'prev' |
       aria-disabled={disabled || undefined}
       disabled={disabled}
       onPress={onPress}
-      accessibilityLabel={disabled ? `${word}: this is the ${next ? 'last' : 'first'} part` : `${word}: ${label}`}
+      accessibilityLabel={disabled ? `${word}: this is the ${next ? 'last' : 'first'} part` : undefined}
       testID={testID}
       style={({ pressed }) => [styles.stepButton, narrow && styles.stepButtonNarrow, next ? styles.stepNext : styles.stepPrev, pressed && !disabled && (next ? styles.stepNextPressed : styles.stepPrevPressed), disabled && styles.stepDisabled]}
     >
