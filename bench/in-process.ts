@@ -8,6 +8,8 @@ import { ExtractJwt, Strategy as JwtStrategy } from 'passport-jwt';
 
 import type { DisclosureContent } from '@/modules/disclosure/core/disclosure';
 import { floorTagPdf, signedCopyPdf } from '@/modules/disclosure/server/disclosure-pdf';
+import { verificationCode } from '@/modules/disclosure/core/verification';
+import { depositTerms } from '@/modules/deposits/core/deposit-terms';
 import { configurePassport, signToken } from '@/server/auth';
 
 import { median, round } from './numbers';
@@ -24,7 +26,21 @@ export async function measurePdfs(url: string, samples = 25): Promise<{ disclosu
   }
   const c = row.content;
   const signed = () =>
-    signedCopyPdf(c, { version: row.version, digest: row.digest, price: 'USD 4,500.00', buyerName: 'Wren Halvorsen', buyerEmail: 'buyer@example.test', acknowledgedAt: '2026-12-01T10:00:00.000Z', countersignedBy: 'Fern Adeyemi-Holt', countersignedAt: '2026-12-01T10:05:00.000Z' });
+    signedCopyPdf(c, {
+      version: row.version,
+      digest: row.digest,
+      code: verificationCode(row.digest),
+      checkUrl: 'http://127.0.0.1:8148/check',
+      price: 'USD 4,500.00',
+      dealer: { name: c.dealerName, contact: ['1 Bench Row, Millbrook', 'Telephone +1 555 0100'] },
+      where: { locale: 'en-GB', timeZone: 'UTC' },
+      buyerName: 'Wren Halvorsen',
+      buyerEmail: 'buyer@example.test',
+      acknowledgedAt: '2026-12-01T10:00:00.000Z',
+      countersignedBy: 'Fern Adeyemi-Holt',
+      countersignedAt: '2026-12-01T10:05:00.000Z',
+      deposit: { kind: 'terms', amount: 'USD 450.00', holdDays: 14, terms: depositTerms({ amountMinor: 45000, currency: 'USD', holdDays: 14, basis: null }, c.dealerName) },
+    });
   const tag = () => floorTagPdf({ stockNumber: c.piano.stockNumber, title: `${c.piano.maker} ${c.piano.model ?? ''}`.trim(), price: 'USD 4,500.00', url: `http://127.0.0.1:8148/d/${row.token}`, dealerName: c.dealerName });
   for (let i = 0; i < 3; i += 1) {
     await signed();

@@ -8,7 +8,7 @@ import { defaultRules } from '@/modules/assessment/core/grade-rules';
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { buildDisclosure, DEFAULT_WARRANTY } from '@/modules/disclosure/core/disclosure';
 import { contentDigest } from '@/modules/disclosure/server/digest';
-import { renderDisclosureHtml } from '@/modules/disclosure/server/disclosure-service';
+import { renderDisclosureHtml, type PageDealer } from '@/modules/disclosure/server/disclosure-service';
 import { depositAmount, defaultDepositRules } from '@/modules/deposits/core/deposit';
 import type { PianoKind, Stage } from '@/modules/pianos/core/piano';
 import { readClimate } from '@/modules/shop/core/climate';
@@ -16,6 +16,9 @@ import { estimateReconditioning } from '@/modules/shop/core/estimate';
 import type { Currency } from '@/modules/shop/core/money';
 import { demoRateCard } from '@/modules/shop/core/rate-card';
 import { DEMO_USERS } from '@/seeds/demo';
+
+// The bench's invented dealer as its published pages name it.
+const BENCH_DEALER: PageDealer = { where: { locale: 'en-GB', timeZone: 'UTC' }, contact: ['1 Bench Row, Millbrook'], checkUrl: 'http://127.0.0.1:8148/check' };
 
 const DAY = 86_400_000;
 const HOUR = 3_600_000;
@@ -428,12 +431,14 @@ export async function seedBench(knex: Knex, opts: { pianos: number; seed?: numbe
         after: { measurements: after, grade: regrade, submittedAt: iso(finishedAt - HOUR), remeasured: Object.keys(after) as (keyof Measurements)[] },
         workDone,
         soldAsItStands: false,
+        timeZone: 'UTC',
+        tone: null,
         photos: [],
         texts,
       });
       digest = contentDigest(content);
       disclosureId = id('disclosures');
-      const html = renderDisclosureHtml(content, v, digest, iso(publishedAt));
+      const html = renderDisclosureHtml(content, v, digest, iso(publishedAt), BENCH_DEALER);
       rows.disclosures.push({ id: disclosureId, piano_id: pianoId, version: v, content, html, digest, published_by_id: r.pick(staff.floor), published_at: iso(publishedAt) });
     }
     if (!SOLD.includes(stage)) continue;

@@ -52,7 +52,7 @@ export interface AppDeps {
 /** What the domains' services need, shared by the request handlers and the background jobs. */
 export function serviceDeps(deps: AppDeps): { disclosure: DisclosureDeps; deposits: DepositDeps; pricing: PricingDeps } {
   return {
-    disclosure: { photos: deps.photos, publicUrl: deps.publicUrl },
+    disclosure: { photos: deps.photos, publicUrl: deps.publicUrl, clock: deps.clock ?? systemClock },
     pricing: { clock: deps.clock ?? systemClock },
     deposits: { ...deps.payments, publicUrl: deps.publicUrl, clock: deps.clock ?? systemClock },
   };

@@ -4,6 +4,8 @@ import type passport from 'passport';
 import type { User } from '@/modules/accounts/server/user-model';
 import {
   acknowledge,
+  checkCode,
+  checkedVersionHtml,
   floorTag,
   publicDisclosure,
   publicDisclosureHtml,
@@ -41,7 +43,16 @@ export function publicRouter(deps: DisclosureDeps, writeLimit: Middleware): Rout
     res.type('html').send(await publicDisclosureHtml(req.params.token, optionalIntQuery(req.query.version, 'version')));
   });
   router.post('/disclosures/:token/acknowledge', writeLimit, jsonBody('4kb'), async (req, res) => {
-    res.status(201).json(await acknowledge(req.params.token, req.body));
+    const answer = await acknowledge(req.params.token, req.body);
+    // 200 with the first one when this buyer had acknowledged this version already.
+    res.status(answer.already ? 200 : 201).json(answer);
+  });
+  // Anyone holding a paper checks its code; counted like the anonymous writes, so codes cannot be tried in bulk.
+  router.get('/check/:code', writeLimit, async (req, res) => {
+    res.json(await checkCode(req.params.code));
+  });
+  router.get('/check/:code/html', writeLimit, async (req, res) => {
+    res.type('html').send(await checkedVersionHtml(req.params.code, idParam(req.query.id)));
   });
   router.get('/receipts/:token.pdf', async (req, res) => {
     const { pdf, filename } = await signedPdfByReceipt(deps, req.params.token);

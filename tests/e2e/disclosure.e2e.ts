@@ -2,6 +2,8 @@
 // acknowledges it on their phone, floor staff countersign, and the signed copy reaches the inbox.
 import type { BrowserContext } from 'playwright-core';
 
+import { verificationCode } from '@/modules/disclosure/core/verification';
+
 import { gql, login, TABLET, waitForMail } from './support/api';
 import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
 
@@ -52,15 +54,19 @@ it('walks a buyer through the disclosure on the tablet, takes their acknowledgem
   // All the way to the warranty and notices; Next then stops.
   while (await tablet.getByTestId('present-next').isEnabled()) await tablet.getByTestId('present-next').click();
   expect(await tablet.getByTestId('present-step-title').textContent()).toBe('Warranty and notices');
-  await tablet.getByText('not legal advice', { exact: false }).first().waitFor();
+  // The warranty as the buyer reads it: no advice meant for the dealer.
+  await tablet.getByTestId('present-step-title').waitFor();
+  expect(await tablet.getByText(/template|legal advice/i).count()).toBe(0);
 
   // The buyer opens the link on their phone: no sign-in, the full fingerprint, then acknowledges.
   const phone = await buyer.context.newPage();
   await phone.setViewportSize(PHONE);
   await phone.goto(`${baseUrl()}/d/${disclosures.token}`);
-  await phone.getByTestId('disclosure-digest').waitFor();
+  await phone.getByTestId('disclosure-code').waitFor();
   expect(new URL(phone.url()).pathname).toBe(`/d/${disclosures.token}`);
-  expect((await phone.getByTestId('disclosure-digest').textContent())?.trim()).toBe(newest.digest);
+  // The short code in its place at the end, never the digest in the buyer's reading.
+  expect((await phone.getByTestId('disclosure-code').textContent())?.trim()).toBe(verificationCode(newest.digest));
+  expect(await phone.getByText(newest.digest).count()).toBe(0);
   expect(await phone.getByTestId('disclosure-title').textContent()).toBeTruthy();
   await shot(phone, 'disc-e2e-buyer-top');
   const email = `e2e-buyer-${Date.now()}@buyers.test`;
@@ -77,6 +83,25 @@ it('walks a buyer through the disclosure on the tablet, takes their acknowledgem
   await shot(phone, 'disc-e2e-buyer-acknowledged');
   // A reload remembers the acknowledgement on this phone.
   await phone.reload();
+  await phone.getByTestId('ack-done').waitFor();
+
+  // Anyone holding the paper checks its code on the public check page, typed by hand in lower case.
+  const code = verificationCode(newest.digest);
+  await phone.goto(`${baseUrl()}/check`);
+  await phone.getByTestId('check-submit').click();
+  await phone.getByText('Type the 12 letters and digits', { exact: false }).waitFor();
+  await phone.getByTestId('check-code').fill(code.toLowerCase().replace(/-/g, ' '));
+  await phone.getByTestId('check-submit').click();
+  await phone.getByTestId('check-found').waitFor();
+  expect(await phone.getByTestId('check-version-line').first().textContent()).toContain(`Version ${newest.version} of the condition disclosure`);
+  for (const size of [PHONE, TABLET, { width: 1280, height: 800 }]) {
+    await phone.setViewportSize(size);
+    await phone.goto(`${baseUrl()}/check/${code}`);
+    await phone.getByTestId('check-found').waitFor();
+    await shot(phone, `disc-e2e-check-${size.width}`);
+  }
+  await phone.setViewportSize(PHONE);
+  await phone.goto(`${baseUrl()}/d/${disclosures.token}`);
   await phone.getByTestId('ack-done').waitFor();
 
   // Floor staff see it on the tablet and countersign.

@@ -1,6 +1,7 @@
 // The library's own entry file runs a self-test when loaded directly; its parser module does not.
 import pdfParse from 'pdf-parse/lib/pdf-parse.js';
 
+import { verificationCode } from '@/modules/disclosure/core/verification';
 import { sha256Hex } from '@/modules/disclosure/server/digest';
 
 import { postGql, startTestApi, type TestApi } from '../support/api';
@@ -47,7 +48,7 @@ describe('a published disclosure', () => {
     expect(token).toMatch(/^[A-Za-z0-9_-]{32}$/);
   });
 
-  it('reads publicly with the piano, the price, the findings and the digest of its content', async () => {
+  it('reads publicly with the piano, the price, the findings and the verification code of its content', async () => {
     const res = await api.http.get(`/api/public/disclosures/${token}`);
     expect(res.status).toBe(200);
     expect(res.body.version).toBe(1);
@@ -56,7 +57,10 @@ describe('a published disclosure', () => {
     const areas = res.body.content.areas.map((a: Json) => a.area);
     expect(areas).toEqual(expect.arrayContaining(['soundboard', 'hammers', 'keys', 'tuning', 'play', 'case']));
     const html = await api.http.get(`/api/public/disclosures/${token}/html`);
-    expect(html.text).toContain(res.body.digest);
+    // The printable page carries the short code, never the digest itself.
+    expect(res.body.verificationCode).toBe(verificationCode(res.body.digest));
+    expect(html.text).toContain(res.body.verificationCode);
+    expect(html.text).not.toContain(res.body.digest);
     expect(html.text).toContain('USD 3,495.00');
   });
 
@@ -129,12 +133,17 @@ describe('a published disclosure', () => {
     const mail = api.mail.messages[0];
     expect(mail.to).toEqual(['ada@example.test']);
     expect(mail.subject).toContain(stockNumber);
-    expect(mail.text).toContain(current.digest);
+    expect(mail.text).toContain(verificationCode(current.digest));
+    expect(mail.text).not.toContain(current.digest);
+    // Dates as the dealer writes them, never an ISO timestamp.
+    expect(mail.text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
     expect(mail.attachments).toHaveLength(1);
     expect(mail.attachments[0].contentType).toBe('application/pdf');
     const text = await pdfText(mail.attachments[0].content);
     expect(text).toContain(stockNumber);
-    expect(text.replace(/\s+/g, '')).toContain(current.digest);
+    expect(text).toContain(verificationCode(current.digest));
+    expect(text.replace(/\s+/g, '')).not.toContain(current.digest);
+    expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}T/);
     expect(text).toContain('Ada Brightwell');
     expect(text).toContain('Fern Adeyemi-Holt');
     expect(text).toContain(`version ${current.version}`);

@@ -42,6 +42,8 @@ export const ABILITIES = [
   'workOnAnyItem',
   /** Plan the work: add, change and drop items, assign them, the whole bench, the overruns. */
   'planWork',
+  /** See the pianos sitting in the workshop with no work planned. */
+  'seeIdleWorkshop',
   'setRates',
   /** Correct a time entry one logged oneself, or one anyone logged. */
   'correctOwnTime',
@@ -50,6 +52,8 @@ export const ABILITIES = [
   /** Publish a disclosure, hand it to a buyer, countersign acknowledgements, print floor tags and signed copies. */
   'showToBuyers',
   'editShopTexts',
+  /** The dealer's address, contact, locale and time zone on the papers, and the workshop's idle rule. */
+  'editShopProfile',
   // pricing
   /** A trade-in offer with its lines, and the seller's answer to it (accepted, a counter-offer, agreed, declined). */
   'readOffers',

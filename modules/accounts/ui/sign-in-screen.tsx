@@ -35,7 +35,7 @@ export function SignInScreen() {
   return (
     <ScrollView style={styles.page} contentContainerStyle={[styles.content, wide && styles.contentWide]}>
       <View style={[styles.columns, wide && styles.columnsWide]}>
-        <View style={[styles.intro, wide && styles.introWide]}>
+        <View role="banner" style={[styles.intro, wide && styles.introWide]}>
           <View style={styles.brand}>
             <BrandMark size={36} />
             <Text style={[TYPE_SCALE.display, styles.brandText]}>Feltwire</Text>

@@ -17,6 +17,7 @@ export const NAV_ITEMS: Record<Role, readonly NavItem[]> = {
   manager: [
     { label: 'Stock', href: '/stock', hint: 'Counts, the stock table, charts' },
     { label: 'Workshop', href: '/workshop', hint: 'Plans, overruns, rates' },
+    { label: 'Deposits', href: '/present/rules', hint: 'Deposit rules and holds' },
     { label: 'Team', href: '/team', hint: 'Accounts and roles' },
     PIANOS,
   ],

@@ -567,7 +567,7 @@ export type PianoQueryVariables = Exact<{
 }>;
 
 
-export type PianoQuery = { piano: { id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string } | null };
+export type PianoQuery = { piano: { askingPriceMinor: number | null, priceCurrency: string | null, id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string } | null };
 
 export type PianoRecordFragment = { id: number, stockNumber: string, maker: string, model: string | null, serialNumber: string | null, year: number | null, yearIsEstimate: boolean, yearFrom: number | null, yearTo: number | null, kind: PianosKind, sizeCm: number | null, finish: string | null, caseCondition: PianosCaseCondition | null, caseNotes: string | null, stage: PianosStage, stageChangedAt: string, createdAt: string, updatedAt: string };
 

@@ -1,4 +1,4 @@
-import { cents } from '@/modules/tone/core/pitch';
+import { cents, centsOffset, FROM_STANDARD } from '@/modules/tone/core/pitch';
 
 import { defaultRules, type GradeRules } from './grade-rules';
 import { MEASURES, type Crack, type Measurements } from './measurements';
@@ -270,7 +270,7 @@ function gradeTuning(m: Measurements, r: GradeRules): { findings: Finding[]; cen
   let c: number | null = null;
   if (m.a4Hz != null) {
     c = cents(m.a4Hz);
-    const where = `A4 measured at ${fmt(m.a4Hz, 1)} Hz, ${fmt(Math.abs(c), 0)} cents ${c < 0 ? 'below' : 'above'} standard pitch (440 Hz)`;
+    const where = `A4 measured at ${fmt(m.a4Hz, 1)} Hz, ${centsOffset(c, FROM_STANDARD)} (440 Hz)`;
     // Compared at 0.01-cent resolution, far finer than any measurement, so limits hold exactly.
     const at = Math.round(c * 100) / 100;
     const pitch = (mark: Mark, text: string, work: WorkItem[] = []) => finding('tuning', 'tuning.pitch', mark, text, ['a4Hz'], work);

@@ -162,14 +162,14 @@ function GradeRulesEditor({ rules, onSaved }: { rules: GradeRules; onSaved: () =
       <Heading level={2}>Preview</Heading>
       <Body tone="secondary">{SAMPLE_WORDS}</Body>
       <InForceLine grade={inForce} preview={preview} card={card} />
-      {preview ? <ConditionSummary grade={preview} card={card} testID="grading-preview-condition" /> : <Notice tone="info">Fill in every value with a number to see the preview.</Notice>}
+      {preview ? <ConditionSummary grade={preview} card={card} testID="grading-preview-condition" areaLevel={2} /> : <Notice tone="info">Fill in every value with a number to see the preview.</Notice>}
     </Card>
   );
 
   const fields = RULE_GROUPS.map((g) => (
     <Card key={g.title} role="group" accessibilityLabel={g.title} testID={`grading-group-${g.title.toLowerCase().replace(/\s+/g, '-')}`}>
       <View style={styles.groupHead}>
-        <Heading level={3}>{g.title}</Heading>
+        <Heading level={2}>{g.title}</Heading>
         <Body variant="small" tone="secondary">
           {g.description}
         </Body>

@@ -5,7 +5,7 @@ import type Stripe from 'stripe';
 import { can, rolesThatCan } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
-import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
+import { balanceDue, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
 import { Acknowledgement, ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { disclosureByToken } from '@/modules/disclosure/server/disclosure-service';
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
@@ -14,11 +14,17 @@ import type { JobRun } from '@/modules/jobs/server/worker';
 import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { movePiano } from '@/modules/pianos/server/stage-service';
+import { verificationCode } from '@/modules/disclosure/core/verification';
+import { formatDayTime, type DealerLocality } from '@/modules/shop/core/dealer-time';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
+import { shopLocality } from '@/modules/shop/server/shop-profile-service';
 import type { Clock } from '@/server/clock';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
 import { Deposit, PaymentEvent } from './deposit-models';
+import { depositRules, publicDepositTerms } from './deposit-rules';
+
+export { depositRules, publicDepositTerms } from './deposit-rules';
 
 export interface DepositDeps {
   stripe: Stripe;
@@ -35,23 +41,11 @@ const EXPIRY_GRACE_MS = 5_000;
 const money = (minor: number, currency: string) => formatMoney(minor, currency as Currency);
 const expiryKey = (depositId: number) => `expire-hold:${depositId}`;
 
-export async function depositRules(trx?: Knex.Transaction): Promise<DepositRules> {
-  const row = await ShopSetting.query(trx).findById('depositRules');
-  return { ...defaultDepositRules, ...((row?.value as Partial<DepositRules>) ?? {}) };
-}
-
 export async function setDepositRules(actor: Actor, raw: unknown): Promise<DepositRules> {
   if (!can(actor.role, 'manageDeposits')) throw notAllowed('change the deposit rules');
   const rules = depositRulesInput.parse(raw);
   await ShopSetting.query().insert({ key: 'depositRules', value: rules, updatedById: actor.id }).onConflict('key').merge();
   return rules;
-}
-
-/** The deposit a buyer would pay on a disclosed price, under the shop's current rules. */
-export async function publicDepositTerms(price: { minor: number; currency: string }): Promise<{ amountMinor: number; currency: Currency; holdDays: number }> {
-  const rules = await depositRules();
-  const currency = price.currency as Currency;
-  return { amountMinor: depositAmount(price.minor, currency, rules), currency, holdDays: rules.holdDays };
 }
 
 /** The buyer's open checkout for this piano and version, started from this acknowledgement or by the same e-mail. */
@@ -93,7 +87,8 @@ export async function startDeposit(deps: DepositDeps, token: string, raw: unknow
       customer_email: ack.buyerEmail,
       line_items: [{ quantity: 1, price_data: { currency: currency.toLowerCase(), unit_amount: amountMinor, product_data: { name: `Deposit to hold ${piano.stockNumber}, ${pianoName(piano)}` } } }],
       success_url: `${deps.publicUrl}/d/${token}/deposit?session={CHECKOUT_SESSION_ID}`,
-      cancel_url: `${deps.publicUrl}/d/${token}`,
+      // Back on the disclosure, which says plainly that nothing was paid (a declined card ends here too).
+      cancel_url: `${deps.publicUrl}/d/${token}?checkout=cancelled`,
       metadata: { pianoId: String(piano.id), stockNumber: piano.stockNumber, disclosureVersion: String(newest.version), disclosureDigest: newest.digest, acknowledgementId: String(ack.id) },
     },
     { idempotencyKey: `deposit-checkout-ack-${ack.id}-${tries + 1}` },
@@ -121,16 +116,16 @@ async function staffEmails(trx: Knex.Transaction): Promise<string[]> {
   return (await User.query(trx).whereIn('role', rolesThatCan('sellPianos')).where('active', true)).map((u) => u.email);
 }
 
-function receiptMail(deposit: Deposit, piano: Piano, rules: DepositRules): QueuedMail {
+function receiptMail(deposit: Deposit, piano: Piano, rules: DepositRules, where: DealerLocality): QueuedMail {
   const b = balanceDue(piano.askingPriceMinor!, deposit.amountMinor, deposit.currency as Currency, rules);
-  const until = deposit.holdExpiresAt!.slice(0, 10);
+  const until = formatDayTime(deposit.holdExpiresAt!, where);
   return {
     to: deposit.buyerEmail,
     subject: `Receipt: deposit to hold ${piano.stockNumber}`,
     text:
       `Dear ${deposit.buyerName},\n\nWe received your deposit of ${money(deposit.amountMinor, deposit.currency)} for the ${pianoName(piano)} (stock number ${piano.stockNumber}). ` +
       `The piano is held for you until ${until}.\n\nPrice ${money(b.priceMinor, b.currency)}\nSales tax (${b.salesTaxPct} %) ${money(b.taxMinor, b.currency)}\nDeposit paid -${money(b.depositMinor, b.currency)}\nBalance due at sale ${money(b.balanceMinor, b.currency)}\n\n` +
-      `Your deposit refers to version ${deposit.disclosureDigest.slice(0, 12)}… of the condition disclosure you acknowledged. The deposit terms are the dealer's template, adapted to local law.\n`,
+      `Your deposit refers to the condition disclosure you acknowledged, verification code ${verificationCode(deposit.disclosureDigest)}.\n`,
   };
 }
 
@@ -170,16 +165,17 @@ async function onCompleted(deps: DepositDeps, trx: Knex.Transaction, session: St
     return;
   }
   const rules = await depositRules(trx);
+  const where = await shopLocality(trx);
   const held = await deposit.$query(trx).patchAndFetch({ ...paid, status: 'holding', holdExpiresAt: new Date(now.getTime() + rules.holdDays * DAY).toISOString() });
   const moved = await movePiano({ pianoId: piano.id, action: 'hold', by: 'system', userId: null, why: `Deposit ${money(held.amountMinor, held.currency)} paid by ${held.buyerName}` }, trx);
   await enqueue(trx, 'expire-hold', { depositId: held.id }, { jobKey: expiryKey(held.id), runAt: held.holdExpiresAt! });
-  await enqueue(trx, 'send-email', receiptMail(held, moved, rules));
+  await enqueue(trx, 'send-email', receiptMail(held, moved, rules, where));
   const staff = await staffEmails(trx);
   if (staff.length) {
     await enqueue(trx, 'send-email', {
       to: staff.join(', '),
       subject: `Held: ${moved.stockNumber} for ${held.buyerName}`,
-      text: `${moved.stockNumber} (${pianoName(moved)}) is held for ${held.buyerName} <${held.buyerEmail}> until ${held.holdExpiresAt!.slice(0, 10)}: deposit ${money(held.amountMinor, held.currency)} paid online. Take its floor tag down or mark it held.\n`,
+      text: `${moved.stockNumber} (${pianoName(moved)}) is held for ${held.buyerName} <${held.buyerEmail}> until ${formatDayTime(held.holdExpiresAt!, where)}: deposit ${money(held.amountMinor, held.currency)} paid online. Take its floor tag down or mark it held.\n`,
     });
   }
 }
@@ -284,7 +280,7 @@ export async function expireHoldJob(deps: DepositDeps, depositId: number): Promi
     }
     await movePiano({ pianoId: d.pianoId, action: 'release_hold', by: 'system', userId: null, why: 'The hold expired' }, trx);
     const expired = await d.$query(trx).patchAndFetch({ status: 'expired', closedAt: now.toISOString(), closeReason: 'The hold expired.' });
-    const text = `The hold for ${expired.buyerName} ended on ${expired.holdExpiresAt!.slice(0, 10)}; the piano is back on the floor. The deposit of ${money(expired.amountMinor, expired.currency)} awaits the dealer's decision under its terms.\n`;
+    const text = `The hold for ${expired.buyerName} ended on ${formatDayTime(expired.holdExpiresAt!, await shopLocality(trx))}; the piano is back on the floor. The deposit of ${money(expired.amountMinor, expired.currency)} awaits the dealer's decision under its terms.\n`;
     await enqueue(trx, 'send-email', { to: expired.buyerEmail, subject: 'A piano hold has expired', text });
     const staff = await staffEmails(trx);
     if (staff.length) await enqueue(trx, 'send-email', { to: staff.join(', '), subject: 'A piano hold has expired', text });
@@ -337,5 +333,6 @@ export async function publicDepositStatus(token: string, sessionId: string) {
   if (!deposit) throw new AppError('NOT_FOUND', 'Not found.');
   const piano = (await Piano.query().findById(link.pianoId))!;
   const balance = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, deposit.amountMinor, deposit.currency as Currency, await depositRules()) : null;
-  return { status: deposit.status, amountMinor: deposit.amountMinor, currency: deposit.currency, holdExpiresAt: deposit.holdExpiresAt, buyerName: deposit.buyerName, stockNumber: piano.stockNumber, balance };
+  // The page writes the hold's end in the shop's time zone.
+  return { status: deposit.status, amountMinor: deposit.amountMinor, currency: deposit.currency, holdExpiresAt: deposit.holdExpiresAt, buyerName: deposit.buyerName, stockNumber: piano.stockNumber, balance, dealer: await shopLocality() };
 }

@@ -3,7 +3,7 @@ import { ActivityIndicator, StyleSheet, View } from 'react-native';
 
 import { writeCheckout } from '@/modules/disclosure/ui/buyer-memory';
 import { BuyerFrame } from '@/modules/disclosure/ui/components/buyer-frame';
-import { longDay, money, pianoTitle } from '@/modules/disclosure/ui/disclosure-format';
+import { dayAndTime, money, pianoTitle } from '@/modules/disclosure/ui/disclosure-format';
 import { usePublicDisclosure } from '@/modules/disclosure/ui/use-public-disclosure';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -89,7 +89,7 @@ function Outcome({ status: s, dealer, piano }: { status: PublicDepositStatus; de
               Deposit received: {amount}
             </Body>
             <Body variant="title" style={styles.heldText}>
-              Held for you until {longDay(s.holdExpiresAt)}
+              Held for you until {dayAndTime(s.holdExpiresAt, s.dealer)}
             </Body>
             <Body style={styles.heldText}>{`${shop} has taken ${what} off the floor for you.`}</Body>
           </View>
@@ -147,7 +147,7 @@ function Outcome({ status: s, dealer, piano }: { status: PublicDepositStatus; de
         <View style={styles.block} testID={`deposit-${s.status}`}>
           <Heading level={1}>The hold has ended</Heading>
           <Body>
-            {s.status === 'expired' ? `The hold on ${what} ended on ${longDay(s.holdExpiresAt)}` : `${shop} released the hold on ${what}`}. What happens to your deposit of {amount} follows the terms you agreed to; {dealer ?? 'the dealer'} will be in touch, or ask them.
+            {s.status === 'expired' ? `The hold on ${what} ended on ${dayAndTime(s.holdExpiresAt, s.dealer)}` : `${shop} released the hold on ${what}`}. What happens to your deposit of {amount} follows the terms you agreed to; {dealer ?? 'the dealer'} will be in touch, or ask them.
           </Body>
         </View>
       );

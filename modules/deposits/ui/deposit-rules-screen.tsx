@@ -7,6 +7,8 @@ import { Card } from '@/modules/theme/ui/card';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Screen } from '@/modules/theme/ui/screen';
 
+import { DEALER_TEMPLATE_ADVICE } from '@/modules/disclosure/core/disclosure';
+
 import { DepositRulesForm } from './deposit-rules-form';
 import { useDepositRules } from './use-deposits';
 
@@ -27,6 +29,9 @@ export function DepositRulesScreen() {
   }
   return (
     <Screen title="Deposit rules" eyebrow="Deposits" width="form" headingTestID="rules-heading" actions={<Button label="Back" variant="secondary" onPress={back} testID="rules-back" />}>
+      <Notice tone="caution" title="Templates, not legal advice" testID="rules-legal">
+        {`The deposit terms buyers read follow from these rules. ${DEALER_TEMPLATE_ADVICE} This advice is for you: buyers never see it.`}
+      </Notice>
       {rules ? (
         <Card>
           <DepositRulesForm rules={rules} />

@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useCan } from '@/modules/accounts/ui/use-can';
 import { balanceDue, type Balance } from '@/modules/deposits/core/deposit';
-import { dayAndTime, isCurrency, longDay, money } from '@/modules/disclosure/ui/disclosure-format';
+import { dayAndTime, isCurrency, longDay, money, deviceLocality } from '@/modules/disclosure/ui/disclosure-format';
 import { PALETTE, RADIUS, SPACE, STAGE_TONES } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
@@ -16,6 +16,9 @@ import { TextField } from '@/modules/theme/ui/text-field';
 import { BalanceTable } from './components/balance-table';
 import { usePianoDeposits, usePianoStage, useRecordDelivery, useRecordSale, useRefundDeposit, useReleaseHold, type DepositRow } from './use-deposits';
 
+// Staff read times in their own device's zone: the shop's own tablets and desks.
+const STAFF_TIME = deviceLocality();
+
 type Feedback = { tone: 'success' | 'error'; text: string } | null;
 
 /** How a deposit stands, in the floor's words. */
@@ -23,15 +26,15 @@ export function depositStatusText(d: DepositRow): string {
   const amount = money(d.amountMinor, d.currency);
   switch (d.status) {
     case 'pending':
-      return `${amount}: checkout started ${dayAndTime(d.createdAt)}, not paid`;
+      return `${amount}: checkout started ${dayAndTime(d.createdAt, STAFF_TIME)}, not paid`;
     case 'holding':
-      return `${amount}: holding the piano until ${longDay(d.holdExpiresAt)}`;
+      return `${amount}: holding the piano until ${longDay(d.holdExpiresAt, STAFF_TIME)}`;
     case 'applied':
       return `${amount}: applied to the sale`;
     case 'released':
       return d.refundId ? `${amount}: hold released, refunded ${money(d.refundedMinor, d.currency)}` : `${amount}: hold released, deposit kept`;
     case 'expired':
-      return d.refundId ? `${amount}: hold expired, refunded` : `${amount}: hold expired ${longDay(d.holdExpiresAt)}; the refund awaits a manager`;
+      return d.refundId ? `${amount}: hold expired, refunded` : `${amount}: hold expired ${longDay(d.holdExpiresAt, STAFF_TIME)}; the refund awaits a manager`;
     case 'refunding':
       return `${amount}: refund asked of the payment provider, not yet made`;
     case 'refunded':
@@ -190,10 +193,10 @@ function HoldCard({ deposit, manager, onChanged }: { deposit: DepositRow; manage
   return (
     <View style={styles.hold} testID="deposits-holding">
       <Body variant="subheading">
-        Held for {deposit.buyerName} until {longDay(deposit.holdExpiresAt)}
+        Held for {deposit.buyerName} until {longDay(deposit.holdExpiresAt, STAFF_TIME)}
       </Body>
       <Body variant="small" tone="secondary" selectable>
-        {money(deposit.amountMinor, deposit.currency)} paid online {dayAndTime(deposit.paidAt)} · {deposit.buyerEmail}
+        {money(deposit.amountMinor, deposit.currency)} paid online {dayAndTime(deposit.paidAt, STAFF_TIME)} · {deposit.buyerEmail}
       </Body>
       {manager ? (
         <View style={styles.releaseBox}>

@@ -12,6 +12,8 @@ export interface PublicDepositStatus {
   buyerName: string;
   stockNumber: string;
   balance: Balance | null;
+  /** the shop's locale and time zone, for the hold's end */
+  dealer: { locale: string; timeZone: string };
 }
 
 export type StartOutcome = { ok: true; url: string; amountMinor: number; currency: string } | { ok: false; message: string };
@@ -48,6 +50,6 @@ export async function fetchDepositStatus(token: string, sessionId: string): Prom
   if (response.status === 404) return { state: 'missing' };
   if (!response.ok) return { state: 'error', message: await errorMessage(response, 'The payment could not be looked up') };
   const data = (await response.json().catch(() => null)) as PublicDepositStatus | null;
-  if (!data?.status) return { state: 'error', message: 'The server sent an answer this page does not understand.' };
+  if (!data?.status || !data.dealer) return { state: 'error', message: 'The server sent an answer this page does not understand.' };
   return { state: 'ok', data };
 }

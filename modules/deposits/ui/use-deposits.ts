@@ -34,9 +34,12 @@ const STAGE_QUERY = 'query PianoStage($id: Int) { piano(idEq: $id) { id stockNum
 export type PianoDeposits = DepositsQuery['deposits'];
 export type DepositRow = PianoDeposits['deposits'][number];
 
+// The balance is worked out from the piano's price: a price change asks again.
+const DEPOSITS_CONTEXT = { additionalTypenames: ['Pianos'] };
+
 /** A piano's deposits, the balance due and the rules; asked again every `everyMs` so a hold paid online shows up. */
 export function usePianoDeposits(pianoId: number, everyMs = 10_000) {
-  const [result, reexecute] = useQuery<DepositsQuery, DepositsQueryVariables>({ query: DEPOSITS_QUERY, variables: { pianoId }, requestPolicy: 'cache-and-network' });
+  const [result, reexecute] = useQuery<DepositsQuery, DepositsQueryVariables>({ query: DEPOSITS_QUERY, variables: { pianoId }, context: DEPOSITS_CONTEXT, requestPolicy: 'cache-and-network' });
   const refresh = useCallback(() => reexecute({ requestPolicy: 'network-only' }), [reexecute]);
   useEffect(() => {
     if (!everyMs) return;

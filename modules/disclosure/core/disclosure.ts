@@ -20,7 +20,10 @@ import {
 import type { Measurements } from '@/modules/assessment/core/measurements';
 import { WORK_TASK_AREAS, WORK_TASK_LABELS, type WorkTask } from '@/modules/assessment/core/work-tasks';
 import { describeSize, describeYear, type CaseCondition, type PianoFacts, type PianoKind } from '@/modules/pianos/core/piano';
-import { cents } from '@/modules/tone/core/pitch';
+import { calendarDayIn } from '@/modules/shop/core/dealer-time';
+import { buyerCaption } from '@/modules/shop/core/work-caption';
+import type { DisclosureTone } from '@/modules/tone/core/keyboard-report';
+import { cents, centsOffset, FROM_STANDARD, roundCents } from '@/modules/tone/core/pitch';
 
 // What a buyer reads: built only from public facts, so nothing internal can leak into it.
 export const DISCLOSURE_AREAS = [...AREAS, 'case'] as const;
@@ -55,6 +58,10 @@ export interface DisclosureInput {
   soldAsItStands: boolean;
   photos: { id: number; area: string; caption: string | null }[];
   texts: { dealerName: string; warranty: string };
+  /** the shop's time zone: the days on the disclosure are the shop's days */
+  timeZone: string;
+  /** the piano's newest play-test recording, as a disclosure shows it */
+  tone: { recordedAt: string; tone: DisclosureTone } | null;
 }
 
 export interface DisclosureFinding {
@@ -91,6 +98,12 @@ export interface DisclosurePitch {
   when: 'intake' | 'after_work' | 'before_work';
 }
 
+/** The play test measured from a recording: the day, the pitch, and cents per key for the chart. */
+export interface DisclosureToneContent extends DisclosureTone {
+  /** recorded after the work; before it, in an area worked on since; or at intake */
+  when: 'intake' | 'after_work' | 'before_work';
+}
+
 /** The buyer's disclosure, format 2: found at intake, work done and measured after the work kept apart. */
 export interface DisclosureContent {
   format: 2;
@@ -107,6 +120,8 @@ export interface DisclosureContent {
   /** work done that belongs to no one area */
   otherWorkDone: string[];
   pitch: DisclosurePitch | null;
+  /** from the newest play-test recording; absent in versions published before recordings were disclosed */
+  tone?: DisclosureToneContent | null;
   areas: DisclosureAreaContent[];
   photos: { id: number; area: string; caption: string | null }[];
   warranty: string;
@@ -148,10 +163,6 @@ const NOTICES = [
     title: 'Your own inspection',
     text: 'You may have this instrument inspected by an independent piano technician of your choice before you buy it.',
   },
-  {
-    title: 'About this document',
-    text: 'This disclosure and its warranty text are the dealer’s template, adapted to local consumer-protection and sales law; it is not legal advice.',
-  },
 ];
 
 const given = (v: unknown) => v != null && !(Array.isArray(v) && v.length === 0);
@@ -159,7 +170,6 @@ const given = (v: unknown) => v != null && !(Array.isArray(v) && v.length === 0)
 const givenFields = (f: Finding, m: Measurements) => f.fields.filter((field) => given(m[field]));
 const toShown = (f: Finding): DisclosureFinding => ({ mark: f.mark, text: f.finding });
 const unique = (xs: string[]) => [...new Set(xs)];
-const day = (iso: string) => iso.slice(0, 10);
 
 function taskArea(task: string): DisclosureArea | null {
   return (WORK_TASK_AREAS as Record<string, DisclosureArea | undefined>)[task] ?? null;
@@ -179,6 +189,8 @@ const taskLabel = (task: WorkTask) => WORK_TASK_LABELS[task] ?? task;
  */
 export function buildDisclosure(input: DisclosureInput): DisclosureContent {
   const { piano, intake, after } = input;
+  // An intake at 23:30 UTC is the next morning in a shop east of it: the day is the shop's.
+  const day = (iso: string) => calendarDayIn(iso, input.timeZone);
   const remeasured = new Set<MeasureField>(after?.remeasured ?? []);
   const doneTasks = new Set(input.workDone.map((w) => w.task));
   const areas: DisclosureAreaContent[] = [];
@@ -248,11 +260,17 @@ export function buildDisclosure(input: DisclosureInput): DisclosureContent {
   const pitchFrom = after && remeasured.has('a4Hz') && after.measurements.a4Hz != null ? { hz: after.measurements.a4Hz, on: after.submittedAt, when: 'after_work' as const } : intake.measurements.a4Hz != null ? { hz: intake.measurements.a4Hz, on: intake.submittedAt, when: areas.find((x) => x.area === 'tuning')!.foundBeforeWork ? ('before_work' as const) : ('intake' as const) } : null;
   const pitch: DisclosurePitch | null = pitchFrom
     ? (() => {
-        const c = cents(pitchFrom.hz);
-        const rounded = Math.round(Math.abs(c));
-        const where = rounded === 0 ? 'at standard pitch' : `${rounded} cents ${c < 0 ? 'below' : 'above'} standard pitch`;
-        return { a4Hz: pitchFrom.hz, cents: Math.round(c * 10) / 10, text: `A4 measured at ${pitchFrom.hz.toFixed(1)} Hz, ${where}.`, measuredOn: day(pitchFrom.on), when: pitchFrom.when };
+        const c = roundCents(cents(pitchFrom.hz));
+        return { a4Hz: pitchFrom.hz, cents: c, text: pitchSentence(pitchFrom.hz, c), measuredOn: day(pitchFrom.on), when: pitchFrom.when };
       })()
+    : null;
+  const tuningWorked = areas.find((x) => x.area === 'tuning')!.foundBeforeWork;
+  const tone: DisclosureToneContent | null = input.tone
+    ? {
+        ...input.tone.tone,
+        measuredOn: day(input.tone.recordedAt),
+        when: after && Date.parse(input.tone.recordedAt) >= Date.parse(after.submittedAt) ? 'after_work' : tuningWorked ? 'before_work' : 'intake',
+      }
     : null;
   return {
     format: 2,
@@ -274,11 +292,17 @@ export function buildDisclosure(input: DisclosureInput): DisclosureContent {
     notDone: unique(areas.flatMap((x) => x.notDone)),
     otherWorkDone,
     pitch,
+    tone,
     areas,
-    photos: input.photos.map((p) => ({ id: p.id, area: p.area, caption: p.caption })),
+    photos: input.photos.map((p) => ({ id: p.id, area: p.area, caption: buyerCaption(p.caption) })),
     warranty: input.texts.warranty,
     notices: NOTICES,
   };
+}
+
+/** "A4 measured at 437.2 Hz, 11.1 cents below standard pitch.", from the numbers a version keeps. */
+export function pitchSentence(a4Hz: number, centsFromStandard: number): string {
+  return `A4 measured at ${a4Hz.toFixed(1)} Hz, ${centsOffset(centsFromStandard, FROM_STANDARD)}.`;
 }
 
 /** Why a disclosure cannot be published from this grade yet; empty when it can. */
@@ -301,10 +325,14 @@ export function canonicalJson(value: unknown): string {
   return `{${entries.map(([k, v]) => `${JSON.stringify(k)}:${canonicalJson(v)}`).join(',')}}`;
 }
 
+// Written to the buyer; the advice to the dealer (a template to adapt to local law) is on the manager's editing screen.
 export const DEFAULT_WARRANTY =
   'Parts and labour warranty: for one year from delivery, the dealer will repair at no charge any fault in the work listed on this disclosure. ' +
-  'Tuning, voicing and regulation drift with use and climate and are not faults. Damage from moving by others, liquids, or extremes of humidity or heat is not covered. ' +
-  'This text is a template for the dealer to adapt to local law.';
+  'Tuning, voicing and regulation drift with use and climate and are not faults. Damage from moving by others, liquids, or extremes of humidity or heat is not covered.';
+
+/** What the manager reads beside the texts they edit: advice to the dealer, never printed for a buyer. */
+export const DEALER_TEMPLATE_ADVICE =
+  'The warranty, the disclosure’s notices and the deposit terms are Feltwire’s templates: adapt them to your local consumer-protection and sales law before you use them. They are not legal advice.';
 
 /** A buyer's acknowledgement of the version they read. */
 export const acknowledgeInput = z
@@ -376,9 +404,38 @@ export function notDoneSummary(c: DisclosureContent): { title: string; text: str
   return c.notDone.length ? { title: 'Work not done', text: `Our inspection called for this work, which was not done: ${list}.` } : null;
 }
 
+/** What the play-test recording says, in the buyer's words: when, how far off pitch, and whether it needs a raise. */
+export function toneWords(t: DisclosureToneContent, day: (isoDay: string) => string): { when: string; lines: string[] } {
+  const keys = t.keys.length === 1 ? '1 key' : `${t.keys.length} keys`;
+  const when =
+    t.when === 'after_work'
+      ? `Recorded after the work on ${day(t.measuredOn)}: ${keys} played one at a time.`
+      : t.when === 'before_work'
+        ? `Recorded on ${day(t.measuredOn)}, before the tuning work; not recorded again since: ${keys} played one at a time.`
+        : `Recorded on ${day(t.measuredOn)}: ${keys} played one at a time.`;
+  const lines: string[] = [];
+  if (t.overallCents != null) lines.push(`Overall the keys heard are ${centsOffset(t.overallCents, FROM_STANDARD)} (the median of the keys).`);
+  if (t.a4Hz != null) lines.push(`A4 from the recording: ${t.a4Hz.toFixed(1)} Hz.`);
+  if (t.pitchRaiseNeeded) lines.push('That is flat enough to need a pitch raise before a fine tuning.');
+  return { when, lines };
+}
+
 /** When the pitch on the disclosure was measured, in words. */
 export function pitchWhen(p: DisclosurePitch, day: (isoDay: string) => string): string {
   if (p.when === 'after_work') return `Measured after the work on ${day(p.measuredOn)}.`;
   if (p.when === 'before_work') return `Measured at intake on ${day(p.measuredOn)}, before the tuning work; not measured again since.`;
   return `Measured at intake on ${day(p.measuredOn)}.`;
+}
+
+/** What a buyer's acknowledgement answers, on the server and on the buyer's page. */
+export interface AcknowledgementAnswer {
+  acknowledgementId: number;
+  receiptToken: string;
+  version: number;
+  digest: string;
+  acknowledgedAt: string;
+  buyerName: string;
+  buyerEmail: string;
+  /** the buyer had acknowledged this version before: this is that acknowledgement, unchanged */
+  already: boolean;
 }

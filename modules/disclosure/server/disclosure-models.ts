@@ -37,6 +37,8 @@ export class Acknowledgement extends BaseModel {
   countersignedById!: number | null;
   countersignedAt!: string | null;
   pdfKey!: string | null;
+  /** an earlier acknowledgement by the same buyer of the same version, which stands for this one */
+  repeatsId!: number | null;
 }
 
 export class ShopSetting extends BaseModel {

@@ -9,7 +9,12 @@ import { can } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
 import { gradedAssessments, remeasuredFieldsOf } from '@/modules/assessment/server/assessment-service';
-import { acknowledgeInput, buildDisclosure, DEFAULT_WARRANTY, priceInput, publishBlockers, textsInput, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import { balanceDue } from '@/modules/deposits/core/deposit';
+import { depositTerms } from '@/modules/deposits/core/deposit-terms';
+import { Deposit } from '@/modules/deposits/server/deposit-models';
+import { depositRules, publicDepositTerms } from '@/modules/deposits/server/deposit-rules';
+import { acknowledgeInput, buildDisclosure, type AcknowledgementAnswer, DEFAULT_WARRANTY, priceInput, publishBlockers, textsInput, type AnyDisclosureContent, type DisclosureContent } from '@/modules/disclosure/core/disclosure';
+import { digestPrefixOf, parseVerificationCode, verificationCode } from '@/modules/disclosure/core/verification';
 import { enqueue } from '@/modules/jobs/server/queue';
 import { Photo } from '@/modules/photos/server/photo-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
@@ -17,23 +22,37 @@ import { pianoName } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { changeAskingPrice, type PricingDeps } from '@/modules/pricing/server/pricing-service';
 import { StageMove } from '@/modules/pianos/server/stage-move-model';
-import { formatMoney, type Currency } from '@/modules/shop/core/money';
+import { formatDay, formatDayTime, type DealerLocality } from '@/modules/shop/core/dealer-time';
+import { formatMoney, moneyText, type Currency } from '@/modules/shop/core/money';
+import { contactLines } from '@/modules/shop/core/shop-profile';
 import { WorkItem } from '@/modules/shop/server/shop-models';
+import { shopLocality, shopProfile } from '@/modules/shop/server/shop-profile-service';
+import { latestPlayTest } from '@/modules/tone/server/tone-service';
+import { systemClock, type Clock } from '@/server/clock';
 import { AppError, notAllowed, notFound } from '@/server/errors';
 
 import { contentDigest } from './digest';
-import { paperDay, paperView } from './disclosure-paper';
-import { floorTagPdf, signedCopyPdf } from './disclosure-pdf';
+import { paperView } from './disclosure-paper';
+import { floorTagPdf, signedCopyPdf, type SignedCopyMeta } from './disclosure-pdf';
 import { Acknowledgement, Disclosure, DisclosureLink, ShopSetting } from './disclosure-models';
 
-const template = (name: string) => Handlebars.compile(fs.readFileSync(path.join(__dirname, 'templates', name), 'utf8'));
+export type { AcknowledgementAnswer };
+
+const template = (name: string, options?: Parameters<typeof Handlebars.compile>[1]) => Handlebars.compile(fs.readFileSync(path.join(__dirname, 'templates', name), 'utf8'), options);
 const DISCLOSURE_HTML = template('disclosure.hbs');
-const SIGNED_COPY_EMAIL = template('signed-copy-email.hbs');
+// Plain text: "Thornquist & Hale" stays as typed, with no HTML escapes.
+const SIGNED_COPY_EMAIL = template('signed-copy-email.hbs', { noEscape: true });
 
 export interface DisclosureDeps {
   photos: PhotoStore;
   publicUrl: string;
+  /** the time publishing and countersigning run on; tests move it on */
+  clock?: Clock;
 }
+
+const nowIso = (deps: DisclosureDeps) => (deps.clock ?? systemClock).now().toISOString();
+/** Where anyone checks a paper's verification code. */
+export const checkUrl = (deps: Pick<DisclosureDeps, 'publicUrl'>) => `${deps.publicUrl}/check`;
 
 // 24 random bytes: 192 bits, written in 32 URL-safe characters.
 const TOKEN = /^[A-Za-z0-9_-]{32}$/;
@@ -101,12 +120,35 @@ async function contentFor(pianoId: number): Promise<DisclosureContent> {
     soldAsItStands: decision?.action === 'sell_as_is',
     photos: photos.map((ph) => ({ id: ph.id, area: ph.area, caption: ph.caption })),
     texts: await shopTexts(),
+    timeZone: (await shopLocality()).timeZone,
+    tone: await latestPlayTest(pianoId),
   });
 }
 
+/** Who published a page and where: the dealer's contact and dates as they stood when it was frozen. */
+export interface PageDealer {
+  where: DealerLocality;
+  contact: string[];
+  checkUrl: string;
+}
+
 /** The published page of one version, as it is frozen with it. */
-export function renderDisclosureHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string): string {
-  return DISCLOSURE_HTML({ content, paper: paperView(content), version, digest, publishedOn: paperDay(publishedAt), price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null) });
+export function renderDisclosureHtml(content: DisclosureContent, version: number, digest: string, publishedAt: string, dealer: PageDealer): string {
+  return DISCLOSURE_HTML({
+    content,
+    paper: paperView(content, dealer.where),
+    version,
+    code: verificationCode(digest),
+    checkUrl: dealer.checkUrl,
+    contact: dealer.contact,
+    publishedOn: formatDay(publishedAt, dealer.where),
+    price: priceText(content.askingPrice?.minor ?? null, content.askingPrice?.currency ?? null),
+  });
+}
+
+async function pageDealer(deps: DisclosureDeps): Promise<PageDealer> {
+  const profile = await shopProfile();
+  return { where: { locale: profile.locale, timeZone: profile.timeZone }, contact: contactLines(profile), checkUrl: checkUrl(deps) };
 }
 
 export interface Published {
@@ -123,6 +165,7 @@ export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pian
   if (!canPublish(actor)) throw notAllowed('publish disclosures');
   const content = await contentFor(pianoId);
   const digest = contentDigest(content);
+  const dealer = await pageDealer(deps);
   return Disclosure.transaction(async (trx) => {
     await trx.raw('select pg_advisory_xact_lock(?)', [pianoId]);
     let link = await DisclosureLink.query(trx).findById(pianoId);
@@ -131,8 +174,8 @@ export async function publishDisclosure(deps: DisclosureDeps, actor: Actor, pian
     const latest = await Disclosure.query(trx).where('piano_id', pianoId).orderBy('version', 'desc').first();
     if (latest && latest.digest === digest) return { version: latest.version, digest, token: link.token, url, publishedAt: latest.publishedAt, unchanged: true };
     const version = (latest?.version ?? 0) + 1;
-    const publishedAt = new Date().toISOString();
-    await Disclosure.query(trx).insert({ pianoId, version, content, html: renderDisclosureHtml(content, version, digest, publishedAt), digest, publishedById: actor.id, publishedAt });
+    const publishedAt = nowIso(deps);
+    await Disclosure.query(trx).insert({ pianoId, version, content, html: renderDisclosureHtml(content, version, digest, publishedAt, dealer), digest, publishedById: actor.id, publishedAt });
     return { version, digest, token: link.token, url, publishedAt, unchanged: false };
   });
 }
@@ -166,9 +209,13 @@ export async function publicDisclosure(deps: DisclosureDeps, token: string, vers
     }),
   );
   const held = (await Piano.query().findById(link.pianoId).select('stage'))?.stage;
+  const profile = await shopProfile();
   return {
     version: shown.version,
     digest: shown.digest,
+    verificationCode: verificationCode(shown.digest),
+    // The buyer's page writes its dates in the shop's words and shows whom to ask.
+    dealer: { name: shown.content.dealerName, locale: profile.locale, timeZone: profile.timeZone, contact: contactLines(profile) },
     publishedAt: shown.publishedAt,
     newestVersion: newest.version,
     changedAt: newest.publishedAt,
@@ -185,15 +232,27 @@ export async function publicDisclosureHtml(token: string, version?: number): Pro
   return shown.html;
 }
 
-/** A buyer acknowledges the version they read; a stale digest is refused, so nobody signs for text they did not see. */
-export async function acknowledge(token: string, raw: unknown): Promise<{ acknowledgementId: number; receiptToken: string; version: number; digest: string; acknowledgedAt: string }> {
+/**
+ * A buyer acknowledges the version they read; a stale digest is refused, so nobody signs for text they did
+ * not see. One buyer (e-mail) acknowledges one version once: a second time, even at the same moment, gets
+ * the first back (the database's unique index decides between two at once).
+ */
+export async function acknowledge(token: string, raw: unknown): Promise<AcknowledgementAnswer> {
   const { newest } = await disclosureByToken(token);
   const input = acknowledgeInput.parse(raw);
   if (input.digest !== newest.digest) {
     throw new AppError('CONFLICT', `The disclosure changed since you opened it: version ${newest.version} is the newest. Read it again before acknowledging.`, 'digest');
   }
-  const ack = await Acknowledgement.query().insertAndFetch({ disclosureId: newest.id, buyerName: input.fullName, buyerEmail: input.email, digest: newest.digest, receiptToken: newToken() });
-  return { acknowledgementId: ack.id, receiptToken: ack.receiptToken, version: newest.version, digest: newest.digest, acknowledgedAt: ack.acknowledgedAt };
+  const knex = Acknowledgement.knex();
+  const inserted = await knex.raw(
+    `insert into acknowledgements (disclosure_id, buyer_name, buyer_email, digest, receipt_token) values (?, ?, ?, ?, ?)
+     on conflict (disclosure_id, lower(buyer_email)) where repeats_id is null do nothing returning id`,
+    [newest.id, input.fullName, input.email, newest.digest, newToken()],
+  );
+  const id = (inserted.rows as { id: number }[])[0]?.id;
+  const ack = id != null ? await Acknowledgement.query().findById(id) : await Acknowledgement.query().where('disclosure_id', newest.id).whereRaw('lower(buyer_email) = lower(?)', [input.email]).whereNull('repeats_id').first();
+  if (!ack) throw new AppError('CONFLICT', 'The acknowledgement could not be recorded: send it again.');
+  return { acknowledgementId: ack.id, receiptToken: ack.receiptToken, version: newest.version, digest: newest.digest, acknowledgedAt: ack.acknowledgedAt, buyerName: ack.buyerName, buyerEmail: ack.buyerEmail, already: id == null };
 }
 
 export async function acknowledgementsFor(actor: Actor, pianoId: number) {
@@ -202,6 +261,7 @@ export async function acknowledgementsFor(actor: Actor, pianoId: number) {
     .join('disclosures', 'disclosures.id', 'acknowledgements.disclosure_id')
     .leftJoin('users', 'users.id', 'acknowledgements.countersigned_by_id')
     .where('disclosures.piano_id', pianoId)
+    .whereNull('acknowledgements.repeats_id')
     .orderBy('acknowledgements.id', 'desc')
     .select('acknowledgements.*', 'disclosures.version', 'users.name as countersigned_by');
   return rows.map((r) => {
@@ -210,20 +270,59 @@ export async function acknowledgementsFor(actor: Actor, pianoId: number) {
   });
 }
 
-async function pdfFor(trx: Knex.Transaction, ack: Acknowledgement, countersignedBy: string): Promise<{ pdf: Buffer; disclosure: Disclosure }> {
+/** The deposit part of a signed copy: what this buyer paid for this version, else the terms a deposit would take. */
+async function depositForCopy(trx: Knex.Transaction, ack: Acknowledgement, c: AnyDisclosureContent, where: DealerLocality): Promise<SignedCopyMeta['deposit']> {
+  const price = c.askingPrice;
+  if (!price) return null;
+  const paid = await Deposit.query(trx)
+    .where('disclosure_id', ack.disclosureId)
+    .whereNotNull('paid_at')
+    .where((q) => q.where('acknowledgement_id', ack.id).orWhereRaw('lower(buyer_email) = lower(?)', [ack.buyerEmail]))
+    .orderBy('id', 'desc')
+    .first();
+  const rules = await depositRules(trx);
+  if (paid) {
+    const b = balanceDue(price.minor, paid.amountMinor, price.currency as Currency, rules);
+    const status: Record<string, string> = { refunding: 'The deposit is being refunded.', refunded: 'The deposit was refunded.', released: 'The hold was released.', expired: 'The hold has ended.', applied: 'The deposit went toward the sale.' };
+    return {
+      kind: 'paid',
+      amount: moneyText(paid.amountMinor, paid.currency),
+      paidAt: formatDayTime(paid.paidAt!, where),
+      holdUntil: paid.status === 'holding' && paid.holdExpiresAt ? formatDayTime(paid.holdExpiresAt, where) : null,
+      status: status[paid.status] ?? '',
+      balance: [
+        { label: 'Price', amount: moneyText(b.priceMinor, b.currency) },
+        { label: `Sales tax (${b.salesTaxPct} %)`, amount: moneyText(b.taxMinor, b.currency) },
+        { label: 'Deposit paid', amount: `-${moneyText(b.depositMinor, b.currency)}` },
+        { label: 'Balance due at the sale', amount: moneyText(b.balanceMinor, b.currency) },
+      ],
+    };
+  }
+  const quote = await publicDepositTerms(price, trx);
+  return { kind: 'terms', amount: moneyText(quote.amountMinor, quote.currency), holdDays: quote.holdDays, terms: depositTerms({ ...quote, basis: null }, c.dealerName) };
+}
+
+async function signedCopyFor(deps: DisclosureDeps, trx: Knex.Transaction, ack: Acknowledgement, countersignedBy: string) {
   const disclosure = (await Disclosure.query(trx).findById(ack.disclosureId))!;
   const c = disclosure.content;
-  const pdf = await signedCopyPdf(c, {
+  const profile = await shopProfile(trx);
+  const where = { locale: profile.locale, timeZone: profile.timeZone };
+  const meta: SignedCopyMeta = {
     version: disclosure.version,
     digest: disclosure.digest,
+    code: verificationCode(disclosure.digest),
+    checkUrl: checkUrl(deps),
     price: priceText(c.askingPrice?.minor ?? null, c.askingPrice?.currency ?? null),
+    dealer: { name: c.dealerName, contact: contactLines(profile) },
+    where,
     buyerName: ack.buyerName,
     buyerEmail: ack.buyerEmail,
     acknowledgedAt: ack.acknowledgedAt,
     countersignedBy,
     countersignedAt: ack.countersignedAt!,
-  });
-  return { pdf, disclosure };
+    deposit: await depositForCopy(trx, ack, c, where),
+  };
+  return { pdf: await signedCopyPdf(c, meta), disclosure, meta };
 }
 
 /**
@@ -237,8 +336,9 @@ export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledg
     const ack = await Acknowledgement.query(trx).findById(acknowledgementId).forUpdate();
     if (!ack) throw notFound(`acknowledgement ${acknowledgementId}`);
     if (ack.countersignedAt) throw new AppError('CONFLICT', 'This acknowledgement is already countersigned.');
-    const signed = await ack.$query(trx).patchAndFetch({ countersignedById: actor.id, countersignedAt: new Date().toISOString() });
-    const { pdf, disclosure } = await pdfFor(trx, signed, signer.name);
+    if (ack.repeatsId != null) throw new AppError('CONFLICT', `This buyer acknowledged this version before: countersign acknowledgement ${ack.repeatsId}.`);
+    const signed = await ack.$query(trx).patchAndFetch({ countersignedById: actor.id, countersignedAt: nowIso(deps) });
+    const { pdf, disclosure, meta } = await signedCopyFor(deps, trx, signed, signer.name);
     const pdfKey = `disclosures/${disclosure.pianoId}/signed-${signed.id}-${signed.receiptToken.slice(0, 8)}.pdf`;
     await deps.photos.put(pdfKey, pdf, 'application/pdf');
     await signed.$query(trx).patch({ pdfKey });
@@ -252,10 +352,13 @@ export async function countersign(deps: DisclosureDeps, actor: Actor, acknowledg
         piano: named,
         stockNumber: c.piano.stockNumber,
         dealerName: c.dealerName,
+        contact: meta.dealer.contact,
         version: disclosure.version,
-        acknowledgedOn: signed.acknowledgedAt.slice(0, 10),
+        acknowledgedOn: formatDayTime(signed.acknowledgedAt, meta.where),
         countersignedBy: signer.name,
-        digest: disclosure.digest,
+        countersignedOn: formatDayTime(signed.countersignedAt!, meta.where),
+        code: meta.code,
+        checkUrl: `${meta.checkUrl}/${meta.code}`,
         downloadUrl: `${deps.publicUrl}/api/public/receipts/${signed.receiptToken}.pdf`,
       }),
       // The PDF waits in storage; the job carries its key.
@@ -292,4 +395,52 @@ export async function floorTag(deps: DisclosureDeps, actor: Actor, pianoId: numb
     url: `${deps.publicUrl}/d/${link.token}`,
     dealerName: (await shopTexts()).dealerName,
   });
+}
+
+export interface CheckedVersion {
+  /** the id the published page of this version is asked for by, with the code */
+  id: number;
+  dealerName: string;
+  stockNumber: string;
+  piano: string;
+  version: number;
+  publishedOn: string;
+  newestVersion: number;
+  newestOn: string;
+}
+
+/**
+ * What a verification code belongs to: the published version(s) whose digest begins with the code's 60 bits
+ * (two versions sharing them is a chance of about one in a billion billion; both are then listed).
+ */
+export async function checkCode(typed: string): Promise<{ code: string; versions: CheckedVersion[] }> {
+  const code = parseVerificationCode(typed);
+  if (!code) throw new AppError('BAD_INPUT', 'code: must be the 12 letters and digits printed on the paper, such as 7K3Q-M9TD-20XF', 'code');
+  const rows = await Disclosure.query().where('digest', 'like', `${digestPrefixOf(code)}%`).orderBy('id').limit(5).select('id', 'piano_id', 'version', 'published_at', 'content');
+  const profile = await shopProfile();
+  const versions = await Promise.all(
+    rows.map(async (r) => {
+      const newest = (await Disclosure.query().where('piano_id', r.pianoId).orderBy('version', 'desc').first().select('version', 'published_at'))!;
+      return {
+        id: r.id,
+        dealerName: r.content.dealerName,
+        stockNumber: r.content.piano.stockNumber,
+        piano: pianoName(r.content.piano),
+        version: r.version,
+        publishedOn: formatDay(r.publishedAt, profile),
+        newestVersion: newest.version,
+        newestOn: formatDay(newest.publishedAt, profile),
+      };
+    }),
+  );
+  return { code, versions };
+}
+
+/** The published page of the version a code belongs to, as it was frozen: the code must match it. */
+export async function checkedVersionHtml(typed: string, id: number): Promise<string> {
+  const code = parseVerificationCode(typed);
+  if (!code) throw NOT_FOUND();
+  const row = await Disclosure.query().findById(id).where('digest', 'like', `${digestPrefixOf(code)}%`).select('html');
+  if (!row) throw NOT_FOUND();
+  return row.html;
 }

@@ -6,15 +6,27 @@ import { DepositConfirmationScreen } from '@/modules/deposits/ui/deposit-confirm
 import { installFocusRing } from '@/modules/theme/ui/focus-ring';
 import { FONT_ASSETS } from '@/modules/theme/ui/fonts';
 
+import { CheckScreen } from './check-screen';
 import { DisclosureScreen } from './disclosure-screen';
 import { parseSession, parseVersion } from './route-params';
 
-/** Which buyer page an address is: `/d/<token>` (with `?version=`) or `/d/<token>/deposit` (with `?session=`). */
-export function buyerPage(pathname: string, search: string): { page: 'disclosure' | 'deposit'; token: string | null; version: number | null; session: string | null } {
-  const match = /^\/d\/([^/]+)(\/deposit)?\/?$/.exec(pathname);
+export type BuyerPage =
+  | { page: 'disclosure'; token: string | null; version: number | null; checkout: 'cancelled' | null }
+  | { page: 'deposit'; token: string | null; session: string | null }
+  | { page: 'check'; code: string | null };
+
+/**
+ * Which buyer page an address is: `/d/<token>` (with `?version=`, or `?checkout=cancelled` back from an
+ * unpaid checkout), `/d/<token>/deposit` (with `?session=`), or `/check` and `/check/<code>`.
+ */
+export function buyerPage(pathname: string, search: string): BuyerPage {
   const query = new URLSearchParams(search);
+  const check = /^\/check(?:\/([^/]+))?\/?$/.exec(pathname);
+  if (check) return { page: 'check', code: check[1] ? decodeURIComponent(check[1]) : null };
+  const match = /^\/d\/([^/]+)(\/deposit)?\/?$/.exec(pathname);
   const token = match ? decodeURIComponent(match[1]) : null;
-  return { page: match?.[2] ? 'deposit' : 'disclosure', token, version: parseVersion(query.get('version') ?? undefined), session: parseSession(query.get('session') ?? undefined) };
+  if (match?.[2]) return { page: 'deposit', token, session: parseSession(query.get('session') ?? undefined) };
+  return { page: 'disclosure', token, version: parseVersion(query.get('version') ?? undefined), checkout: query.get('checkout') === 'cancelled' ? 'cancelled' : null };
 }
 
 /**
@@ -28,7 +40,13 @@ export function BuyerApp({ pathname, search }: { pathname: string; search: strin
   const at = buyerPage(pathname, search);
   return (
     <SafeAreaProvider>
-      {at.page === 'deposit' ? <DepositConfirmationScreen token={at.token} sessionId={at.session} /> : <DisclosureScreen token={at.token} version={at.version} />}
+      {at.page === 'deposit' ? (
+        <DepositConfirmationScreen token={at.token} sessionId={at.session} />
+      ) : at.page === 'check' ? (
+        <CheckScreen code={at.code} />
+      ) : (
+        <DisclosureScreen token={at.token} version={at.version} checkout={at.checkout} />
+      )}
     </SafeAreaProvider>
   );
 }

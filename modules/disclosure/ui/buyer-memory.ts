@@ -10,6 +10,8 @@ const receipt = z.object({
   acknowledgedAt: z.string(),
   fullName: z.string(),
   email: z.string(),
+  /** the server answered with this buyer's earlier acknowledgement of the version */
+  already: z.boolean().optional(),
 });
 export type AckReceipt = z.infer<typeof receipt>;
 

@@ -1,39 +1,30 @@
-import { CURRENCY_DIGITS, formatMoney, type Currency } from '@/modules/shop/core/money';
+import { formatCalendarDay, formatDay, formatDayTime, type DealerLocality } from '@/modules/shop/core/dealer-time';
 
 import type { DisclosureView } from './public-disclosure';
 
-const DAY = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric' });
-const DAY_UTC = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC' });
-const DAY_TIME = new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+// Buyers read the dealer's dates: in the shop's locale and time zone, whatever the phone's own are.
 
-/** "1 December 2026" from an ISO time, in the reader's time zone. */
-export function longDay(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : DAY.format(date);
+/** "1 December 2026" from an ISO time, the shop's day. */
+export function longDay(iso: string | null | undefined, where: DealerLocality): string {
+  return (iso && formatDay(iso, where)) || '—';
 }
 
 /** A calendar day written as YYYY-MM-DD stays that day wherever it is read. */
-export function calendarDay(day: string | null | undefined): string {
-  if (!day) return '—';
-  const date = new Date(`${day.slice(0, 10)}T00:00:00Z`);
-  return Number.isNaN(date.getTime()) ? day : DAY_UTC.format(date);
+export function calendarDay(day: string | null | undefined, where: DealerLocality): string {
+  return (day && formatCalendarDay(day, where.locale)) || '—';
 }
 
-export function dayAndTime(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : DAY_TIME.format(date);
+/** "1 December 2026 at 14:05 CET", in the shop's time zone. */
+export function dayAndTime(iso: string | null | undefined, where: DealerLocality): string {
+  return (iso && formatDayTime(iso, where)) || '—';
 }
 
-export function isCurrency(value: string): value is Currency {
-  return Object.prototype.hasOwnProperty.call(CURRENCY_DIGITS, value);
+/** The reader's own zone, for staff screens on the shop's own devices. */
+export function deviceLocality(): DealerLocality {
+  return { locale: 'en-GB', timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC' };
 }
 
-/** Money as the shop writes it (USD 4,275.00); an unknown currency still shows its number. */
-export function money(minor: number, currency: string): string {
-  return isCurrency(currency) ? formatMoney(minor, currency) : `${currency} ${minor}`;
-}
+export { isCurrency, moneyText as money } from '@/modules/shop/core/money';
 
 export function pianoTitle(piano: DisclosureView['piano']): string {
   return piano.model ? `${piano.maker} ${piano.model}` : piano.maker;

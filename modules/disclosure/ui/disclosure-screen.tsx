@@ -17,7 +17,7 @@ import type { PublicDisclosure } from './public-disclosure';
 import { usePublicDisclosure } from './use-public-disclosure';
 
 /** The buyer's page behind a disclosure link: read it, acknowledge it, hold the piano with a deposit. */
-export function DisclosureScreen({ token, version }: { token: string | null; version: number | null }) {
+export function DisclosureScreen({ token, version, checkout = null }: { token: string | null; version: number | null; checkout?: 'cancelled' | null }) {
   const { result, reload } = usePublicDisclosure(token, version);
 
   if (!token || result?.state === 'missing') return <NoDisclosure />;
@@ -38,10 +38,10 @@ export function DisclosureScreen({ token, version }: { token: string | null; ver
     );
   }
   // Keyed by the link only: a reload after a conflict keeps what the buyer typed and the message about it.
-  return <DisclosurePage key={token} token={token} disclosure={result.data} reload={reload} />;
+  return <DisclosurePage key={token} token={token} disclosure={result.data} reload={reload} checkout={checkout} />;
 }
 
-function DisclosurePage({ token, disclosure, reload }: { token: string; disclosure: PublicDisclosure; reload: () => void }) {
+function DisclosurePage({ token, disclosure, reload, checkout }: { token: string; disclosure: PublicDisclosure; reload: () => void; checkout: 'cancelled' | null }) {
   const c = disclosure.content;
   const [receipt, setReceipt] = useState<AckReceipt | null>(() => readReceipt(token));
   const [paidSession] = useState(() => readCheckout(token));
@@ -63,7 +63,16 @@ function DisclosurePage({ token, disclosure, reload }: { token: string; disclosu
   const updatedSinceSeen = !!seenBefore && seenBefore.version < disclosure.newestVersion && Date.parse(disclosure.changedAt) > Date.parse(seenBefore.changedAt);
 
   return (
-    <BuyerFrame dealerName={c.dealerName} kind="Condition disclosure" documentTitle={`${pianoTitle(c.piano)}: condition disclosure · ${c.dealerName}`}>
+    <BuyerFrame dealerName={c.dealerName} contact={disclosure.dealer.contact} kind="Condition disclosure" documentTitle={`${pianoTitle(c.piano)}: condition disclosure · ${c.dealerName}`}>
+      {checkout === 'cancelled' ? (
+        <Notice
+          tone="info"
+          title="The payment was not made"
+          testID="checkout-cancelled"
+        >
+          {`You left the payment page without paying, or your card was declined: nothing was charged and the piano is not held for you. ${disclosure.available ? `You can try again further down this page, with the same card or another, or ask ${c.dealerName} to hold it for you.` : 'The piano is no longer available for a deposit.'}`}
+        </Notice>
+      ) : null}
       {!disclosure.isNewest ? (
         <Notice
           tone="caution"
@@ -71,10 +80,10 @@ function DisclosurePage({ token, disclosure, reload }: { token: string; disclosu
           actions={<Button label={`Read version ${disclosure.newestVersion}, the newest`} href={`/d/${token}`} testID="disclosure-newest" />}
           testID="disclosure-old-version"
         >
-          {`${c.dealerName} updated this disclosure on ${longDay(disclosure.changedAt)}. This older version is kept so you can see what it said; the newest one is the one that counts.`}
+          {`${c.dealerName} updated this disclosure on ${longDay(disclosure.changedAt, disclosure.dealer)}. This older version is kept so you can see what it said; the newest one is the one that counts.`}
         </Notice>
       ) : updatedSinceSeen ? (
-        <Notice tone="info" title={`Updated on ${longDay(disclosure.changedAt)}`} testID="disclosure-updated">
+        <Notice tone="info" title={`Updated on ${longDay(disclosure.changedAt, disclosure.dealer)}`} testID="disclosure-updated">
           {`${c.dealerName} changed this disclosure since you last opened it: you are reading version ${disclosure.version}; you last saw version ${seenBefore!.version}. Earlier versions are listed at the end.`}
         </Notice>
       ) : null}

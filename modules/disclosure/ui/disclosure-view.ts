@@ -1,7 +1,8 @@
 // What the buyer's screens show, from either shape of published content: format 2, or the first
 // format as it was published (its own words, each finding led by the mark it reads as today).
 import { MARK_WORDS, type AreaMark } from '@/modules/assessment/core/grade';
-import { V1_MARKS, V1_SEVERITY_WORDS, areaSections, isFormat2, notDoneSummary, pitchWhen, type DisclosureContent, type DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
+import { V1_MARKS, V1_SEVERITY_WORDS, areaSections, isFormat2, notDoneSummary, pitchSentence, pitchWhen, toneWords, type DisclosureContent, type DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
+import type { DealerLocality } from '@/modules/shop/core/dealer-time';
 
 import { calendarDay } from './disclosure-format';
 import type { DisclosureView } from './public-disclosure';
@@ -36,37 +37,43 @@ export interface ShownDocument {
   notDone: { title: string; text: string } | null;
   otherWorkDone: string[];
   pitch: { a4Hz: number; cents: number; text: string; when: string | null } | null;
+  /** the play test measured from a recording: when, what it says, and cents per key for the chart */
+  tone: { when: string; lines: string[]; keys: { key: number; cents: number }[] } | null;
   areas: ShownArea[];
 }
 
 const wordOf = (mark: AreaMark | 'done' | null) => (mark == null ? null : mark === 'done' ? 'Done' : MARK_WORDS[mark]);
 
-function format2(c: DisclosureContent): ShownDocument {
+function format2(c: DisclosureContent, where: DealerLocality): ShownDocument {
+  const day = (d: string) => calendarDay(d, where);
   return {
     format: 2,
-    inspected: `Inspected at intake on ${calendarDay(c.inspectedOn)}${c.measuredAfterOn ? `; measured again after the work in our workshop on ${calendarDay(c.measuredAfterOn)}` : ''}.`,
+    inspected: `Inspected at intake on ${day(c.inspectedOn)}${c.measuredAfterOn ? `; measured again after the work in our workshop on ${day(c.measuredAfterOn)}` : ''}.`,
     notDone: notDoneSummary(c),
     otherWorkDone: c.otherWorkDone,
-    pitch: c.pitch ? { ...c.pitch, when: pitchWhen(c.pitch, calendarDay) } : null,
+    // The sentence from the numbers the version keeps, in the one way cents are written.
+    pitch: c.pitch ? { ...c.pitch, text: pitchSentence(c.pitch.a4Hz, c.pitch.cents), when: pitchWhen(c.pitch, day) } : null,
+    tone: c.tone?.keys.length ? { ...toneWords(c.tone, day), keys: c.tone.keys.map((k) => ({ key: k.key, cents: k.cents })) } : null,
     areas: c.areas.map((a) => ({
       area: a.area,
       label: a.label,
       mark: a.mark,
       condition: a.condition,
-      sections: areaSections(a, c, calendarDay).map((s) => ({ kind: s.kind, title: s.title, items: s.items.map((i) => ({ ...i, word: wordOf(i.mark) })) })),
+      sections: areaSections(a, c, day).map((s) => ({ kind: s.kind, title: s.title, items: s.items.map((i) => ({ ...i, word: wordOf(i.mark) })) })),
       closing: null,
       photoIds: a.photoIds,
     })),
   };
 }
 
-function format1(c: DisclosureContentV1): ShownDocument {
+function format1(c: DisclosureContentV1, where: DealerLocality): ShownDocument {
   return {
     format: 1,
-    inspected: `Inspected on ${calendarDay(c.assessedOn)}${c.assessedAfterWorkshop ? ', after the work in our workshop' : ''}. Each area says what we found, what we did and what is left to know.`,
+    inspected: `Inspected on ${calendarDay(c.assessedOn, where)}${c.assessedAfterWorkshop ? ', after the work in our workshop' : ''}. Each area says what we found, what we did and what is left to know.`,
     notDone: null,
     otherWorkDone: [],
     pitch: c.pitch ? { ...c.pitch, when: null } : null,
+    tone: null,
     areas: c.areas.map((a) => {
       const remaining = a.findings.filter((f) => f.severity !== 'sound').length;
       const sections: ShownSection[] = [];
@@ -87,6 +94,6 @@ function format1(c: DisclosureContentV1): ShownDocument {
 }
 
 /** The document as the buyer's screens show it, whichever format it was published in. */
-export function shownDocument(c: DisclosureView): ShownDocument {
-  return isFormat2(c as DisclosureContent) ? format2(c as DisclosureContent) : format1(c as unknown as DisclosureContentV1);
+export function shownDocument(c: DisclosureView, where: DealerLocality): ShownDocument {
+  return isFormat2(c as DisclosureContent) ? format2(c as DisclosureContent, where) : format1(c as unknown as DisclosureContentV1, where);
 }

@@ -95,7 +95,7 @@ function PresentView({ pianoId, manager }: { pianoId: number; manager: boolean }
         The disclosure is on the whole screen for the buyer.
       </Notice>
     ) : (
-      <AreaWalkthrough disclosure={disclosure} step={step} onStep={setStep} />
+      <AreaWalkthrough disclosure={disclosure} step={step} onStep={setStep} closingExtra={token ? <OnYourPhone token={token} /> : null} />
     )
   ) : result?.state === 'error' ? (
     <Notice tone="error" actions={<Button label="Try again" variant="secondary" onPress={reload} />}>
@@ -230,6 +230,21 @@ interface FullScreenProps {
   onStep: (step: number) => void;
 }
 
+/** What the tablet offers at the end, said plainly: acknowledging and the deposit happen on the buyer's own phone. */
+function OnYourPhone({ token }: { token: string }) {
+  return (
+    <Card testID="present-on-your-phone">
+      <View style={styles.closingQr}>
+        <QrCode value={buyerUrl(token)} size={150} label="QR code for this disclosure on your own phone" />
+        <View style={styles.closingText}>
+          <Body variant="subheading">Acknowledge it on your phone</Body>
+          <Body>This tablet shows the disclosure. To acknowledge it, and to hold the piano with a deposit if you wish, scan the code with your phone’s camera: the same disclosure opens there, yours to keep.</Body>
+        </View>
+      </View>
+    </Card>
+  );
+}
+
 /** The walkthrough over the whole screen, staff navigation out of sight, for handing the tablet over. */
 function FullScreenWalkthrough({ open, onClose, disclosure, token, step, onStep }: FullScreenProps) {
   const insets = useSafeAreaInsets();
@@ -254,17 +269,7 @@ function FullScreenWalkthrough({ open, onClose, disclosure, token, step, onStep 
           step={step}
           onStep={onStep}
           fill
-          closingExtra={
-            <Card>
-              <View style={styles.closingQr}>
-                <QrCode value={buyerUrl(token)} size={150} label="QR code for this disclosure on your own phone" />
-                <View style={styles.closingText}>
-                  <Body variant="subheading">Take it with you</Body>
-                  <Body>Scan the code with your phone’s camera to read this disclosure again, acknowledge it, and hold the piano with a deposit if you wish.</Body>
-                </View>
-              </View>
-            </Card>
-          }
+          closingExtra={<OnYourPhone token={token} />}
         />
       </View>
     </Modal>

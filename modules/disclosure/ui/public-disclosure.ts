@@ -1,5 +1,5 @@
 // The buyer's side of a disclosure: the public JSON behind an unguessable link, read without signing in.
-import type { DisclosureContent, DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
+import type { AcknowledgementAnswer, DisclosureContent, DisclosureContentV1 } from '@/modules/disclosure/core/disclosure';
 
 export interface DisclosurePhoto {
   id: number;
@@ -12,9 +12,21 @@ export interface DisclosurePhoto {
 /** Published content as the buyer's page receives it: either format, with a link to each photo. */
 export type DisclosureView = (Omit<DisclosureContent, 'photos'> | Omit<DisclosureContentV1, 'photos'>) & { photos: DisclosurePhoto[] };
 
+/** The dealer as the buyer's page names it: whom to ask, and where its dates are written. */
+export interface PublicDealer {
+  name: string;
+  locale: string;
+  timeZone: string;
+  /** address lines, then telephone, e-mail and website, as far as the dealer gave them */
+  contact: string[];
+}
+
 export interface PublicDisclosure {
   version: number;
   digest: string;
+  /** the short code printed on the papers, checked on the check page */
+  verificationCode: string;
+  dealer: PublicDealer;
   publishedAt: string;
   newestVersion: number;
   /** when the newest version was published */
@@ -33,6 +45,46 @@ export const UNREACHABLE = 'The server cannot be reached. Check the connection a
 
 export function disclosureApi(token: string): string {
   return `/api/public/disclosures/${encodeURIComponent(token)}`;
+}
+
+/** The check page, with a code filled in. */
+export function checkPageUrl(code?: string): string {
+  return code ? `/check/${encodeURIComponent(code)}` : '/check';
+}
+
+export interface CheckedVersion {
+  id: number;
+  dealerName: string;
+  stockNumber: string;
+  piano: string;
+  version: number;
+  publishedOn: string;
+  newestVersion: number;
+  newestOn: string;
+}
+
+export type CheckOutcome = { ok: true; code: string; versions: CheckedVersion[] } | { ok: false; message: string };
+
+/** Asks which published version a paper's code belongs to. */
+export async function checkCode(code: string): Promise<CheckOutcome> {
+  let response: Response;
+  try {
+    response = await fetch(`/api/public/check/${encodeURIComponent(code)}`, { headers: { Accept: 'application/json' }, cache: 'no-store' });
+  } catch {
+    return { ok: false, message: UNREACHABLE };
+  }
+  if (!response.ok) {
+    const message = await errorMessage(response, 'The code could not be checked');
+    return { ok: false, message: message.replace(/^code: (.)/, (_m, c: string) => c.toUpperCase()) };
+  }
+  const body = (await response.json().catch(() => null)) as { code?: string; versions?: CheckedVersion[] } | null;
+  if (!body?.code || !Array.isArray(body.versions)) return { ok: false, message: 'The server sent an answer this page does not understand.' };
+  return { ok: true, code: body.code, versions: body.versions };
+}
+
+/** The published page of a checked version, as it was frozen. */
+export function checkedVersionUrl(code: string, id: number): string {
+  return `/api/public/check/${encodeURIComponent(code)}/html?id=${id}`;
 }
 
 /** The frozen HTML of a version, for printing. */
@@ -57,17 +109,11 @@ export async function fetchDisclosure(token: string, version: number | null): Pr
   if (response.status === 404) return { state: 'missing' };
   if (!response.ok) return { state: 'error', message: await errorMessage(response, 'The disclosure could not be loaded') };
   const data = (await response.json().catch(() => null)) as PublicDisclosure | null;
-  if (!data?.content || typeof data.digest !== 'string') return { state: 'error', message: 'The server sent an answer this page does not understand.' };
+  if (!data?.content || typeof data.digest !== 'string' || !data.dealer) return { state: 'error', message: 'The server sent an answer this page does not understand.' };
   return { state: 'ok', data };
 }
 
-export interface AcknowledgementAnswer {
-  acknowledgementId: number;
-  receiptToken: string;
-  version: number;
-  digest: string;
-  acknowledgedAt: string;
-}
+export type { AcknowledgementAnswer };
 
 export type AcknowledgeOutcome =
   | { ok: true; answer: AcknowledgementAnswer }
@@ -85,7 +131,7 @@ export async function postAcknowledgement(token: string, body: { fullName: strin
   } catch {
     return { ok: false, status: 0, field: null, message: UNREACHABLE };
   }
-  if (response.status === 201) {
+  if (response.status === 201 || response.status === 200) {
     const answer = (await response.json().catch(() => null)) as AcknowledgementAnswer | null;
     if (answer?.receiptToken) return { ok: true, answer };
     return { ok: false, status: 500, field: null, message: 'The server sent an answer this page does not understand.' };

@@ -8,7 +8,9 @@ import { Button } from '@/modules/theme/ui/button';
 import { Card } from '@/modules/theme/ui/card';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Screen } from '@/modules/theme/ui/screen';
-import { Body } from '@/modules/theme/ui/text';
+import { DEALER_TEMPLATE_ADVICE } from '@/modules/disclosure/core/disclosure';
+import { ShopProfileSection } from '@/modules/shop/ui/shop-profile-form';
+import { Body, Heading } from '@/modules/theme/ui/text';
 import { TextField } from '@/modules/theme/ui/text-field';
 
 import { useSaveShopTexts, useShopTexts, type ShopTexts } from './use-shop-texts';
@@ -33,7 +35,7 @@ function problemsOf(t: ShopTexts): FieldErrors {
 /** The manager's page for the texts every new disclosure carries: the dealer's name and the warranty. */
 export function ShopTextsScreen() {
   return (
-    <AbilityGate ability="editShopTexts" title="Disclosure texts">
+    <AbilityGate ability="editShopTexts" title="Shop details and texts">
       <ShopTextsLoader />
     </AbilityGate>
   );
@@ -44,7 +46,7 @@ function ShopTextsLoader() {
   const problem = graphProblem(error);
   if (!texts) {
     return (
-      <Screen title="Disclosure texts" eyebrow="Presenting" width="form">
+      <Screen title="Shop details and texts" eyebrow="Presenting" width="form">
         {problem ? <Notice tone="error">{problem.message}</Notice> : <Loading label="Loading the texts…" />}
       </Screen>
     );
@@ -86,16 +88,19 @@ function ShopTextsEditor({ texts, onSaved }: { texts: ShopTexts; onSaved: () => 
 
   return (
     <Screen
-      title="Disclosure texts"
+      title="Shop details and texts"
       eyebrow="Presenting"
       width="form"
       headingTestID="texts-heading"
       actions={<Button label="Workshop" variant="secondary" href="/workshop" />}
     >
-      <Body tone="secondary">The dealer’s name and warranty printed on every condition disclosure a buyer reads and signs.</Body>
-      <Notice tone="caution" title="A template, not legal advice" testID="texts-legal">
-        The warranty text is a starting point. Adapt it to the consumer-protection and sales law where you sell, and have it checked there; Feltwire does not give legal advice.
+      <Body tone="secondary">Who the shop is on every paper a buyer is handed, and the texts every condition disclosure carries.</Body>
+      <Notice tone="caution" title="Templates, not legal advice" testID="texts-legal">
+        {`${DEALER_TEMPLATE_ADVICE} This advice is for you: buyers never see it.`}
       </Notice>
+      <ShopProfileSection />
+      <Heading level={2}>Disclosure texts</Heading>
+      <Body tone="secondary">The dealer’s name and warranty printed on every condition disclosure a buyer reads and signs.</Body>
       <Notice tone="info" testID="texts-applies">
         New texts appear on disclosures published from now on. A published disclosure never changes: to give a piano the new text, publish its disclosure again.
       </Notice>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { dayAndTime } from '@/modules/disclosure/ui/disclosure-format';
+import { dayAndTime, deviceLocality } from '@/modules/disclosure/ui/disclosure-format';
 import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -16,6 +16,9 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 import { JobStateTag } from './job-state-tag';
 import { useBackgroundJobs, useRetryBackgroundJob, type BackgroundJob } from './use-background-jobs';
 
+// Staff read times in their own device's zone: the shop's own tablets and desks.
+const STAFF_TIME = deviceLocality();
+
 const COLS = [
   { key: 'work', label: 'Work', flex: 2.6 },
   { key: 'state', label: 'How it stands', flex: 2.2 },
@@ -26,8 +29,8 @@ const COLS = [
 
 const triesText = (j: BackgroundJob) => `Tried ${j.attempts} of ${j.maxAttempts} ${j.maxAttempts === 1 ? 'time' : 'times'}`;
 function nextLine(j: BackgroundJob): string {
-  if (j.state === 'stuck') return `Running since ${dayAndTime(j.startedAt)}`;
-  return j.nextTryAt ? `Next try ${dayAndTime(j.nextTryAt)}` : 'No tries left';
+  if (j.state === 'stuck') return `Running since ${dayAndTime(j.startedAt, STAFF_TIME)}`;
+  return j.nextTryAt ? `Next try ${dayAndTime(j.nextTryAt, STAFF_TIME)}` : 'No tries left';
 }
 
 /** Background work that needs a manager: refunds, e-mails and hold ends that failed, gave up or stalled. */

@@ -1,6 +1,5 @@
 import { StyleSheet, View } from 'react-native';
 
-import { STAGE_LABELS } from '@/modules/pianos/core/piano';
 import { SPACE } from '@/modules/theme/core/palette';
 import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { rowTable, TableHead } from '@/modules/theme/ui/row-table';
@@ -27,10 +26,6 @@ const COLUMNS = [
   { key: 'date', label: '', flex: 1.3 },
 ] as const;
 
-function rowLabel(p: PianoRecord): string {
-  return [p.stockNumber, makerAndModel(p.maker, p.model), formatKindAndSize(p.kind, p.sizeCm), `year ${formatYear(p)}`, STAGE_LABELS[p.stage]].join(', ');
-}
-
 /** Pianos as a list of links: a table-like grid on a wide window, stacked cards on a phone. */
 export function PianoList({ pianos, dateColumn = 'received', testID }: PianoListProps) {
   const wide = useWide();
@@ -44,7 +39,6 @@ export function PianoList({ pianos, dateColumn = 'received', testID }: PianoList
           <View role="listitem" key={p.id}>
             <LinkPressable
               href={`/pianos/${p.id}`}
-              accessibilityLabel={rowLabel(p)}
               testID={`piano-row-${p.id}`}
               insetFocus={wide}
               style={({ hovered }) => [wide ? rowTable.row : [rowTable.card, styles.card], wide && index > 0 && rowTable.rule, hovered && rowTable.hover]}

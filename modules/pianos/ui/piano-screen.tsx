@@ -6,6 +6,7 @@ import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
 import { AssessmentHistory, IntakeFacts, LatestAssessment } from '@/modules/assessment/ui/components/assessment-record';
 import { DepositsPanel } from '@/modules/deposits/ui/deposits-panel';
+import { money } from '@/modules/disclosure/ui/disclosure-format';
 import { CASE_CONDITION_LABELS } from '@/modules/assessment/ui/measure-labels';
 import { useAssessmentHistory } from '@/modules/assessment/ui/use-assessment-history';
 import { useIntakeRecord } from '@/modules/assessment/ui/use-intake-record';
@@ -31,8 +32,7 @@ import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { formatDay, formatDayTime, formatKindAndSize, formatYear, makerAndModel } from './piano-format';
 import { takePianoFlash } from './piano-flash';
-import { usePiano } from './use-piano';
-import type { PianoRecord } from './use-pianos';
+import { usePiano, type PianoPage } from './use-piano';
 
 /** One piano's page: what it is, its condition and photos, where it came from, and every change to its assessment. */
 export function PianoScreen({ id }: { id: number | null }) {
@@ -83,7 +83,7 @@ export function PianoScreen({ id }: { id: number | null }) {
   );
 }
 
-function PianoRecordParts({ piano }: { piano: PianoRecord }) {
+function PianoRecordParts({ piano }: { piano: PianoPage }) {
   const wide = useWide();
   const { user } = useSession();
   const { history, error: historyError } = useAssessmentHistory(piano.id);
@@ -144,6 +144,7 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
   const workshop = <WorkshopSummary pianoId={piano.id} />;
   const sale = onFloorSide ? (
     <Section title="Deposit and sale">
+      <PriceCard piano={piano} />
       <DepositsPanel pianoId={piano.id} />
     </Section>
   ) : null;
@@ -237,11 +238,25 @@ function PianoRecordParts({ piano }: { piano: PianoRecord }) {
   );
 }
 
+/** The asking price beside the deposits; a manager sets it in "Price and margin", and it shows here at once. */
+function PriceCard({ piano }: { piano: PianoPage }) {
+  return (
+    <Card testID="piano-price-card">
+      <Body variant="label" tone="secondary">
+        Asking price
+      </Body>
+      <Body variant="title" testID="piano-price">
+        {piano.askingPriceMinor != null && piano.priceCurrency ? money(piano.askingPriceMinor, piano.priceCurrency) : 'No asking price yet'}
+      </Body>
+    </Card>
+  );
+}
+
 function Column({ children }: { children: ReactNode }) {
   return <View style={styles.column}>{children}</View>;
 }
 
-function PianoSummary({ piano }: { piano: PianoRecord }) {
+function PianoSummary({ piano }: { piano: PianoPage }) {
   return (
     <View style={styles.summary}>
       <Body variant="subheading" testID="piano-title">

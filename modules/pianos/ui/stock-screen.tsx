@@ -79,7 +79,6 @@ function StageTile({ stage, count }: { stage: Stage; count: number }) {
   return (
     <LinkPressable
       href={{ pathname: '/pianos', params: { stage } }}
-      accessibilityLabel={`${STAGE_LABELS[stage]}: ${shown} ${count === 1 ? 'piano' : 'pianos'}`}
       testID={`stage-count-${stage}`}
       style={({ hovered }) => [styles.tile, hovered && styles.tileHover]}
     >

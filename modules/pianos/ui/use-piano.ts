@@ -5,7 +5,9 @@ import type { PianoQuery, PianoQueryVariables } from '@/modules/api/ui/graphql-t
 
 import { PIANO_RECORD } from './use-pianos';
 
-export const PIANO_QUERY = withFragments(/* GraphQL */ `query Piano($id: Int) { piano(idEq: $id) { ...PianoRecord } }`, PIANO_RECORD);
+export const PIANO_QUERY = withFragments(/* GraphQL */ `query Piano($id: Int) { piano(idEq: $id) { ...PianoRecord askingPriceMinor priceCurrency } }`, PIANO_RECORD);
+
+export type PianoPage = NonNullable<PianoQuery['piano']>;
 
 export function usePiano(id: number | null) {
   const [result] = useQuery<PianoQuery, PianoQueryVariables>({

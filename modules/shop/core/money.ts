@@ -19,3 +19,12 @@ export function formatMoney(minor: number, currency: Currency): string {
   const major = minor / 10 ** digits;
   return `${currency} ${major.toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })}`;
 }
+
+export function isCurrency(value: string): value is Currency {
+  return Object.prototype.hasOwnProperty.call(CURRENCY_DIGITS, value);
+}
+
+/** Money as the shop writes it (USD 4,275.00); an unknown currency still shows its number. */
+export function moneyText(minor: number, currency: string): string {
+  return isCurrency(currency) ? formatMoney(minor, currency) : `${currency} ${minor}`;
+}

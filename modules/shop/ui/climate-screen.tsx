@@ -99,7 +99,7 @@ function ReadingForm({ onLogged }: { onLogged: () => void }) {
 
   return (
     <Card role="form" accessibilityLabel="Log a reading">
-      <Heading level={3}>Log a reading</Heading>
+      <Heading level={2}>Log a reading</Heading>
       <FieldRow>
         <TextField label="Temperature" value={temp} onChangeText={setTemp} unit="deg C" inputMode="decimal" keyboardType="numbers-and-punctuation" error={errors.temp} testID="climate-temp" />
         <TextField label="Relative humidity" value={rh} onChangeText={setRh} unit="%" inputMode="decimal" keyboardType="decimal-pad" error={errors.rh} testID="climate-rh" />

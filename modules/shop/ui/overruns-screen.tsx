@@ -2,7 +2,6 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
-import { STAGE_LABELS } from '@/modules/pianos/core/piano';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { EmptyState } from '@/modules/theme/ui/empty-state';
@@ -26,10 +25,6 @@ const COLS = [
   { key: 'items', label: 'Items over their estimate', flex: 3 },
   { key: 'cost', label: 'Estimate / cost so far', flex: 2 },
 ] as const;
-
-function rowLabel(o: Overrun): string {
-  return `${o.stockNumber}, ${STAGE_LABELS[o.stage]}, over by ${money(o.overrunMinor, o.currency)} on ${o.itemsOver.join(', ')}; estimate ${money(o.estimatedCostMinor, o.currency)}, cost so far ${money(o.actualCostMinor, o.currency)}`;
-}
 
 /** Pianos whose workshop items have cost more than their estimates, worst first. */
 export function OverrunsScreen() {
@@ -82,7 +77,6 @@ function Overruns() {
                 <View role="listitem" key={o.pianoId}>
                   <LinkPressable
                     href={`/workshop/pianos/${o.pianoId}`}
-                    accessibilityLabel={rowLabel(o)}
                     testID={`overrun-${o.pianoId}`}
                     insetFocus={wide}
                     style={({ hovered }) => [wide ? [rowTable.row, styles.row] : rowTable.card, wide && i > 0 && rowTable.rule, hovered && rowTable.hover]}

@@ -197,7 +197,7 @@ function WorkshopPage({ piano }: { piano: PianoRecord }) {
           <StageTimeline pianoId={piano.id} />
           {manager && !(stage === 'assessed' && !plan) ? (
             <View style={styles.moves}>
-              <Heading level={3}>Other moves</Heading>
+              <Heading level={2}>Other moves</Heading>
               <StageActions pianoId={piano.id} stage={stage} onMoved={() => refreshPlan()} showElsewhere={false} />
             </View>
           ) : null}
@@ -217,7 +217,7 @@ function ApproveCard({ plan, busy, onApprove }: { plan: WorkPlanView; busy: bool
   const [feedback, setFeedback] = useState<FeedbackState>(null);
   return (
     <Card role="form" accessibilityLabel="Approve the plan">
-      <Heading level={3}>Approve the plan</Heading>
+      <Heading level={2}>Approve the plan</Heading>
       <Body tone="secondary">
         {plan.items.length
           ? `Approving sends the piano to the workshop with these ${plan.items.length} items. Items can still be changed afterwards.`

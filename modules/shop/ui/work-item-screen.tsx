@@ -137,7 +137,7 @@ function WorkItemPage({ item, refresh }: { item: WorkItemDetail; refresh: () => 
   const reasonMissing = noTime && !doneReason.trim();
   const finish = (
     <Card role="region" accessibilityLabel="Done">
-      <Heading level={3}>{done ? 'Done' : 'Finished?'}</Heading>
+      <Heading level={2}>{done ? 'Done' : 'Finished?'}</Heading>
       <Body tone="secondary">
         {done
           ? 'This item is marked done. Reopen it if more work is needed.'
@@ -280,7 +280,7 @@ function TimeEntries({ item, authorName, mayCorrect, busy, onCorrect }: TimeEntr
   const [open, setOpen] = useState<number | null>(null);
   return (
     <Card role="region" accessibilityLabel="Time logged">
-      <Heading level={3}>Time logged</Heading>
+      <Heading level={2}>Time logged</Heading>
       {item.entries.length ? (
         <View role="list" testID="entries-list">
           {[...item.entries].reverse().map((e) => (
@@ -306,7 +306,7 @@ function TimeEntries({ item, authorName, mayCorrect, busy, onCorrect }: TimeEntr
                   <CorrectEntry entry={e} minutesNow={entryMinutes(e, now)} busy={busy} onCancel={() => setOpen(null)} onCorrect={onCorrect} onDone={() => setOpen(null)} />
                 ) : (
                   <View style={styles.start}>
-                    <Button label="Correct this entry" variant="quiet" onPress={() => setOpen(e.id)} accessibilityLabel={`Correct the entry of ${formatMinutes(entryMinutes(e, now))}`} testID={`entry-correct-${e.id}`} />
+                    <Button label="Correct this entry" variant="quiet" onPress={() => setOpen(e.id)} accessibilityLabel={`Correct this entry of ${formatMinutes(entryMinutes(e, now))}`} testID={`entry-correct-${e.id}`} />
                   </View>
                 )
               ) : null}

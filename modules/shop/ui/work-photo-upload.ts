@@ -2,26 +2,16 @@
 import type { PhotoArea } from '@/modules/photos/core/photo-rules';
 import { uploadPhoto, type PhotoView, type PickedPhoto } from '@/modules/photos/ui/photo-upload';
 
-export type WorkPhase = 'before' | 'after';
+import { parseWorkCaption, type WorkPhase } from '@/modules/shop/core/work-caption';
+
+export { workCaption, type WorkPhase } from '@/modules/shop/core/work-caption';
 export const WORK_PHASES = ['before', 'after'] as const;
 export const WORK_PHASE_LABELS: Record<WorkPhase, string> = { before: 'Before the work', after: 'After the work' };
 
-const CAPTION_MAX = 200;
-
-/** Photos carry no work item of their own: the caption names it, in words a gallery reader understands too. */
-export function workCaption(phase: WorkPhase, itemId: number, title: string, text: string): string {
-  const head = `${phase === 'before' ? 'Before' : 'After'} work (item ${itemId}, ${title})`;
-  const body = text.trim();
-  return (body ? `${head}: ${body}` : head).slice(0, CAPTION_MAX);
-}
-
-const CAPTION_RE = /^(Before|After) work \(item (\d+), [^)]*\)(?:: (.*))?$/s;
-
 /** The phase and the photographer's own words, when a caption belongs to this item. */
 export function readWorkCaption(caption: string | null, itemId: number): { phase: WorkPhase; text: string | null } | null {
-  const m = caption ? CAPTION_RE.exec(caption) : null;
-  if (!m || Number(m[2]) !== itemId) return null;
-  return { phase: m[1] === 'Before' ? 'before' : 'after', text: m[3] ?? null };
+  const work = parseWorkCaption(caption);
+  return work && work.itemId === itemId ? { phase: work.phase, text: work.text } : null;
 }
 
 export type WorkPhotoOutcome = { ok: true; photo: PhotoView } | { ok: false; message: string };

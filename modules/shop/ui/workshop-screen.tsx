@@ -17,6 +17,8 @@ import { Body } from '@/modules/theme/ui/text';
 import { useWide } from '@/modules/theme/ui/use-wide';
 
 import { AbilityGate } from '@/modules/accounts/ui/ability-gate';
+
+import { useIdleInWorkshop } from './use-shop-profile';
 import { formatDate } from './work-format';
 
 /** The workshop at a glance: pianos waiting for a decision, pianos in the workshop, and the way to rates, overruns and climate. */
@@ -25,6 +27,23 @@ export function WorkshopScreen() {
     <AbilityGate ability="workAtBench" title="Workshop">
       <Workshop />
     </AbilityGate>
+  );
+}
+
+/** Pianos sitting in the workshop past the shop's idle days with nothing planned: a manager's to-do. */
+function IdleNotice() {
+  const { idle } = useIdleInWorkshop();
+  if (!idle?.pianos.length) return null;
+  const n = idle.pianos.length;
+  return (
+    <Notice tone="caution" title={`${n} ${n === 1 ? 'piano has' : 'pianos have'} been in the workshop over ${idle.idleDays} days with no work items`} testID="workshop-idle">
+      <View style={styles.idleList}>
+        {idle.pianos.map((p) => (
+          <Button key={p.pianoId} label={`${p.stockNumber}, ${makerAndModel(p.maker, p.model)}: ${p.days} days`} variant="quiet" href={`/workshop/pianos/${p.pianoId}`} testID={`workshop-idle-${p.pianoId}`} />
+        ))}
+      </View>
+      <Body variant="small">Plan their work or move them on. The number of days is set under Shop details and texts.</Body>
+    </Notice>
   );
 }
 
@@ -46,6 +65,7 @@ function Workshop() {
         </>
       }
     >
+      {can('seeIdleWorkshop') ? <IdleNotice /> : null}
       {can('decidePianos') ? (
         <Section title="Waiting for a decision" description="Assessed pianos: recondition, sell as they stand, wholesale or decline. Longest waiting first.">
           <StageList stage="assessed" empty="No assessed piano is waiting." testID="workshop-assessed" />
@@ -70,7 +90,6 @@ function StageList({ stage, empty, testID }: { stage: Stage; empty: string; test
         <View role="listitem" key={p.id} style={wide ? styles.cellWide : undefined}>
           <LinkPressable
             href={`/workshop/pianos/${p.id}`}
-            accessibilityLabel={`${p.stockNumber}, ${makerAndModel(p.maker, p.model)}, in this stage since ${formatDate(p.stageChangedAt)}`}
             testID={`${testID}-${p.id}`}
             style={({ hovered }) => [styles.card, hovered && styles.hover]}
           >
@@ -90,6 +109,7 @@ function StageList({ stage, empty, testID }: { stage: Stage; empty: string; test
 }
 
 const styles = StyleSheet.create({
+  idleList: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.xs },
   list: { gap: SPACE.sm },
   listWide: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.md },
   cellWide: { flexBasis: '31%', flexGrow: 1, maxWidth: '33%' },

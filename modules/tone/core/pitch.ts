@@ -30,3 +30,43 @@ export function keyName(key: number): string {
   const octave = Math.floor((key + 8) / 12);
   return `${name}${octave}`;
 }
+
+/** Cents rounded to one decimal, half away from zero, with no "-0". */
+export function roundCents(c: number): number {
+  const r = Math.round(Math.abs(c) * 10 + 1e-9) / 10;
+  return c < 0 && r !== 0 ? -r : r;
+}
+
+const CENTS_NUMBER = new Intl.NumberFormat('en', { minimumFractionDigits: 0, maximumFractionDigits: 1 });
+// Chosen with the same digits as the number shown, so "1 cent" and "1.5 cents" (CLDR plural rules).
+const CENTS_PLURAL = new Intl.PluralRules('en', { minimumFractionDigits: 0, maximumFractionDigits: 1 });
+
+/** An amount of cents in words, one decimal at most: "1 cent", "0.8 cents", "12 cents" (the sign is dropped). */
+export function centsAmount(c: number): string {
+  const n = Math.abs(roundCents(c));
+  return `${CENTS_NUMBER.format(n)} ${CENTS_PLURAL.select(n) === 'one' ? 'cent' : 'cents'}`;
+}
+
+export interface CentsWords {
+  /** after an amount above the reference: "sharp", "above standard pitch" */
+  above: string;
+  below: string;
+  /** the whole phrase when it rounds to zero: "at standard pitch" */
+  at: string;
+}
+
+export const SHARP_FLAT: CentsWords = { above: 'sharp', below: 'flat', at: 'at pitch' };
+export const FROM_STANDARD: CentsWords = { above: 'above standard pitch', below: 'below standard pitch', at: 'at standard pitch' };
+
+/** The one way Feltwire says how far off a pitch is: "0.8 cents sharp", "1 cent below standard pitch", "at pitch". */
+export function centsOffset(c: number, words: CentsWords = SHARP_FLAT): string {
+  const r = roundCents(c);
+  if (r === 0) return words.at;
+  return `${centsAmount(r)} ${r < 0 ? words.below : words.above}`;
+}
+
+/** A signed number of cents for a table: "+0.8", "−12.0", "0.0" (a real minus sign). */
+export function signedCents(c: number): string {
+  const r = roundCents(c);
+  return `${r > 0 ? '+' : r < 0 ? '−' : ''}${Math.abs(r).toFixed(1)}`;
+}

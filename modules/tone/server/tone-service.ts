@@ -10,7 +10,7 @@ import { currentRules } from '@/modules/assessment/server/assessment-service';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import { Piano } from '@/modules/pianos/server/piano-model';
 import { analyseRecording } from '@/modules/tone/core/analyse';
-import { keyboardReport } from '@/modules/tone/core/keyboard-report';
+import { disclosureTone, keyboardReport, type DisclosureTone } from '@/modules/tone/core/keyboard-report';
 import type { RecordingView } from '@/modules/tone/core/recording';
 import { decodeWav, MAX_RECORDING_BYTES, readWavInfo, WAV_CONTENT_TYPE, type WavProblem } from '@/modules/tone/core/wav';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
@@ -124,4 +124,25 @@ export async function discardRecording(store: PhotoStore, actor: Actor, id: numb
   await ToneRecording.query().deleteById(id);
   await store.remove(recording.objectKey).catch(() => undefined);
   return id;
+}
+
+/**
+ * What a disclosure shows of a piano's play test: its newest recording in which notes were heard, as
+ * `disclosureTone` puts it (no sign-in needed: the disclosure is built on the server for publishing).
+ */
+export async function latestPlayTest(pianoId: number): Promise<{ recordedAt: string; tone: DisclosureTone } | null> {
+  const newest = await ToneRecording.query()
+    .where('piano_id', pianoId)
+    .whereExists(ToneNoteRow.query().select(1).whereColumn('tone_notes.recording_id', 'tone_recordings.id'))
+    .orderBy('recorded_at', 'desc')
+    .orderBy('id', 'desc')
+    .first();
+  if (!newest) return null;
+  const [notes, rules] = await Promise.all([ToneNoteRow.query().where('recording_id', newest.id).orderBy('position'), currentRules()]);
+  const recordedAt = iso(newest.recordedAt);
+  const report = keyboardReport(
+    notes.map((n) => ({ startS: n.startS, frequencyHz: n.frequencyHz, key: n.key, cents: n.cents, levelDb: n.levelDb })),
+    { pitchRaiseCents: rules.pitchRaiseCents },
+  );
+  return { recordedAt, tone: disclosureTone(recordedAt, report) };
 }

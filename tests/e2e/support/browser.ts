@@ -4,6 +4,8 @@ import path from 'node:path';
 
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
+import { checkNow, instrumentPage } from './axe';
+
 export const PHONE = { width: 390, height: 844 };
 export const WIDE = { width: 1280, height: 800 };
 
@@ -20,8 +22,8 @@ const REPORT_CSP = `document.addEventListener('securitypolicyviolation', (e) => 
 
 /**
  * A fresh Chromium profile per test file; each journey opens its own page. Closing it fails the file
- * when any page broke the server's content security policy. Extra flags and permissions for journeys
- * that need them (a fake microphone).
+ * when any page broke the server's content security policy. Every page of it runs axe on each screen
+ * it shows (support/axe.ts). Extra flags and permissions for journeys that need them (a fake microphone).
  */
 export async function openBrowser(extra: { args?: string[]; permissions?: string[] } = {}): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
   const dir = fs.mkdtempSync(path.join(process.env.TMPDIR ?? os.tmpdir(), 'fw-chromium-'));
@@ -33,6 +35,8 @@ export async function openBrowser(extra: { args?: string[]; permissions?: string
     permissions: extra.permissions,
   });
   const violations: string[] = [];
+  for (const page of context.pages()) instrumentPage(page, baseUrl());
+  context.on('page', (page) => instrumentPage(page, baseUrl()));
   await context.addInitScript(REPORT_CSP);
   context.on('console', (message) => {
     if (message.text().startsWith('CSP violation:')) violations.push(message.text());
@@ -62,11 +66,14 @@ export async function signIn(page: Page, email: string, password = 'feltwire-dem
   await page.goto(`${baseUrl()}/sign-in`);
   await page.getByTestId('sign-in-email').fill(email);
   await page.getByTestId('sign-in-password').fill(password);
+  await checkNow(page);
   await page.getByTestId('sign-in-submit').click();
 }
 
 export async function shot(page: Page, name: string): Promise<void> {
   const dir = path.join(process.cwd(), '.tmp', 'shots');
   fs.mkdirSync(dir, { recursive: true });
+  // Every screen a journey looks at is checked by axe as it is shown.
+  await checkNow(page);
   await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: false });
 }

@@ -88,6 +88,15 @@ const rest: BadRequest[] = [
   { name: 'acknowledgement as a form', route: 'POST /api/public/disclosures/:token/acknowledge', url: '/api/public/disclosures/{token}/acknowledge', raw: { type: 'application/x-www-form-urlencoded', body: 'fullName=Ada' } },
   { name: 'acknowledgement of an unknown token', route: 'POST /api/public/disclosures/:token/acknowledge', url: `/api/public/disclosures/${TOKEN_SHAPED}/acknowledge`, json: { fullName: 'Ada Brightwell', email: 'ada@example.test', read: true, digest: DIGEST } },
   // deposits
+  // the check of a paper's verification code
+  { name: 'check with a code too short', route: 'GET /api/public/check/:code', url: '/api/public/check/7K3Q' },
+  { name: 'check with a code of letters not in the alphabet', route: 'GET /api/public/check/:code', url: '/api/public/check/UUUU-UUUU-UUUU' },
+  { name: 'check with a NUL in the code', route: 'GET /api/public/check/:code', url: '/api/public/check/7K3Q-M9TD-20X%00' },
+  { name: 'check with a code of 300 characters', route: 'GET /api/public/check/:code', url: `/api/public/check/${'7'.repeat(300)}` },
+  { name: 'checked page without an id', route: 'GET /api/public/check/:code/html', url: '/api/public/check/7K3Q-M9TD-20XF/html' },
+  { name: 'checked page with an id of letters', route: 'GET /api/public/check/:code/html', url: '/api/public/check/7K3Q-M9TD-20XF/html?id=abc' },
+  { name: 'checked page with a code that fits no version', route: 'GET /api/public/check/:code/html', url: '/api/public/check/0000-0000-0000/html?id=1' },
+  { name: 'checked page with a malformed code', route: 'GET /api/public/check/:code/html', url: '/api/public/check/x/html?id=1' },
   { name: 'deposit without a receipt', route: 'POST /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit', json: {} },
   { name: 'deposit with an unknown receipt', route: 'POST /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit', json: { receiptToken: TOKEN_SHAPED } },
   { name: 'deposit with a receipt of a number', route: 'POST /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit', json: { receiptToken: 42 } },

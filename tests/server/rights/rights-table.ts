@@ -116,6 +116,11 @@ export const RIGHTS: Record<string, RightsRow> = {
   'query backgroundJobs': { who: MANAGER },
   'mutation retryBackgroundJob': { who: MANAGER },
 
+  // ---- shop profile: the dealer's letterhead and locality every paper carries; the workshop's idle rule
+  'query shopProfile': { who: STAFF },
+  'mutation setShopProfile': { who: MANAGER },
+  'query idleInWorkshop': { who: MANAGER },
+
   // ---- pricing
   // Anyone who reads pianos reaches it; each money field in it is checked again by role (tests/server/pricing.test.ts names them).
   'query pianoMoney': { who: STAFF },
@@ -138,6 +143,9 @@ export const RIGHTS: Record<string, RightsRow> = {
   'route GET /api/pianos/:id/floor-tag.pdf': { who: SELLERS },
   'route GET /api/acknowledgements/:id/signed.pdf': { who: SELLERS },
   // The buyer's side: anyone with the link.
+  // Anyone holding a paper checks its verification code against the published version.
+  'route GET /api/public/check/:code': { who: ANYONE },
+  'route GET /api/public/check/:code/html': { who: ANYONE },
   'route GET /api/public/disclosures/:token': { who: ANYONE },
   'route GET /api/public/disclosures/:token/html': { who: ANYONE },
   'route POST /api/public/disclosures/:token/acknowledge': { who: ANYONE },

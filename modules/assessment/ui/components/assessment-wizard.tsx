@@ -239,7 +239,7 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
           Recomputed as you type; the server grades again on submit.
         </Body>
       </View>
-      <ConditionSummary grade={grade} card={card} focus={STEP_AREAS[step]} testID="live-condition" />
+      <ConditionSummary grade={grade} card={card} focus={STEP_AREAS[step]} testID="live-condition" areaLevel={2} />
     </View>
   );
 
@@ -397,7 +397,8 @@ export function AssessmentWizard({ draft, update, refresh, restored, rules, eyeb
           </ScrollView>
           {footer}
         </View>
-        <ScrollView style={styles.panelScroll} contentContainerStyle={styles.panelScrollContent}>
+        {/* Keyboard users can scroll the condition beside the steps too. */}
+        <ScrollView style={styles.panelScroll} contentContainerStyle={styles.panelScrollContent} focusable tabIndex={0} role="region" aria-label="The condition so far">
           {gradePanel}
         </ScrollView>
       </View>

@@ -112,6 +112,8 @@ function AreaWork({ area, report, currency }: { area: AreaReport; report: Condit
 }
 
 interface ConditionSummaryProps {
+  /** the areas' heading level: 2 where the summary stands right under the screen's title */
+  areaLevel?: 2 | 3;
   grade: GradeView;
   /** the shop's rate card: the work in money; hours alone while it loads */
   card: RateCard | null;
@@ -121,7 +123,7 @@ interface ConditionSummaryProps {
 }
 
 /** The condition in Feltwire's terms: the verdict, then each area with what was found and the work it needs. */
-export function ConditionSummary({ grade, card, focus = [], testID = 'condition' }: ConditionSummaryProps) {
+export function ConditionSummary({ grade, card, focus = [], testID = 'condition', areaLevel = 3 }: ConditionSummaryProps) {
   const report = reportOf(grade, card);
   const areas = [...focus, ...AREAS.filter((a) => !focus.includes(a))];
   return (
@@ -144,7 +146,7 @@ export function ConditionSummary({ grade, card, focus = [], testID = 'condition'
         return (
           <View key={area} style={styles.area} testID={`area-${area}`}>
             <View style={styles.areaHead}>
-              <Text role="heading" aria-level={3} style={[TYPE_SCALE.subheading, styles.areaTitle]}>
+              <Text role="heading" aria-level={areaLevel} style={[TYPE_SCALE.subheading, styles.areaTitle]}>
                 {AREA_LABELS[area]}
                 {focus.includes(area) ? <Text style={[TYPE_SCALE.small, styles.focusNote]}> · this step</Text> : null}
               </Text>

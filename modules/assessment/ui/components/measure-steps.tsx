@@ -10,7 +10,7 @@ import {
   STEEL_CORROSION_LABELS,
   TUNING_PIN_LABELS,
 } from '@/modules/assessment/ui/measure-labels';
-import { cents } from '@/modules/tone/core/pitch';
+import { cents, centsOffset } from '@/modules/tone/core/pitch';
 import { PlayTestRecordings } from '@/modules/tone/ui/components/play-test-recordings';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
@@ -251,10 +251,7 @@ export function SoundboardStep({ draft, update, errorAt, rules }: StepProps) {
 export function centsText(a4: string): string | null {
   const hz = parseDecimal(a4);
   if (typeof hz !== 'number' || hz < 300 || hz > 600) return null;
-  const c = cents(hz);
-  const whole = Math.round(Math.abs(c));
-  if (whole === 0) return 'at 440 Hz';
-  return `${whole} ${whole === 1 ? 'cent' : 'cents'} ${c < 0 ? 'below' : 'above'} 440 Hz`;
+  return centsOffset(cents(hz), { above: 'above 440 Hz', below: 'below 440 Hz', at: 'at 440 Hz' });
 }
 
 export function PlayStep({ draft, update, errorAt }: StepProps) {

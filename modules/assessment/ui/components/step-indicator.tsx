@@ -31,7 +31,6 @@ export function StepIndicator({ steps, current, furthest, withProblems, onJump, 
               disabled={!reachable}
               aria-disabled={!reachable || undefined}
               aria-current={step === current ? 'step' : undefined}
-              accessibilityLabel={`Step ${i + 1} of ${steps.length}: ${STEP_TITLES[step]}${state === 'done' ? ', reached' : state === 'ahead' ? ', not reached yet' : ', this step'}${problem ? ', needs a look' : ''}`}
               onPress={() => onJump(step)}
               testID={`step-jump-${step}`}
               style={styles.hit}
@@ -47,6 +46,8 @@ export function StepIndicator({ steps, current, furthest, withProblems, onJump, 
                   {STEP_TITLES[step]}
                 </Text>
               ) : null}
+              {/* Said after what is shown, so the spoken name starts with the visible one (WCAG 2.5.3). */}
+              <Text style={styles.unseen}>{`${showNames ? '' : ` ${STEP_TITLES[step]}`}, step ${i + 1} of ${steps.length}${state === 'done' ? ', reached' : state === 'ahead' ? ', not reached yet' : ', this step'}${problem ? ', needs a look' : ''}`}</Text>
             </Pressable>
           </View>
         );
@@ -58,6 +59,7 @@ export function StepIndicator({ steps, current, furthest, withProblems, onJump, 
 const DOT = 30;
 
 const styles = StyleSheet.create({
+  unseen: { position: 'absolute', width: 1, height: 1, overflow: 'hidden', opacity: 0 },
   row: { flexDirection: 'row' },
   item: { flex: 1, minWidth: 0 },
   hit: { minHeight: LAYOUT.touchTarget, alignItems: 'center', justifyContent: 'flex-start', paddingTop: SPACE.xs, gap: SPACE.xs },

@@ -36,13 +36,16 @@ export function AcknowledgeForm({ token, disclosure, receipt, onAcknowledged, on
   const [problem, setProblem] = useState<{ title?: string; text: string } | null>(null);
   const [busy, setBusy] = useState(false);
   const dealer = disclosure.content.dealerName;
+  const when = (iso: string) => dayAndTime(iso, disclosure.dealer);
 
   if (receipt && receipt.digest === disclosure.digest) {
     return (
       <View role="region" aria-label="Your acknowledgement" style={styles.section}>
         <Heading level={2}>Your acknowledgement</Heading>
         <Notice tone="success" title={`Thank you, ${receipt.fullName}.`} testID="ack-done">
-          You acknowledged version {receipt.version} of this disclosure on {dayAndTime(receipt.acknowledgedAt)}. {dealer} will countersign it and e-mail the signed copy to {receipt.email}. Keep that e-mail: it is your record of what you were told.
+          {receipt.already
+            ? `You had already acknowledged version ${receipt.version} of this disclosure, on ${when(receipt.acknowledgedAt)}: that acknowledgement stands, once. ${dealer} countersigns it and e-mails the signed copy to ${receipt.email}.`
+            : `You acknowledged version ${receipt.version} of this disclosure on ${when(receipt.acknowledgedAt)}. ${dealer} will countersign it and e-mail the signed copy to ${receipt.email}. Keep that e-mail: it is your record of what you were told.`}
         </Notice>
       </View>
     );
@@ -67,7 +70,8 @@ export function AcknowledgeForm({ token, disclosure, receipt, onAcknowledged, on
     setBusy(false);
     if (outcome.ok) {
       const a = outcome.answer;
-      onAcknowledged({ ...a, fullName: parsed.data.fullName, email: parsed.data.email });
+      // The name and e-mail on record: the first acknowledgement's, when this buyer had sent one before.
+      onAcknowledged({ acknowledgementId: a.acknowledgementId, receiptToken: a.receiptToken, version: a.version, digest: a.digest, acknowledgedAt: a.acknowledgedAt, fullName: a.buyerName, email: a.buyerEmail, already: a.already });
       return;
     }
     if (outcome.status === 409) {
@@ -88,7 +92,7 @@ export function AcknowledgeForm({ token, disclosure, receipt, onAcknowledged, on
       <Heading level={2}>Acknowledge this disclosure</Heading>
       {receipt ? (
         <Notice tone="info" title="The disclosure was updated after you acknowledged it" testID="ack-stale">
-          You acknowledged version {receipt.version} on {dayAndTime(receipt.acknowledgedAt)}. This is version {disclosure.version}: read it, then acknowledge it again.
+          You acknowledged version {receipt.version} on {when(receipt.acknowledgedAt)}. This is version {disclosure.version}: read it, then acknowledge it again.
         </Notice>
       ) : null}
       <Card role="form" accessibilityLabel="Acknowledge this disclosure">

@@ -9,9 +9,12 @@ import { EmptyState } from '@/modules/theme/ui/empty-state';
 import { Loading, Notice } from '@/modules/theme/ui/notice';
 import { Body } from '@/modules/theme/ui/text';
 
-import { dayAndTime } from '../disclosure-format';
+import { dayAndTime, deviceLocality } from '../disclosure-format';
 import { openStaffPdf } from '../staff-documents';
 import { useAcknowledgements, useCountersign, type AcknowledgementRow } from '../use-disclosures';
+
+// Staff read times in their own device's zone: the shop's own tablets and desks.
+const STAFF_TIME = deviceLocality();
 
 interface AcknowledgementsPanelProps {
   pianoId: number;
@@ -50,7 +53,7 @@ export function AcknowledgementsPanel({ pianoId, newestVersion }: Acknowledgemen
   return (
     <View style={styles.wrap} testID="present-acknowledgements">
       {rows.length === 0 ? (
-        <EmptyState title="No acknowledgements yet">A buyer’s acknowledgement shows here a few seconds after they send it from the tablet or their own phone.</EmptyState>
+        <EmptyState title="No acknowledgements yet">Buyers acknowledge on their own phone, from the QR code or the link: an acknowledgement shows here a few seconds after they send it.</EmptyState>
       ) : (
         <View role="list" style={styles.list}>
           {rows.map((row) => {
@@ -64,11 +67,11 @@ export function AcknowledgementsPanel({ pianoId, newestVersion }: Acknowledgemen
                   </Body>
                   <Body variant="small" tone="secondary">
                     Read version {row.version}
-                    {older ? ' (an older version)' : ''} · acknowledged {dayAndTime(row.acknowledgedAt)}
+                    {older ? ' (an older version)' : ''} · acknowledged {dayAndTime(row.acknowledgedAt, STAFF_TIME)}
                   </Body>
                   {row.countersignedAt ? (
                     <Body variant="small" tone="success" testID={`ack-signed-${row.id}`}>
-                      Countersigned by {row.countersignedBy ?? 'staff'} on {dayAndTime(row.countersignedAt)}; the signed copy goes to the buyer by e-mail.
+                      Countersigned by {row.countersignedBy ?? 'staff'} on {dayAndTime(row.countersignedAt, STAFF_TIME)}; the signed copy goes to the buyer by e-mail.
                     </Body>
                   ) : (
                     <Body variant="small" tone="quiet">

@@ -29,7 +29,7 @@ interface AreaWalkthroughProps {
 /** One area at a time in large type, with big previous and next controls: a tablet handed to a buyer. */
 export function AreaWalkthrough({ disclosure, step, onStep, fill, closingExtra }: AreaWalkthroughProps) {
   const c = disclosure.content;
-  const shown = useMemo(() => shownDocument(c), [c]);
+  const shown = useMemo(() => shownDocument(c, disclosure.dealer), [c, disclosure.dealer]);
   const steps = walkSteps(disclosure);
   const at = Math.min(Math.max(step, 0), steps.length - 1);
   const { open, viewer } = usePhotoViewer(c.photos);
@@ -205,18 +205,20 @@ function StepButton({ direction, label, onPress, testID }: { direction: 'prev' |
   const narrow = useWindowDimensions().width < 600;
   const disabled = label == null;
   const next = direction === 'next';
+  // Named by what it shows (the word and the part), so what is heard matches what is read (WCAG 2.5.3).
+  const word = next ? 'Next' : narrow ? 'Back' : 'Previous';
   return (
     <Pressable
       role="button"
       aria-disabled={disabled || undefined}
       disabled={disabled}
       onPress={onPress}
-      accessibilityLabel={disabled ? (next ? 'Next: this is the last part' : 'Previous: this is the first part') : `${next ? 'Next' : 'Previous'}: ${label}`}
+      accessibilityLabel={disabled ? `${word}: this is the ${next ? 'last' : 'first'} part` : undefined}
       testID={testID}
       style={({ pressed }) => [styles.stepButton, narrow && styles.stepButtonNarrow, next ? styles.stepNext : styles.stepPrev, pressed && !disabled && (next ? styles.stepNextPressed : styles.stepPrevPressed), disabled && styles.stepDisabled]}
     >
       <Text numberOfLines={1} style={[TYPE_SCALE.subheading, { color: next ? PALETTE.vellum : PALETTE.felt }]}>
-        {next ? 'Next  →' : narrow ? '←  Back' : '←  Previous'}
+        {word}
       </Text>
       {label ? (
         <Text numberOfLines={1} style={[TYPE_SCALE.small, { color: next ? PALETTE.feltLichen : PALETTE.walnut }]}>

@@ -16,11 +16,13 @@ interface BuyerFrameProps {
   kind: string;
   /** the browser tab's title */
   documentTitle: string;
+  /** the dealer's address and contact, for the foot of the page */
+  contact?: readonly string[];
   children: ReactNode;
 }
 
 /** A public page for a buyer: the dealer's name on a band of felt, one readable column, no staff navigation. */
-export function BuyerFrame({ dealerName, kind, documentTitle, children }: BuyerFrameProps) {
+export function BuyerFrame({ dealerName, kind, documentTitle, contact, children }: BuyerFrameProps) {
   const wide = useWide();
   const insets = useSafeAreaInsets();
   useEffect(() => {
@@ -42,7 +44,17 @@ export function BuyerFrame({ dealerName, kind, documentTitle, children }: BuyerF
         <View style={[styles.column, styles.body]}>{children}</View>
       </View>
       <View role="contentinfo" style={[styles.foot, { paddingBottom: insets.bottom + SPACE.xl }]}>
-        <View style={styles.column}>
+        <View style={[styles.column, styles.footColumn]}>
+          {dealerName && contact?.length ? (
+            <View testID="buyer-dealer-contact">
+              <Body variant="bodyStrong">{dealerName}</Body>
+              {contact.map((line) => (
+                <Body key={line} variant="small" tone="secondary" selectable>
+                  {line}
+                </Body>
+              ))}
+            </View>
+          ) : null}
           {dealerName ? (
             <Body variant="small" tone="quiet">
               Shared by {dealerName} through Feltwire. This page is for the person the dealer sent it to; it is not listed anywhere.
@@ -63,5 +75,6 @@ const styles = StyleSheet.create({
   main: { flexGrow: 1, paddingHorizontal: SPACE.lg, paddingTop: SPACE.xl, paddingBottom: SPACE.xxl },
   mainWide: { paddingTop: SPACE.xxl },
   body: { gap: SPACE.xl },
+  footColumn: { gap: SPACE.md },
   foot: { paddingHorizontal: SPACE.lg, paddingTop: SPACE.lg, borderTopWidth: 1, borderTopColor: PALETTE.linen },
 });

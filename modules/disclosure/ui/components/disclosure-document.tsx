@@ -15,6 +15,8 @@ import type { DisclosurePhoto, PublicDisclosure } from '../public-disclosure';
 import { AreaDetails, PhotoStrip } from './area-details';
 import { MARK_MEANINGS } from '@/modules/assessment/core/grade';
 import { MarkTag } from '@/modules/theme/ui/mark';
+import { centsOffset } from '@/modules/tone/core/pitch';
+import { KeyboardChart } from '@/modules/tone/ui/components/keyboard-chart';
 
 import { shownDocument } from '../disclosure-view';
 import { PhotoViewer } from './photo-viewer';
@@ -42,7 +44,7 @@ export function usePhotoViewer(photos: readonly DisclosurePhoto[]) {
 /** What the buyer reads: the piano, its price, each area's condition and work, pitch, photos, warranty and notices. */
 export function DisclosureDocument({ disclosure }: { disclosure: PublicDisclosure }) {
   const c = disclosure.content;
-  const shown = useMemo(() => shownDocument(c), [c]);
+  const shown = useMemo(() => shownDocument(c, disclosure.dealer), [c, disclosure.dealer]);
   const { open, viewer } = usePhotoViewer(c.photos);
   const areaPhotos = useCallback((ids: readonly number[]) => c.photos.filter((p) => ids.includes(p.id)), [c.photos]);
   const shownInAreas = useMemo(() => new Set(shown.areas.flatMap((a) => a.photoIds)), [shown.areas]);
@@ -82,7 +84,7 @@ export function DisclosureDocument({ disclosure }: { disclosure: PublicDisclosur
         ) : null}
       </View>
 
-      {shown.pitch ? <PitchCard pitch={shown.pitch} /> : null}
+      {shown.pitch || shown.tone ? <PitchCard pitch={shown.pitch} tone={shown.tone} /> : null}
 
       {otherPhotos.length ? (
         <View role="region" aria-label="More photos" style={styles.section}>
@@ -188,22 +190,37 @@ export function MarkKey() {
   );
 }
 
-function PitchCard({ pitch }: { pitch: NonNullable<ShownDocument['pitch']> }) {
-  const off = Math.abs(pitch.cents);
+const PITCH_WORDS = { above: 'sharp', below: 'flat', at: 'at standard pitch' };
+
+function PitchCard({ pitch, tone }: { pitch: ShownDocument['pitch']; tone: ShownDocument['tone'] }) {
   return (
     <View role="region" aria-label="Measured pitch" style={styles.section}>
       <Heading level={2}>Measured pitch</Heading>
       <Card>
-        <View style={styles.pitchRow}>
-          <Body variant="title" testID="disclosure-pitch">
-            A4 = {pitch.a4Hz.toFixed(1)} Hz
-          </Body>
-          <Body variant="bodyStrong" tone="secondary">
-            {off < 0.5 ? 'at standard pitch' : `${off.toFixed(1)} cents ${pitch.cents < 0 ? 'flat' : 'sharp'}`}
-          </Body>
-        </View>
-        <Body>{pitch.text}</Body>
-        {pitch.when ? <Body tone="secondary">{pitch.when}</Body> : null}
+        {pitch ? (
+          <>
+            <View style={styles.pitchRow}>
+              <Body variant="title" testID="disclosure-pitch">
+                A4 = {pitch.a4Hz.toFixed(1)} Hz
+              </Body>
+              <Body variant="bodyStrong" tone="secondary" testID="disclosure-pitch-offset">
+                {centsOffset(pitch.cents, PITCH_WORDS)}
+              </Body>
+            </View>
+            <Body testID="disclosure-pitch-text">{pitch.text}</Body>
+            {pitch.when ? <Body tone="secondary">{pitch.when}</Body> : null}
+          </>
+        ) : null}
+        {tone ? (
+          <View style={styles.tone} testID="disclosure-tone">
+            <Heading level={3}>Pitch by key, from the play test</Heading>
+            <Body testID="disclosure-tone-when">{tone.when}</Body>
+            {tone.lines.map((line) => (
+              <Body key={line}>{line}</Body>
+            ))}
+            <KeyboardChart keys={tone.keys} title="Pitch by key" testID="disclosure-chart" />
+          </View>
+        ) : null}
         <Body variant="small" tone="quiet">
           Standard concert pitch is A4 = 440 Hz (ISO 16). A hundred cents make one semitone; a few cents either way is normal between tunings.
         </Body>
@@ -236,4 +253,5 @@ const styles = StyleSheet.create({
   keyRow: { flexDirection: 'row', alignItems: 'center', gap: SPACE.sm },
   keyText: { flex: 1, minWidth: 0 },
   pitchRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', gap: SPACE.md },
+  tone: { gap: SPACE.sm, paddingTop: SPACE.sm },
 });

@@ -6,23 +6,24 @@ import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { Body, Heading } from '@/modules/theme/ui/text';
 
 import { longDay } from '../disclosure-format';
-import { printableUrl, type PublicDisclosure } from '../public-disclosure';
+import { CODE_MEANING } from '@/modules/disclosure/core/verification';
+
+import { checkPageUrl, printableUrl, type PublicDisclosure } from '../public-disclosure';
 import { ExternalLink } from './external-link';
 
 const MONO = Platform.select({ web: 'ui-monospace, "SFMono-Regular", Menlo, Consolas, monospace', default: 'monospace' });
-// wordBreak is a web-only style react-native-web passes on: a 64-character word must wrap on a phone.
-const DIGEST_STYLE = { fontFamily: MONO, fontSize: 15, lineHeight: 22, color: PALETTE.ebony, wordBreak: 'break-all' } as TextStyle;
+const CODE_STYLE = { fontFamily: MONO, fontSize: 20, lineHeight: 28, letterSpacing: 1.5, color: PALETTE.ebony, fontWeight: '700' } as TextStyle;
 
-/** The fingerprint of a version: all 64 characters, wrapped, selectable for comparing with the signed copy. */
-export function Digest({ digest, testID }: { digest: string; testID?: string }) {
+/** A verification code as printed on the papers, selectable to copy. */
+export function VerificationCode({ code, testID }: { code: string; testID?: string }) {
   return (
-    <Text selectable style={DIGEST_STYLE} testID={testID}>
-      {digest}
+    <Text selectable style={CODE_STYLE} testID={testID}>
+      {code}
     </Text>
   );
 }
 
-/** This document's version, fingerprint, printable copy and the older versions. */
+/** This document's version, its verification code, the printable copy and the older versions. */
 export function DocumentRecord({ disclosure, token }: { disclosure: PublicDisclosure; token: string }) {
   const versions = Array.from({ length: disclosure.newestVersion }, (_, i) => disclosure.newestVersion - i);
   return (
@@ -31,16 +32,17 @@ export function DocumentRecord({ disclosure, token }: { disclosure: PublicDisclo
       <Card>
         <Body testID="disclosure-version">
           Version {disclosure.version}
-          {disclosure.isNewest ? ' (the newest)' : ` of ${disclosure.newestVersion}: not the newest`}, published on {longDay(disclosure.publishedAt)} by {disclosure.content.dealerName}.
+          {disclosure.isNewest ? ' (the newest)' : ` of ${disclosure.newestVersion}: not the newest`}, published on {longDay(disclosure.publishedAt, disclosure.dealer)} by {disclosure.content.dealerName}.
         </Body>
-        <View style={styles.digestBox}>
+        <View style={styles.codeBox}>
           <Body variant="label" tone="secondary">
-            Fingerprint (SHA-256)
+            Verification code
           </Body>
-          <Digest digest={disclosure.digest} testID="disclosure-digest" />
-          <Body variant="small" tone="quiet">
-            Worked out from every word of this version: if anything in it changed, the fingerprint would too. Your acknowledgement and the signed copy carry the same one.
+          <VerificationCode code={disclosure.verificationCode} testID="disclosure-code" />
+          <Body variant="small" tone="secondary">
+            {CODE_MEANING} The signed copy you are e-mailed carries the same code.
           </Body>
+          <ExternalLink href={checkPageUrl(disclosure.verificationCode)} label="Check a paper’s code" testID="disclosure-check-link" />
         </View>
         <ExternalLink href={printableUrl(token, disclosure.version)} label="Printable version" newTab testID="disclosure-printable" />
         {versions.length > 1 ? (
@@ -80,7 +82,7 @@ export function DocumentRecord({ disclosure, token }: { disclosure: PublicDisclo
 
 const styles = StyleSheet.create({
   section: { gap: SPACE.md },
-  digestBox: { gap: SPACE.xs, padding: SPACE.md, borderRadius: RADIUS.md, backgroundColor: PALETTE.ivory, borderWidth: 1, borderColor: PALETTE.linen },
+  codeBox: { gap: SPACE.xs, padding: SPACE.md, borderRadius: RADIUS.md, backgroundColor: PALETTE.ivory, borderWidth: 1, borderColor: PALETTE.linen },
   versions: { gap: SPACE.xs },
   versionList: { flexDirection: 'row', flexWrap: 'wrap', gap: SPACE.sm },
   versionChip: { minHeight: 44, paddingHorizontal: SPACE.md, borderRadius: RADIUS.md, borderWidth: 1.5, justifyContent: 'center', alignItems: 'center' },

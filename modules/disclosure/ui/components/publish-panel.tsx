@@ -10,8 +10,11 @@ import { EmptyState } from '@/modules/theme/ui/empty-state';
 import { Notice } from '@/modules/theme/ui/notice';
 import { Body } from '@/modules/theme/ui/text';
 
-import { longDay } from '../disclosure-format';
+import { longDay, deviceLocality } from '../disclosure-format';
 import { usePublishDisclosure, type DisclosureVersions, type Published } from '../use-disclosures';
+
+// Staff read times in their own device's zone: the shop's own tablets and desks.
+const STAFF_TIME = deviceLocality();
 
 interface PublishPanelProps {
   pianoId: number;
@@ -58,7 +61,7 @@ export function PublishPanel({ pianoId, versions, onPublished }: PublishPanelPro
       {newest ? (
         <Card>
           <Body testID="present-published">
-            Version {newest.version} is the one buyers read, published on {longDay(newest.publishedAt)}.
+            Version {newest.version} is the one buyers read, published on {longDay(newest.publishedAt, STAFF_TIME)}.
           </Body>
           <Body variant="small" tone="secondary">
             Publishing again makes a new version only if the piano’s record changed since: a new inspection, finished work, photos or the price.

@@ -27,16 +27,17 @@ interface AskingPriceFormProps {
   pianoId: number;
   priceMinor: number | null;
   currency: string | null;
-  onSaved: () => void;
+  onSaved?: () => void;
   /** what to say once saved, beyond the new price */
   savedNote?: string;
+  testID?: string;
 }
 
 /**
  * A manager sets the asking price in major units, with why; it is stored in minor units (ISO 4217).
  * Every screen that sets a price uses this form and the one mutation behind it, so the history keeps each change.
  */
-export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved, savedNote = 'Publish the disclosure again so buyers see it.' }: AskingPriceFormProps) {
+export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved, savedNote = 'Publish the disclosure again so buyers see it.', testID = 'present-price-form' }: AskingPriceFormProps) {
   const start: Currency = currency && isCurrency(currency) ? currency : 'USD';
   const [cur, setCur] = useState<Currency>(start);
   const [text, setText] = useState(priceMinor != null ? (priceMinor / 10 ** CURRENCY_DIGITS[start]).toFixed(CURRENCY_DIGITS[start]) : '');
@@ -67,11 +68,11 @@ export function AskingPriceForm({ pianoId, priceMinor, currency, onSaved, savedN
     }
     setFeedback({ tone: 'success', text: `Asking price set to ${money(minor, cur)}. ${savedNote}` });
     setReason('');
-    onSaved();
+    onSaved?.();
   };
 
   return (
-    <View style={styles.form} testID="present-price-form">
+    <View style={styles.form} testID={testID}>
       <ChoiceGroup label="Currency" options={CURRENCIES} labels={CURRENCY_LABELS} value={cur} onChange={setCur} testID="price-currency" />
       <TextField label="Asking price" unit={cur} value={text} onChangeText={setText} error={error} inputMode="decimal" keyboardType="decimal-pad" testID="price-amount" />
       <TextField label="Why" hint="Kept with the price, e.g. “first price after the work” or “60 days on the floor”." value={reason} onChangeText={setReason} error={reasonError} maxLength={200} onSubmitEditing={submit} testID="price-reason" />

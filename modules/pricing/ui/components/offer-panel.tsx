@@ -4,7 +4,7 @@ import { StyleSheet, View } from 'react-native';
 import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
-import { dayAndTime, isCurrency, money } from '@/modules/disclosure/ui/disclosure-format';
+import { dayAndTime, deviceLocality, isCurrency, money } from '@/modules/disclosure/ui/disclosure-format';
 import { OFFER_ANSWERS, OFFER_ANSWER_WORDS, type OfferAnswer } from '@/modules/pricing/core/offer-input';
 import { CURRENCY_DIGITS, toMinor } from '@/modules/shop/core/money';
 import { SPACE } from '@/modules/theme/core/palette';
@@ -19,6 +19,9 @@ import { TextField } from '@/modules/theme/ui/text-field';
 import { usePianoOffer, useRecordAnswer, type AnswerView, type OfferView } from '../use-piano-money';
 import { parseMajor } from './asking-price-form';
 import { WorkedFigure } from './worked-figure';
+
+// Staff read times in their own device's locale and zone.
+const STAFF_TIME = deviceLocality();
 
 const ANSWER_CHOICES: Record<OfferAnswer, string> = { accepted: 'Accepts', countered: 'Asks for more', agreed: 'Agreed at a figure', declined: 'Declines' };
 
@@ -83,7 +86,7 @@ function AnswerList({ answers }: { answers: AnswerView[] }) {
         <View key={a.id} role="listitem" style={styles.answer} testID="offer-answer">
           <Body variant="bodyStrong">{answerWords(a)}</Body>
           <Body variant="small" tone="secondary">
-            Offer {money(a.offerMinor, a.currency)} · recorded by {a.recordedBy}, {dayAndTime(a.recordedAt)}
+            Offer {money(a.offerMinor, a.currency)} · recorded by {a.recordedBy}, {dayAndTime(a.recordedAt, STAFF_TIME)}
             {a.note ? ` · “${a.note}”` : ''}
           </Body>
         </View>

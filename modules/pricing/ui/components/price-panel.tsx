@@ -3,7 +3,7 @@ import { StyleSheet, View } from 'react-native';
 import { can } from '@/modules/accounts/core/roles';
 import { graphProblem } from '@/modules/accounts/ui/graph-error';
 import { useSession } from '@/modules/accounts/ui/use-session';
-import { dayAndTime, money } from '@/modules/disclosure/ui/disclosure-format';
+import { dayAndTime, deviceLocality, money } from '@/modules/disclosure/ui/disclosure-format';
 import { SPACE } from '@/modules/theme/core/palette';
 import { Card } from '@/modules/theme/ui/card';
 import { FactList } from '@/modules/theme/ui/fact-list';
@@ -13,6 +13,9 @@ import { Body } from '@/modules/theme/ui/text';
 import { usePianoPrice, type PriceMoney } from '../use-piano-money';
 import { AskingPriceForm } from './asking-price-form';
 import { WorkedFigure } from './worked-figure';
+
+// Staff read times in their own device's locale and zone.
+const STAFF_TIME = deviceLocality();
 
 const orNone = (minor: number | null | undefined, currency: string | null | undefined, none: string) => (minor != null && currency ? money(minor, currency) : none);
 
@@ -90,7 +93,7 @@ function History({ data }: { data: PriceMoney }) {
                 {money(h.toMinor, h.currency)}
               </Body>
               <Body variant="small" tone="secondary">
-                {h.reason} · {h.changedBy ?? 'before price history was kept'}, {dayAndTime(h.changedAt)}
+                {h.reason} · {h.changedBy ?? 'before price history was kept'}, {dayAndTime(h.changedAt, STAFF_TIME)}
                 {h.suggestedMinor != null ? ` · suggested then ${money(h.suggestedMinor, h.currency)}` : ''}
               </Body>
             </View>

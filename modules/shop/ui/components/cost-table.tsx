@@ -99,8 +99,21 @@ export function CostTable({ rows, firstColumn, total, currency, testID }: { rows
               <Variance row={r} currency={currency} />
             </View>
           </View>
-          {r.actions ? <View style={styles.actionsRow}>{r.actions}</View> : null}
-          {r.below ? <View style={styles.below}>{r.below}</View> : null}
+          {/* A table holds only rows of cells: an item's buttons and editor are a row of one cell each. */}
+          {r.actions ? (
+            <View role="row">
+              <View role="cell" style={styles.actionsRow}>
+                {r.actions}
+              </View>
+            </View>
+          ) : null}
+          {r.below ? (
+            <View role="row">
+              <View role="cell" style={styles.below}>
+                {r.below}
+              </View>
+            </View>
+          ) : null}
         </View>
       ))}
     </View>

@@ -50,7 +50,7 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
   return (
     <View style={styles.wrap}>
       <Card role="region" accessibilityLabel="Reconditioning estimate">
-        <Heading level={3}>What reconditioning would cost</Heading>
+        <Heading level={2}>What reconditioning would cost</Heading>
         {grade ? (
           <Body tone="secondary">
             Assessed: {READINESS_WORDS[grade.readiness].toLowerCase()}
@@ -99,7 +99,7 @@ export function DecisionPanel({ grade, card, busy, onDecide }: DecisionPanelProp
         )}
       </Card>
       <Card role="form" accessibilityLabel="Decide">
-        <Heading level={3}>Decide</Heading>
+        <Heading level={2}>Decide</Heading>
         <ChoiceGroup label="What happens to this piano" options={DECISIONS} labels={DECISION_LABELS} value={decision} onChange={setDecision} testID="decision" />
         {decision ? <Body tone="secondary">{DECISION_HINTS[decision]}</Body> : null}
         {decision === 'decline' ? <Notice tone="caution">Declining cannot be undone here: the owner collects the piano.</Notice> : null}

@@ -35,7 +35,7 @@ export function FinishPanel({ itemsOpen, itemsTotal, remeasured, busy, onFinish 
   const [feedback, setFeedback] = useState<FeedbackState>(null);
   return (
     <Card role="region" accessibilityLabel="Finish in the workshop">
-      <Heading level={3}>Finish in the workshop</Heading>
+      <Heading level={2}>Finish in the workshop</Heading>
       <Check
         ok={itemsTotal > 0 && itemsOpen === 0}
         text={!itemsTotal ? 'the plan has no work items' : itemsOpen ? `every work item done (${itemsOpen} of ${itemsTotal} still open)` : 'every work item done'}

@@ -50,7 +50,7 @@ export function LogTimeForm({ blocked, busy, onLog }: LogTimeFormProps) {
   if (!open) {
     return (
       <Card role="region" accessibilityLabel="Log time by hand">
-        <Heading level={3}>Log time by hand</Heading>
+        <Heading level={2}>Log time by hand</Heading>
         <Button label="Log time worked without the timer" variant="secondary" onPress={() => setOpen(true)} disabled={!!blocked} stretch testID="log-open" />
         <Feedback state={feedback} testID="log-feedback" />
       </Card>
@@ -58,7 +58,7 @@ export function LogTimeForm({ blocked, busy, onLog }: LogTimeFormProps) {
   }
   return (
     <Card role="form" accessibilityLabel="Log time by hand">
-      <Heading level={3}>Log time by hand</Heading>
+      <Heading level={2}>Log time by hand</Heading>
       <TextField
         label="Minutes worked"
         hint="For work done without the timer."

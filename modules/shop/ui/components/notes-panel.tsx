@@ -37,7 +37,7 @@ export function NotesPanel({ notes, authorName, blocked, busy, onAdd }: NotesPan
   };
   return (
     <Card role="region" accessibilityLabel="Notes">
-      <Heading level={3}>Notes</Heading>
+      <Heading level={2}>Notes</Heading>
       {notes.length ? (
         <View role="list" testID="notes-list">
           {notes.map((n) => (

@@ -54,7 +54,7 @@ export function PartsPanel({ parts, currency, blocked, busy, onAdd }: PartsPanel
 
   return (
     <Card role="region" accessibilityLabel="Parts used">
-      <Heading level={3}>Parts used</Heading>
+      <Heading level={2}>Parts used</Heading>
       {parts.length ? (
         <View role="list" testID="parts-list">
           {parts.map((p) => (

@@ -5,24 +5,9 @@ import { LinkPressable } from '@/modules/theme/ui/link-pressable';
 import { Body } from '@/modules/theme/ui/text';
 
 import type { QueueItem } from '../use-work-queue';
-import { dueWords, formatHours, formatMinutes, priorityLabel, STATUS_LABELS } from '../work-format';
+import { dueWords, STATUS_LABELS } from '../work-format';
 import { HoursMeter } from './hours-meter';
 import { PriorityTag } from './priority-tag';
-
-function cardLabel(item: QueueItem, me: number | null, due: string | null): string {
-  return [
-    item.title,
-    `${item.stockNumber}, ${item.piano}`,
-    `priority ${priorityLabel(item.priority).toLowerCase()}`,
-    due,
-    item.assignedTo ? (item.assignedToId === me ? 'assigned to you' : `assigned to ${item.assignedTo}`) : 'unassigned',
-    `${formatMinutes(item.loggedMinutes)} logged of ${formatHours(item.estimatedHours)}`,
-    item.cautions.length ? 'has safety cautions' : null,
-    item.timerRunningFor.length ? 'timer running' : null,
-  ]
-    .filter(Boolean)
-    .join(', ');
-}
 
 /** One open item on the bench: a link to its page, with what a technician scans for first. */
 export function QueueCard({ item, me, fill }: { item: QueueItem; me: number | null; fill?: boolean }) {
@@ -34,7 +19,6 @@ export function QueueCard({ item, me, fill }: { item: QueueItem; me: number | nu
     <LinkPressable
       href={`/workshop/items/${item.id}`}
       testID={`queue-item-${item.id}`}
-      accessibilityLabel={cardLabel(item, me, due?.text ?? null)}
       style={({ hovered, pressed }) => [styles.card, fill && styles.fill, (hovered || pressed) && styles.hover, running && styles.running]}
     >
       <View style={styles.top}>

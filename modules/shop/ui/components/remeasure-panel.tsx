@@ -133,7 +133,7 @@ export function RemeasurePanel({ tasks, latest, rules, busy, onSubmit }: Remeasu
   const m = latest?.measurements ?? {};
   return (
     <Card role="form" accessibilityLabel="Re-measure">
-      <Heading level={3}>Re-measure after the work</Heading>
+      <Heading level={2}>Re-measure after the work</Heading>
       <Body tone="secondary">
         {everything ? 'Every measurement is open.' : 'The areas this plan worked on, and the play test.'} Leave a field empty to keep its last value
         {latest ? ` (from version ${latest.version})` : ''}.

@@ -31,7 +31,7 @@ export function TimerPanel({ item, me, blocked, busy, feedback, onStart, onStop 
   const loggedMinutes = item.entries.reduce((sum, e) => sum + entryMinutes(e, now), 0);
   return (
     <Card role="region" accessibilityLabel="Timer">
-      <Heading level={3}>Time</Heading>
+      <Heading level={2}>Time</Heading>
       <View style={[styles.clock, mine && styles.clockRunning]}>
         <Body variant="label" tone={mine ? 'success' : 'secondary'}>
           {mine ? 'Your timer is running' : 'Timer stopped'}

@@ -91,7 +91,7 @@ export function WorkPhotos({ itemId, pianoId, title, task, blocked }: WorkPhotos
 
   return (
     <Card role="region" accessibilityLabel="Before and after photos">
-      <Heading level={3}>Before and after</Heading>
+      <Heading level={2}>Before and after</Heading>
       {WORK_PHASES.map((ph) => {
         const list = mine.filter((x) => x.tag!.phase === ph);
         return (

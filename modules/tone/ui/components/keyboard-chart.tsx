@@ -3,7 +3,7 @@ import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Circle, G, Line, Path, Rect, Text as SvgText } from 'react-native-svg';
 
 import { keyboardChartLayout, type ChartKey } from '@/modules/tone/core/chart-layout';
-import { keyName } from '@/modules/tone/core/pitch';
+import { keyName, signedCents } from '@/modules/tone/core/pitch';
 import { FONT_FAMILIES, PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { Button } from '@/modules/theme/ui/button';
 import { Body } from '@/modules/theme/ui/text';
@@ -110,7 +110,7 @@ export function KeyboardChart({ keys, title = 'Pitch by key', height = 180, test
               <Body variant="small">{keyName(k.key)}</Body>
             </View>
             <View style={styles.cell} role="cell">
-              <Body variant="small">{signed(k.cents)}</Body>
+              <Body variant="small">{signedCents(k.cents)}</Body>
             </View>
             <View style={styles.cell} role="cell">
               <Body variant="small">{k.levelDb != null ? signed(k.levelDb) : '—'}</Body>

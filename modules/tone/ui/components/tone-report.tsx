@@ -1,6 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 
 import type { KeyboardReport, StandOutNote } from '@/modules/tone/core/keyboard-report';
+import { centsAmount, centsOffset } from '@/modules/tone/core/pitch';
 import { CAUTION_FOOTER, CAUTIONS } from '@/modules/shop/core/cautions';
 import { PALETTE, RADIUS, SPACE } from '@/modules/theme/core/palette';
 import { FactList } from '@/modules/theme/ui/fact-list';
@@ -11,14 +12,11 @@ import { KeyboardChart, signed } from './keyboard-chart';
 
 const abs1 = (n: number) => Math.abs(n).toFixed(1);
 
-/** "12.4 cents flat", "3.0 cents sharp", "in tune" (within 0.05 cents). */
-export function offsetText(c: number): string {
-  if (Math.abs(c) < 0.05) return 'at pitch';
-  return `${abs1(c)} cents ${c < 0 ? 'flat' : 'sharp'}`;
-}
+/** "12.4 cents flat", "3 cents sharp", "at pitch": the one cents formatter. */
+export const offsetText = (c: number) => centsOffset(c);
 
 function standOutText(s: StandOutNote): string {
-  const amount = s.measure === 'pitch' ? `${abs1(s.difference)} cents` : `${abs1(s.difference)} dB`;
+  const amount = s.measure === 'pitch' ? centsAmount(s.difference) : `${abs1(s.difference)} dB`;
   return `Key ${s.key} (${s.name}): ${amount} ${s.direction} than its neighbours`;
 }
 

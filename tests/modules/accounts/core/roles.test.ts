@@ -27,6 +27,13 @@ describe('roles', () => {
     ['floor', 'showToBuyers', true],
     ['technician', 'showToBuyers', false],
     ['floor', 'manageDeposits', false],
+    ['manager', 'editShopProfile', true],
+    ['floor', 'editShopProfile', false],
+    ['manager', 'setPrices', true],
+    ['floor', 'setPrices', false],
+    ['intake', 'setPrices', false],
+    ['manager', 'seeIdleWorkshop', true],
+    ['technician', 'seeIdleWorkshop', false],
   ] as const)('%s may %s: %s', (role, ability, expected) => expect(can(role, ability)).toBe(expected));
   it('gives a manager every ability, and no other role one no role has', () => {
     expect(ABILITIES.filter((a) => !can('manager', a))).toEqual([]);

@@ -175,7 +175,7 @@ describe('tuning', () => {
 
   it('states the measured pitch in words', () => {
     // ISO 16:1975 and Ellis's cent: 437.2 Hz is 1200*log2(437.2/440) = -11.05 cents
-    expect(only({ a4Hz: 437.2 }, 'tuning.pitch').finding).toBe('A4 measured at 437.2 Hz, 11 cents below standard pitch (440 Hz): a fine tuning brings it to pitch.');
+    expect(only({ a4Hz: 437.2 }, 'tuning.pitch').finding).toBe('A4 measured at 437.2 Hz, 11.1 cents below standard pitch (440 Hz): a fine tuning brings it to pitch.');
   });
 
   // common practice, no published source: loose tuning pins will not hold a tuning

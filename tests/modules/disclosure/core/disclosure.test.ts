@@ -20,6 +20,8 @@ function input(over: Partial<DisclosureInput> = {}): DisclosureInput {
     soldAsItStands: false,
     photos: [{ id: 7, area: 'soundboard', caption: 'Crack near the treble bridge' }],
     texts: { dealerName: 'Larkspur Lane Pianos', warranty: DEFAULT_WARRANTY },
+    timeZone: 'UTC',
+    tone: null,
     ...over,
   };
 }
@@ -112,17 +114,44 @@ describe('buildDisclosure', () => {
     expect(c.otherWorkDone).toEqual(['Cleaned the action']);
   });
 
-  // ISO 16:1975 and the cent (Ellis, 1885): 437.2 Hz is 11 cents below A4 = 440 Hz
+  // ISO 16:1975 and the cent (Ellis, 1885): 437.2 Hz is 1200 log2(437.2/440) = -11.05 cents from A4 = 440 Hz
   it('states the measured pitch in cents from standard pitch, and when it was measured', () => {
-    expect(buildDisclosure(input()).pitch).toEqual({ a4Hz: 437.2, cents: -11.1, text: 'A4 measured at 437.2 Hz, 11 cents below standard pitch.', measuredOn: '2026-11-28', when: 'intake' });
+    expect(buildDisclosure(input()).pitch).toEqual({ a4Hz: 437.2, cents: -11.1, text: 'A4 measured at 437.2 Hz, 11.1 cents below standard pitch.', measuredOn: '2026-11-28', when: 'intake' });
     const tuned = { task: 'fine_tuning', title: 'Fine tuning', because: ['tuning.pitch'] };
     expect(buildDisclosure(input({ workDone: [tuned] })).pitch).toMatchObject({ a4Hz: 437.2, when: 'before_work' });
     expect(buildDisclosure(input({ workDone: [tuned], after: after({ a4Hz: 440 }) })).pitch).toMatchObject({ a4Hz: 440, cents: 0, text: 'A4 measured at 440.0 Hz, at standard pitch.', measuredOn: '2026-12-02', when: 'after_work' });
   });
 
-  it('carries the notices a buyer is owed', () => {
-    const titles = buildDisclosure(input()).notices.map((n) => n.title);
-    expect(titles).toEqual(['Tuning after delivery', 'Moving a piano', 'Your own inspection', 'About this document']);
+  it('carries the notices a buyer is owed, and no advice meant for the dealer', () => {
+    const c = buildDisclosure(input());
+    expect(c.notices.map((n) => n.title)).toEqual(['Tuning after delivery', 'Moving a piano', 'Your own inspection']);
+    const words = JSON.stringify(c);
+    expect(words).not.toMatch(/template|adapt|legal advice/i);
+  });
+
+  it('gives the days of the shop, not of UTC: an intake late in the evening is the next day east of Greenwich', () => {
+    const late = { ...input().intake, submittedAt: '2026-11-28T23:30:00.000Z' };
+    expect(buildDisclosure(input({ intake: late, timeZone: 'UTC' })).inspectedOn).toBe('2026-11-28');
+    // IANA time zone database: Berlin is UTC+1 in November
+    expect(buildDisclosure(input({ intake: late, timeZone: 'Europe/Berlin' })).inspectedOn).toBe('2026-11-29');
+    expect(buildDisclosure(input({ intake: late, timeZone: 'Europe/Berlin' })).pitch?.measuredOn).toBe('2026-11-29');
+  });
+
+  it('puts a workshop photo\'s caption in the buyer\'s words, without the workshop\'s item number', () => {
+    const c = buildDisclosure(input({ photos: [{ id: 9, area: 'hammers', caption: 'After work (item 4, Reshape and voice hammers): felt shaped and voiced' }, { id: 10, area: 'keys', caption: 'Keys from above' }] }));
+    expect(c.photos.map((p) => p.caption)).toEqual(['After the work (reshape and voice hammers): felt shaped and voiced', 'Keys from above']);
+    expect(JSON.stringify(c)).not.toContain('item 4');
+  });
+
+  it('takes the play test from the newest recording: the shop\'s day, and whether it came after the work', () => {
+    const tone = { measuredOn: '2026-12-02', a4Hz: 439.1, overallCents: -3.6, pitchRaiseNeeded: false, keys: [{ key: 40, name: 'C4', cents: -3.2 }, { key: 49, name: 'A4', cents: -3.6 }] };
+    const tuned = { task: 'fine_tuning', title: 'Fine tuning', because: ['tuning.pitch'] };
+    expect(buildDisclosure(input()).tone).toBeNull();
+    expect(buildDisclosure(input({ tone: { recordedAt: '2026-11-28T09:00:00.000Z', tone } })).tone).toEqual({ ...tone, measuredOn: '2026-11-28', when: 'intake' });
+    expect(buildDisclosure(input({ workDone: [tuned], tone: { recordedAt: '2026-11-28T09:00:00.000Z', tone } })).tone?.when).toBe('before_work');
+    expect(buildDisclosure(input({ workDone: [tuned], after: after({ a4Hz: 440 }), tone: { recordedAt: '2026-12-02T16:00:00.000Z', tone } })).tone?.when).toBe('after_work');
+    // IANA: Tokyo is UTC+9, so 16:00 UTC is the next morning there
+    expect(buildDisclosure(input({ timeZone: 'Asia/Tokyo', tone: { recordedAt: '2026-12-02T16:00:00.000Z', tone } })).tone?.measuredOn).toBe('2026-12-03');
   });
 });
 
