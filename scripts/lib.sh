@@ -75,6 +75,10 @@ start_postgres() {
       if [ "$mode" = test ]; then echo "fsync = off"; echo "synchronous_commit = off"; echo "full_page_writes = off"; fi
     } | as_pg tee -a "$dir/db/postgresql.conf" >/dev/null
   fi
+  # A cluster left running on another port (an earlier run with other settings) is restarted on this one.
+  if as_pg "$bin/pg_ctl" -D "$dir/db" status >/dev/null 2>&1 && [ "$(sed -n 4p "$dir/db/postmaster.pid" 2>/dev/null)" != "$port" ]; then
+    as_pg "$bin/pg_ctl" -D "$dir/db" -m fast -w stop >/dev/null
+  fi
   if ! as_pg "$bin/pg_ctl" -D "$dir/db" status >/dev/null 2>&1; then
     log "starting PostgreSQL on 127.0.0.1:$port"
     # The port is given at each start too: a cluster made for one port is reused for another.
