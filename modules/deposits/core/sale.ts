@@ -1,5 +1,7 @@
 import { z } from '@/modules/input/core/zod';
-import { CURRENCIES, type Currency } from '@/modules/shop/core/money';
+import { sellerInput } from '@/modules/assessment/core/intake-input';
+import { pianoInput } from '@/modules/pianos/core/piano';
+import type { Currency } from '@/modules/shop/core/money';
 
 // The sale's totals, in integer minor units of one ISO 4217 currency.
 
@@ -57,12 +59,17 @@ export function saleTotals(terms: SaleTerms): SaleTotals {
 
 const minor = (what: string) => z.number().int(`${what} must be a whole number of minor units`).min(0, `${what} cannot be negative`).max(1_000_000_000, `${what} is too large`);
 
-/** The money a manager types when recording a sale; the deposit comes from the piano's own record. */
-export const saleMoneyInput = z
+/**
+ * What a manager records at the sale, in the piano's own currency: the buyer (private like a
+ * seller), the agreed price, the rate when it differs from the shop's, and the buyer's own piano taken in trade.
+ */
+export const saleInput = z
   .object({
+    buyer: sellerInput,
     agreedPriceMinor: minor('the agreed price').min(1, 'the agreed price must be more than zero'),
-    currency: z.enum(CURRENCIES as [Currency, ...Currency[]]),
-    salesTaxPct: z.number().min(0, 'must be 0-30 %').max(30, 'must be 0-30 %'),
-    tradeInAllowanceMinor: minor('the trade-in allowance').default(0),
+    /** Left out: the shop's rate from the deposit rules. */
+    salesTaxPct: z.number().min(0, 'must be 0-30 %').max(30, 'must be 0-30 %').nullish(),
+    tradeIn: z.object({ piano: pianoInput, allowanceMinor: minor('the trade-in allowance') }).strict().nullish(),
   })
   .strict();
+export type SaleInput = z.infer<typeof saleInput>;

@@ -5,20 +5,23 @@ import type Stripe from 'stripe';
 import { can, rolesThatCan } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
-import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
+import { balanceDue, defaultDepositRules, depositAmount, depositRulesInput, type Balance, type DepositRules } from '@/modules/deposits/core/deposit';
+import { saleInput, saleTotals, type SaleInput, type SaleTotals } from '@/modules/deposits/core/sale';
+import { Intake } from '@/modules/assessment/server/assessment-models';
 import { Acknowledgement, ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { disclosureByToken } from '@/modules/disclosure/server/disclosure-service';
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
 import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
 import type { JobRun } from '@/modules/jobs/server/worker';
-import { pianoName } from '@/modules/pianos/core/piano';
+import { pianoName, type PianoInput } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
+import { insertArrivedPiano } from '@/modules/pianos/server/piano-service';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { formatMoney, type Currency } from '@/modules/shop/core/money';
 import type { Clock } from '@/server/clock';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
-import { Deposit, PaymentEvent } from './deposit-models';
+import { Deposit, PaymentEvent, Sale } from './deposit-models';
 
 export interface DepositDeps {
   stripe: Stripe;
@@ -302,19 +305,94 @@ export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: 
   });
 }
 
-/** The sale: a held piano's deposit counts toward the price; the balance due is what is left. */
-export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number) {
+/** The sale's answer: the stage, the balance, and with the sale's details its record (the buyer only for those who may read it). */
+export interface RecordedSale {
+  stage: Piano['stage'];
+  balance: Balance | null;
+  sale: (SaleTotals & { id: number; tradeIn: { pianoId: number; stockNumber: string } | null; buyer: SaleBuyer | null }) | null;
+}
+interface SaleBuyer {
+  name: string;
+  email: string | null;
+  phone: string | null;
+  address: string | null;
+}
+
+/**
+ * The sale: a held piano's deposit counts toward the price; the balance due is what is left. With the
+ * sale's details it also records the buyer, the agreed price and tax, and takes the buyer's own piano
+ * in trade: that piano, its arrival and its intake are written in the same transaction as the sale.
+ */
+export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number, raw?: unknown): Promise<RecordedSale> {
   if (!can(actor.role, 'sellPianos')) throw notAllowed('record sales');
+  const details = raw == null ? null : saleInput.parse(raw);
+  if (details?.tradeIn && !can(actor.role, 'createPianos')) throw notAllowed('take a piano in trade');
   return Piano.transaction(async (trx) => {
     const holding = await Deposit.query(trx).findOne({ piano_id: pianoId, status: 'holding' }).forUpdate();
     const piano = await movePiano({ pianoId, action: 'sell', by: actor.role, userId: actor.id, why: holding ? `Deposit of ${money(holding.amountMinor, holding.currency)} applied` : null }, trx);
+    const now = deps.clock.now();
     if (holding) {
-      await holding.$query(trx).patch({ status: 'applied', closedAt: deps.clock.now().toISOString() });
+      await holding.$query(trx).patch({ status: 'applied', closedAt: now.toISOString() });
       await removeJob(trx, expiryKey(holding.id));
     }
-    const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, (piano.priceCurrency ?? 'USD') as Currency, await depositRules(trx)) : null;
-    return { stage: piano.stage, balance: b };
+    const rules = await depositRules(trx);
+    const currency = (piano.priceCurrency ?? 'USD') as Currency;
+    if (!details) {
+      const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, currency, rules) : null;
+      return { stage: piano.stage, balance: b, sale: null };
+    }
+    let tradeIn: { pianoId: number; stockNumber: string } | null = null;
+    if (details.tradeIn) tradeIn = await takeInTrade(trx, actor, details.buyer, details.tradeIn.piano, now);
+    const totals = saleTotals({
+      agreedPriceMinor: details.agreedPriceMinor,
+      currency,
+      salesTaxPct: details.salesTaxPct ?? rules.salesTaxPct,
+      depositMinor: holding?.amountMinor ?? 0,
+      tradeInAllowanceMinor: details.tradeIn?.allowanceMinor ?? 0,
+    });
+    const buyer = { name: details.buyer.name, email: details.buyer.email ?? null, phone: details.buyer.phone ?? null, address: details.buyer.address ?? null };
+    const sale = await Sale.query(trx).insertAndFetch({
+      pianoId: piano.id,
+      buyerName: buyer.name,
+      buyerEmail: buyer.email,
+      buyerPhone: buyer.phone,
+      buyerAddress: buyer.address,
+      currency,
+      agreedPriceMinor: totals.agreedPriceMinor,
+      salesTaxPct: totals.salesTaxPct,
+      taxMinor: totals.taxMinor,
+      totalMinor: totals.totalMinor,
+      depositId: holding?.id ?? null,
+      depositMinor: totals.depositMinor,
+      tradeInPianoId: tradeIn?.pianoId ?? null,
+      tradeInAllowanceMinor: totals.tradeInAllowanceMinor,
+      balanceMinor: totals.balanceMinor,
+      owedToBuyerMinor: totals.owedToBuyerMinor,
+      recordedById: actor.id,
+      recordedAt: now.toISOString(),
+    });
+    const balance: Balance = { priceMinor: totals.agreedPriceMinor, taxMinor: totals.taxMinor, totalMinor: totals.totalMinor, depositMinor: totals.depositMinor, balanceMinor: totals.balanceMinor, currency, salesTaxPct: totals.salesTaxPct };
+    return { stage: piano.stage, balance, sale: { ...totals, id: sale.id, tradeIn, buyer: can(actor.role, 'readBuyerDetails') ? buyer : null } };
   });
+}
+
+/** The buyer's own piano enters stock: received today, its intake a trade-in with the buyer as its seller. */
+async function takeInTrade(trx: Knex.Transaction, actor: Actor, buyer: SaleInput['buyer'], p: PianoInput, now: Date): Promise<{ pianoId: number; stockNumber: string }> {
+  const piano = await insertArrivedPiano(trx, actor, p);
+  await Intake.query(trx).insert({
+    pianoId: piano.id,
+    sellerName: buyer.name,
+    sellerPhone: buyer.phone ?? null,
+    sellerEmail: buyer.email ?? null,
+    sellerAddress: buyer.address ?? null,
+    acquisition: 'trade_in',
+    receivedOn: now.toISOString().slice(0, 10),
+    inspectedAt: 'showroom',
+    notes: 'Taken in trade at a sale; not inspected yet.',
+    samePianoAsId: null,
+    createdById: actor.id,
+  });
+  return { pianoId: piano.id, stockNumber: piano.stockNumber };
 }
 
 export async function depositsFor(actor: Actor, pianoId: number) {

@@ -210,6 +210,12 @@ const graphql: BadRequest[] = [
   graph('a move with a NUL in why', 'manager', 'mutation { movePiano(pianoId: {pianoId}, action: "sell", why: "x\\u0000") { id } }'),
   graph('a sale of a piano that does not exist', 'manager', 'mutation { recordSale(pianoId: 424242) }'),
   graph('a sale by a technician', 'technician', 'mutation { recordSale(pianoId: {pianoId}) }'),
+  graph('a sale at a price of zero', 'manager', 'mutation($s: SaleInput) { recordSale(pianoId: {pianoId}, sale: $s) { stage } }', { s: { buyer: { name: 'Ida Fenn' }, agreedPriceMinor: 0 } }),
+  graph('a sale with a negative trade-in allowance', 'manager', 'mutation($s: SaleInput) { recordSale(pianoId: {pianoId}, sale: $s) { stage } }', {
+    s: { buyer: { name: 'Ida Fenn' }, agreedPriceMinor: 1000, tradeIn: { piano: { maker: 'Almsbury', kind: 'upright' }, allowanceMinor: -1 } },
+  }),
+  graph('a sale to a buyer with a NUL in the name', 'manager', 'mutation($s: SaleInput) { recordSale(pianoId: {pianoId}, sale: $s) { stage } }', { s: { buyer: { name: NUL }, agreedPriceMinor: 1000 } }),
+  graph('a sale whose input is a string', 'manager', 'mutation { recordSale(pianoId: {pianoId}, sale: "paid") { stage } }'),
   graph('an intake with nothing in it', 'intake', 'mutation($i: IntakeInput!) { submitIntake(input: $i) }', { i: {} }),
   graph('an intake of a string', 'intake', 'mutation { submitIntake(input: "everything") }'),
   graph('a correction without its note', 'intake', 'mutation($i: CorrectionInput!) { correctAssessment(input: $i) }', { i: { pianoId: 1, measurements: {} } }),

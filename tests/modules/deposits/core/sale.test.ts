@@ -1,4 +1,4 @@
-import { saleMoneyInput, salesTaxMinor, saleTotals } from '@/modules/deposits/core/sale';
+import { saleInput, salesTaxMinor, saleTotals } from '@/modules/deposits/core/sale';
 
 // ISO 4217: USD has 2 minor-unit digits (cents), JPY none (whole yen).
 describe('saleTotals', () => {
@@ -47,18 +47,24 @@ describe('salesTaxMinor', () => {
   it('refuses a negative rate', () => expect(() => salesTaxMinor(1000, -1)).toThrow(RangeError));
 });
 
-describe('saleMoneyInput', () => {
-  it('defaults the allowance to zero', () => {
-    expect(saleMoneyInput.parse({ agreedPriceMinor: 349500, currency: 'USD', salesTaxPct: 8.25 })).toEqual({ agreedPriceMinor: 349500, currency: 'USD', salesTaxPct: 8.25, tradeInAllowanceMinor: 0 });
+describe('saleInput', () => {
+  const buyer = { name: 'Ada Quell', email: 'Ada@Example.test' };
+  it('takes the buyer like a seller and the trade-in with its allowance', () => {
+    expect(saleInput.parse({ buyer, agreedPriceMinor: 349500, tradeIn: { piano: { maker: 'Almsbury', kind: 'upright' }, allowanceMinor: 60000 } })).toEqual({
+      buyer: { name: 'Ada Quell', email: 'ada@example.test' },
+      agreedPriceMinor: 349500,
+      tradeIn: { piano: { maker: 'Almsbury', kind: 'upright', yearIsEstimate: false }, allowanceMinor: 60000 },
+    });
   });
   it.each([
-    [{ agreedPriceMinor: 0, currency: 'USD', salesTaxPct: 0 }, 'more than zero'],
-    [{ agreedPriceMinor: 100, currency: 'USD', salesTaxPct: 31 }, '0-30 %'],
-    [{ agreedPriceMinor: 100, currency: 'XXX', salesTaxPct: 0 }, ''],
-    [{ agreedPriceMinor: 100, currency: 'USD', salesTaxPct: 0, tradeInAllowanceMinor: -5 }, 'cannot be negative'],
-  ])('refuses %j', (raw, message) => {
-    const r = saleMoneyInput.safeParse(raw);
+    [{ buyer, agreedPriceMinor: 0 }, ['agreedPriceMinor'], 'more than zero'],
+    [{ buyer, agreedPriceMinor: 100, salesTaxPct: 31 }, ['salesTaxPct'], '0-30 %'],
+    [{ buyer: { name: '' }, agreedPriceMinor: 100 }, ['buyer', 'name'], 'is required'],
+    [{ buyer, agreedPriceMinor: 100, tradeIn: { piano: { maker: 'Almsbury', kind: 'upright' }, allowanceMinor: -5 } }, ['tradeIn', 'allowanceMinor'], 'cannot be negative'],
+    [{ buyer, agreedPriceMinor: 100.5 }, ['agreedPriceMinor'], 'whole number'],
+  ])('refuses %j', (raw, path, message) => {
+    const r = saleInput.safeParse(raw);
     expect(r.success).toBe(false);
-    expect(r.error?.issues[0]?.message).toContain(message);
+    expect(r.error?.issues[0]).toMatchObject({ path, message: expect.stringContaining(message) });
   });
 });
