@@ -1,8 +1,8 @@
 import { depositAmount } from '@/modules/deposits/core/deposit';
 
-import { startTestApi, type TestApi } from '../support/api';
+import { postGql, startTestApi, type TestApi } from '../support/api';
 import { buildIntake } from '../support/builders';
-import { buyers } from '../support/buyers';
+import { buyers, eventually } from '../support/buyers';
 import { tableStates } from '../support/db-state';
 
 let api: TestApi;
@@ -16,7 +16,7 @@ afterAll(() => api.close());
 
 const SALE = `mutation($id: Int!, $sale: SaleInput) { recordSale(pianoId: $id, sale: $sale) {
   stage balance { priceMinor taxMinor totalMinor depositMinor balanceMinor currency salesTaxPct }
-  sale { id currency agreedPriceMinor salesTaxPct taxMinor totalMinor depositMinor tradeInAllowanceMinor balanceMinor owedToBuyerMinor tradeIn { pianoId stockNumber } buyer { name email phone address } }
+  sale { id currency agreedPriceMinor salesTaxPct taxMinor totalMinor depositMinor tradeInAllowanceMinor balanceMinor owedToBuyerMinor tradeIn { pianoId stockNumber } buyer { name email phone address } balancePaidAt balancePaidHow }
 } }`;
 const buyer = { name: 'Odile Brennan', email: 'odile@example.test', phone: '+1 555 0100', address: '12 Quarry Row' };
 const tradeIn = { piano: { maker: 'Almsbury', model: 'Parlour 44', serialNumber: 'T-1187', kind: 'upright', year: 1978 }, allowanceMinor: 60000 };
@@ -113,5 +113,42 @@ describe('recording a sale', () => {
     expect(res.body.errors[0].extensions.code).toBe('BAD_INPUT');
     expect(res.body.errors[0].message).toContain(message);
     expect(await tableStates(api.knex)).toEqual(before);
+  });
+
+  it('marks the balance paid in the shop once, under two staff pressing at the same moment', async () => {
+    const { pianoId } = await b.floorPiano();
+    const sale = (await sell('manager', pianoId, { buyer, agreedPriceMinor: 180000, salesTaxPct: 6 })).body.data.recordSale.sale;
+    // 6 % of 1,800.00 is 108.00
+    expect(sale).toMatchObject({ taxMinor: 10800, balanceMinor: 190800, balancePaidAt: null });
+    const base = await api.listen();
+    const q = `mutation { markBalancePaid(saleId: ${sale.id}) { id balanceMinor balancePaidAt balancePaidHow buyer { name } } }`;
+    const [one, two] = await Promise.all([postGql(base, await api.tokenFor('floor'), q), postGql(base, await api.tokenFor('manager'), q)]);
+    const answers = [one, two];
+    const paid = answers.filter((a) => a.data?.markBalancePaid);
+    const refused = answers.filter((a) => a.errors);
+    expect(paid).toHaveLength(1);
+    expect(refused.map((a) => a.errors![0].extensions.code)).toEqual(['CONFLICT']);
+    expect(refused[0].errors![0].message).toMatch(/^The balance of this sale was already paid on \d{4}-\d{2}-\d{2}\.$/);
+    expect(paid[0].data.markBalancePaid).toMatchObject({ id: sale.id, balanceMinor: 190800, balancePaidHow: 'in_shop' });
+    const row = await api.knex('sales').where({ id: sale.id }).first();
+    expect(row.balance_paid_how).toBe('in_shop');
+    await api.jobs.settle();
+    const balanceReceipts = () => b.mailTo('odile@example.test').filter((m) => m.subject.startsWith('Receipt: balance paid for FW-'));
+    await eventually(() => balanceReceipts().length > 0);
+    await api.jobs.settle();
+    const receipts = balanceReceipts();
+    expect(receipts).toHaveLength(1);
+    expect(receipts[0].text).toContain('Sales tax (6 %) USD 108.00');
+    expect(receipts[0].text).toContain('Balance USD 1,908.00, paid ');
+  });
+
+  it('refuses to mark paid a sale with nothing due', async () => {
+    // the demo's pianos for sale are used up: the one the rolled-back sale left on the floor
+    const { id: pianoId } = await api.knex('pianos').where('stage', 'on_floor').orderBy('id').first();
+    const sale = (await sell('manager', pianoId, { buyer, agreedPriceMinor: 50000, tradeIn: { ...tradeIn, piano: { ...tradeIn.piano, serialNumber: 'T-2200' }, allowanceMinor: 70000 } })).body.data.recordSale.sale;
+    // the allowance is 200.00 more than the price: nothing due, 200.00 owed back
+    expect(sale).toMatchObject({ balanceMinor: 0, owedToBuyerMinor: 20000 });
+    const res = await api.gql(await api.tokenFor('manager'), `mutation { markBalancePaid(saleId: ${sale.id}) { id } }`);
+    expect(res.body.errors[0]).toMatchObject({ message: 'Nothing is due on this sale: the deposit and trade-in allowance cover it.', extensions: { code: 'CONFLICT' } });
   });
 });

@@ -58,4 +58,7 @@ export class Sale extends BaseModel {
   owedToBuyerMinor!: number;
   recordedById!: number;
   recordedAt!: string;
+  balancePaidAt!: string | null;
+  balancePaidHow!: 'in_shop' | 'online' | null;
+  balancePaidById!: number | null;
 }

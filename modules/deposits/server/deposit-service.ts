@@ -309,8 +309,9 @@ export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: 
 export interface RecordedSale {
   stage: Piano['stage'];
   balance: Balance | null;
-  sale: (SaleTotals & { id: number; tradeIn: { pianoId: number; stockNumber: string } | null; buyer: SaleBuyer | null }) | null;
+  sale: SaleRecord | null;
 }
+type SaleRecord = SaleTotals & { id: number; tradeIn: { pianoId: number; stockNumber: string } | null; buyer: SaleBuyer | null; balancePaidAt: string | null; balancePaidHow: string | null };
 interface SaleBuyer {
   name: string;
   email: string | null;
@@ -341,7 +342,7 @@ export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: numbe
       const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, currency, rules) : null;
       return { stage: piano.stage, balance: b, sale: null };
     }
-    let tradeIn: { pianoId: number; stockNumber: string } | null = null;
+    let tradeIn: Piano | null = null;
     if (details.tradeIn) tradeIn = await takeInTrade(trx, actor, details.buyer, details.tradeIn.piano, now);
     const totals = saleTotals({
       agreedPriceMinor: details.agreedPriceMinor,
@@ -364,7 +365,7 @@ export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: numbe
       totalMinor: totals.totalMinor,
       depositId: holding?.id ?? null,
       depositMinor: totals.depositMinor,
-      tradeInPianoId: tradeIn?.pianoId ?? null,
+      tradeInPianoId: tradeIn?.id ?? null,
       tradeInAllowanceMinor: totals.tradeInAllowanceMinor,
       balanceMinor: totals.balanceMinor,
       owedToBuyerMinor: totals.owedToBuyerMinor,
@@ -372,12 +373,12 @@ export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: numbe
       recordedAt: now.toISOString(),
     });
     const balance: Balance = { priceMinor: totals.agreedPriceMinor, taxMinor: totals.taxMinor, totalMinor: totals.totalMinor, depositMinor: totals.depositMinor, balanceMinor: totals.balanceMinor, currency, salesTaxPct: totals.salesTaxPct };
-    return { stage: piano.stage, balance, sale: { ...totals, id: sale.id, tradeIn, buyer: can(actor.role, 'readBuyerDetails') ? buyer : null } };
+    return { stage: piano.stage, balance, sale: saleRecord(actor, sale, tradeIn ?? undefined) };
   });
 }
 
 /** The buyer's own piano enters stock: received today, its intake a trade-in with the buyer as its seller. */
-async function takeInTrade(trx: Knex.Transaction, actor: Actor, buyer: SaleInput['buyer'], p: PianoInput, now: Date): Promise<{ pianoId: number; stockNumber: string }> {
+async function takeInTrade(trx: Knex.Transaction, actor: Actor, buyer: SaleInput['buyer'], p: PianoInput, now: Date): Promise<Piano> {
   const piano = await insertArrivedPiano(trx, actor, p);
   await Intake.query(trx).insert({
     pianoId: piano.id,
@@ -392,7 +393,57 @@ async function takeInTrade(trx: Knex.Transaction, actor: Actor, buyer: SaleInput
     samePianoAsId: null,
     createdById: actor.id,
   });
-  return { pianoId: piano.id, stockNumber: piano.stockNumber };
+  return piano;
+}
+
+/** Staff take the balance in the shop: marked paid once; a second mark, or one with nothing due, is refused. */
+export async function markBalancePaid(deps: DepositDeps, actor: Actor, saleId: number): Promise<SaleRecord> {
+  if (!can(actor.role, 'sellPianos')) throw notAllowed('take balance payments');
+  return Sale.transaction(async (trx) => {
+    // The row lock makes two marks take turns: the second sees the first one's payment.
+    const sale = await Sale.query(trx).findById(saleId).forUpdate();
+    if (!sale) throw notFound(`sale ${saleId}`);
+    if (sale.balancePaidAt) throw new AppError('CONFLICT', `The balance of this sale was already paid on ${sale.balancePaidAt.slice(0, 10)}.`);
+    if (sale.balanceMinor === 0) throw new AppError('CONFLICT', 'Nothing is due on this sale: the deposit and trade-in allowance cover it.');
+    const paid = await sale.$query(trx).patchAndFetch({ balancePaidAt: deps.clock.now().toISOString(), balancePaidHow: 'in_shop', balancePaidById: actor.id });
+    const piano = (await Piano.query(trx).findById(paid.pianoId))!;
+    if (paid.buyerEmail) {
+      await enqueue(trx, 'send-email', {
+        to: paid.buyerEmail,
+        subject: `Receipt: balance paid for ${piano.stockNumber}`,
+        text: `Dear ${paid.buyerName},\n\nWe received your payment of ${money(paid.balanceMinor, paid.currency)} in our shop, the balance for the ${pianoName(piano)} (stock number ${piano.stockNumber}). Nothing more is due on it.\n\n${saleLines(paid)}\n`,
+      });
+    }
+    return saleRecord(actor, paid, paid.tradeInPianoId ? await Piano.query(trx).findById(paid.tradeInPianoId) : undefined);
+  });
+}
+
+/** The sale's lines as a buyer reads them, in the sale's currency. */
+function saleLines(s: Sale): string {
+  const lines = [`Agreed price ${money(s.agreedPriceMinor, s.currency)}`, `Sales tax (${s.salesTaxPct} %) ${money(s.taxMinor, s.currency)}`, `Total ${money(s.totalMinor, s.currency)}`];
+  if (s.depositMinor) lines.push(`Deposit paid -${money(s.depositMinor, s.currency)}`);
+  if (s.tradeInAllowanceMinor) lines.push(`Trade-in allowance -${money(s.tradeInAllowanceMinor, s.currency)}`);
+  lines.push(`Balance ${money(s.balanceMinor, s.currency)}${s.balancePaidAt ? `, paid ${s.balancePaidAt.slice(0, 10)}` : ''}`);
+  return lines.join('\n');
+}
+
+function saleRecord(actor: Actor, s: Sale, traded?: { id: number; stockNumber: string }): SaleRecord {
+  return {
+    id: s.id,
+    agreedPriceMinor: s.agreedPriceMinor,
+    currency: s.currency as Currency,
+    salesTaxPct: s.salesTaxPct,
+    depositMinor: s.depositMinor,
+    tradeInAllowanceMinor: s.tradeInAllowanceMinor,
+    taxMinor: s.taxMinor,
+    totalMinor: s.totalMinor,
+    balanceMinor: s.balanceMinor,
+    owedToBuyerMinor: s.owedToBuyerMinor,
+    tradeIn: traded ? { pianoId: traded.id, stockNumber: traded.stockNumber } : null,
+    buyer: can(actor.role, 'readBuyerDetails') ? { name: s.buyerName, email: s.buyerEmail, phone: s.buyerPhone, address: s.buyerAddress } : null,
+    balancePaidAt: s.balancePaidAt,
+    balancePaidHow: s.balancePaidHow,
+  };
 }
 
 export async function depositsFor(actor: Actor, pianoId: number) {

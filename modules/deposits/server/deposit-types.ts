@@ -60,7 +60,7 @@ export const SaleInputType = input(
 
 const SaleBuyerType = object('SaleBuyer', { name: str, email: optStr, phone: optStr, address: optStr }, 'The buyer: personal data, for roles that may read it.');
 const TradeInPianoType = object('TradeInPiano', { pianoId: int, stockNumber: str });
-const SaleRecordType = object(
+export const SaleRecordType = object(
   'SaleRecord',
   {
     id: int,
@@ -75,6 +75,8 @@ const SaleRecordType = object(
     owedToBuyerMinor: { type: nn(GraphQLInt), description: 'Paid back to the buyer when the deposit and allowance exceed the total.' },
     tradeIn: TradeInPianoType,
     buyer: SaleBuyerType,
+    balancePaidAt: optStr,
+    balancePaidHow: { type: enumOf('BalancePaidHow', ['in_shop', 'online'], 'Where the balance was paid.') },
   },
   'The recorded sale’s lines in minor units; the buyer only for roles that may read buyer details.',
 );

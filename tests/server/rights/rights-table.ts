@@ -101,6 +101,7 @@ export const RIGHTS: Record<string, RightsRow> = {
   'mutation releaseHold': { who: MANAGER },
   'mutation refundDeposit': { who: MANAGER },
   'mutation recordSale': { who: SELLERS },
+  'mutation markBalancePaid': { who: SELLERS },
   'mutation setDepositRules': { who: MANAGER },
 
   // ---- photos
