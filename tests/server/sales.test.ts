@@ -20,6 +20,8 @@ const SALE = `mutation($id: Int!, $sale: SaleInput) { recordSale(pianoId: $id, s
 } }`;
 const buyer = { name: 'Odile Brennan', email: 'odile@example.test', phone: '+1 555 0100', address: '12 Quarry Row' };
 const tradeIn = { piano: { maker: 'Almsbury', model: 'Parlour 44', serialNumber: 'T-1187', kind: 'upright', year: 1978 }, allowanceMinor: 60000 };
+// A sale left with its balance due, for the online payment.
+let unpaid: { pianoId: number; token: string } | undefined;
 const sell = async (role: 'floor' | 'manager' | 'technician', pianoId: number, sale?: unknown) => api.gql(await api.tokenFor(role), SALE, { id: pianoId, sale });
 
 describe('recording a sale', () => {
@@ -60,7 +62,8 @@ describe('recording a sale', () => {
   });
 
   it('keeps the buyer’s details from floor staff, and refuses them a trade-in', async () => {
-    const { pianoId } = await b.floorPiano();
+    const { pianoId, token } = await b.floorPiano();
+    unpaid = { pianoId, token };
     const before = await tableStates(api.knex);
     const refused = await sell('floor', pianoId, { buyer, agreedPriceMinor: 250000, tradeIn });
     expect(refused.body.errors[0].extensions.code).toBe('NOT_ALLOWED');
@@ -150,5 +153,46 @@ describe('recording a sale', () => {
     expect(sale).toMatchObject({ balanceMinor: 0, owedToBuyerMinor: 20000 });
     const res = await api.gql(await api.tokenFor('manager'), `mutation { markBalancePaid(saleId: ${sale.id}) { id } }`);
     expect(res.body.errors[0]).toMatchObject({ message: 'Nothing is due on this sale: the deposit and trade-in allowance cover it.', extensions: { code: 'CONFLICT' } });
+  });
+
+  it('takes the balance online once, under webhook replays and two deliveries at the same moment', async () => {
+    const { pianoId, token } = unpaid!;
+    const sale = await api.knex('sales').where({ piano_id: pianoId }).first();
+    expect(sale).toMatchObject({ balance_minor: 250000, balance_paid_at: null });
+    const start = await api.http.post(`/api/public/disclosures/${token}/balance`);
+    expect(start.status).toBe(201);
+    expect(start.body).toMatchObject({ amountMinor: 250000, currency: 'USD' });
+    const sessionId = start.body.url.split('/').pop();
+    // a second press reuses the open checkout
+    expect((await api.http.post(`/api/public/disclosures/${token}/balance`)).body.url).toBe(start.body.url);
+    expect(api.stripeFake.sessions.get(sessionId)).toMatchObject({ amount_total: 250000, metadata: { kind: 'balance', saleId: String(sale.id) } });
+
+    const base = await api.listen();
+    api.stripeFake.pauseWebhooks();
+    expect((await b.pay(sessionId)).status).toBe(303);
+    const payload = JSON.stringify(await b.completedEvent(sessionId));
+    const deliver = async () => (await fetch(`${base}/api/webhooks/payments`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'Stripe-Signature': b.signed(payload) }, body: payload })).json();
+    const both = await Promise.all([deliver(), deliver()]);
+    expect(both.filter((a) => !a.duplicate)).toEqual([{ received: true }]);
+    expect(both.filter((a) => a.duplicate)).toHaveLength(1);
+    api.stripeFake.resumeWebhooks();
+    await api.stripeFake.idle();
+    for (let i = 0; i < 5; i += 1) expect(await deliver()).toEqual({ received: true, duplicate: true });
+
+    const paid = await api.knex('sales').where({ id: sale.id }).first();
+    expect(paid).toMatchObject({ balance_paid_how: 'online', balance_checkout_session_id: sessionId, balance_paid_by_id: null });
+    expect(paid.balance_payment_intent_id).toMatch(/^pi_/);
+    const stock = (await api.knex('pianos').where({ id: pianoId }).first()).stock_number;
+    const receipts = () => b.mailTo('odile@example.test').filter((m) => m.subject === `Receipt: balance paid for ${stock}`);
+    await eventually(() => receipts().length > 0);
+    await api.jobs.settle();
+    expect(receipts()).toHaveLength(1);
+    expect(receipts()[0].text).toContain('We received your payment of USD 2,500.00 online');
+
+    const again = await api.http.post(`/api/public/disclosures/${token}/balance`);
+    expect(again.status).toBe(409);
+    expect(again.body.error).toBe('The balance is already paid: nothing more is due.');
+    const shop = await api.gql(await api.tokenFor('manager'), `mutation { markBalancePaid(saleId: ${sale.id}) { id } }`);
+    expect(shop.body.errors[0].extensions.code).toBe('CONFLICT');
   });
 });

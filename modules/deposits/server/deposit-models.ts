@@ -61,4 +61,6 @@ export class Sale extends BaseModel {
   balancePaidAt!: string | null;
   balancePaidHow!: 'in_shop' | 'online' | null;
   balancePaidById!: number | null;
+  balanceCheckoutSessionId!: string | null;
+  balancePaymentIntentId!: string | null;
 }

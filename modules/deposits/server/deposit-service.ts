@@ -161,6 +161,7 @@ async function requestRefund(trx: Knex.Transaction, deposit: Deposit, notice: Re
 }
 
 async function onCompleted(deps: DepositDeps, trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<void> {
+  if (session.metadata?.kind === 'balance') return onBalancePaid(deps, trx, session);
   const deposit = await Deposit.query(trx).findOne({ checkout_session_id: session.id }).forUpdate();
   if (!deposit || deposit.status !== 'pending' || session.payment_status !== 'paid') return;
   // The piano's row lock makes two payments for one piano take turns: the first holds it.
@@ -406,16 +407,57 @@ export async function markBalancePaid(deps: DepositDeps, actor: Actor, saleId: n
     if (sale.balancePaidAt) throw new AppError('CONFLICT', `The balance of this sale was already paid on ${sale.balancePaidAt.slice(0, 10)}.`);
     if (sale.balanceMinor === 0) throw new AppError('CONFLICT', 'Nothing is due on this sale: the deposit and trade-in allowance cover it.');
     const paid = await sale.$query(trx).patchAndFetch({ balancePaidAt: deps.clock.now().toISOString(), balancePaidHow: 'in_shop', balancePaidById: actor.id });
-    const piano = (await Piano.query(trx).findById(paid.pianoId))!;
-    if (paid.buyerEmail) {
-      await enqueue(trx, 'send-email', {
-        to: paid.buyerEmail,
-        subject: `Receipt: balance paid for ${piano.stockNumber}`,
-        text: `Dear ${paid.buyerName},\n\nWe received your payment of ${money(paid.balanceMinor, paid.currency)} in our shop, the balance for the ${pianoName(piano)} (stock number ${piano.stockNumber}). Nothing more is due on it.\n\n${saleLines(paid)}\n`,
-      });
-    }
+    await enqueueBalanceReceipt(trx, paid);
     return saleRecord(actor, paid, paid.tradeInPianoId ? await Piano.query(trx).findById(paid.tradeInPianoId) : undefined);
   });
+}
+
+/** The buyer's receipt for the balance, queued in the transaction that recorded the payment. */
+async function enqueueBalanceReceipt(trx: Knex.Transaction, paid: Sale): Promise<void> {
+  if (!paid.buyerEmail) return;
+  const piano = (await Piano.query(trx).findById(paid.pianoId))!;
+  const where = paid.balancePaidHow === 'online' ? 'online' : 'in our shop';
+  await enqueue(trx, 'send-email', {
+    to: paid.buyerEmail,
+    subject: `Receipt: balance paid for ${piano.stockNumber}`,
+    text: `Dear ${paid.buyerName},\n\nWe received your payment of ${money(paid.balanceMinor, paid.currency)} ${where}, the balance for the ${pianoName(piano)} (stock number ${piano.stockNumber}). Nothing more is due on it.\n\n${saleLines(paid)}\n`,
+  });
+}
+
+/** A completed balance checkout: the sale is paid once, whatever the number of deliveries. */
+async function onBalancePaid(deps: DepositDeps, trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<void> {
+  const sale = await Sale.query(trx).findById(Number(session.metadata?.saleId)).forUpdate();
+  if (!sale || sale.balancePaidAt || session.payment_status !== 'paid') return;
+  const paid = await sale.$query(trx).patchAndFetch({ balancePaidAt: deps.clock.now().toISOString(), balancePaidHow: 'online', balancePaymentIntentId: String(session.payment_intent) });
+  await enqueueBalanceReceipt(trx, paid);
+}
+
+/** The buyer pays the balance online from their disclosure link: a second checkout, for the sale's balance. */
+export async function startBalancePayment(deps: DepositDeps, token: string): Promise<{ url: string; amountMinor: number; currency: string }> {
+  const { link } = await disclosureByToken(token);
+  const sale = await Sale.query().findOne({ piano_id: link.pianoId });
+  if (!sale) throw new AppError('NOT_FOUND', 'No sale is recorded for this piano yet.');
+  if (sale.balancePaidAt) throw new AppError('CONFLICT', 'The balance is already paid: nothing more is due.');
+  if (sale.balanceMinor === 0) throw new AppError('CONFLICT', 'Nothing is due: the deposit and trade-in allowance cover the sale.');
+  if (sale.balanceCheckoutSessionId) {
+    const open = await deps.stripe.checkout.sessions.retrieve(sale.balanceCheckoutSessionId);
+    if (open.status === 'open' && open.url) return { url: open.url, amountMinor: sale.balanceMinor, currency: sale.currency };
+  }
+  const piano = (await Piano.query().findById(sale.pianoId))!;
+  // Keyed on the checkout it replaces: two presses at once send one key and get one session.
+  const session = await deps.stripe.checkout.sessions.create(
+    {
+      mode: 'payment',
+      ...(sale.buyerEmail ? { customer_email: sale.buyerEmail } : {}),
+      line_items: [{ quantity: 1, price_data: { currency: sale.currency.toLowerCase(), unit_amount: sale.balanceMinor, product_data: { name: `Balance for ${piano.stockNumber}, ${pianoName(piano)}` } } }],
+      success_url: `${deps.publicUrl}/d/${token}`,
+      cancel_url: `${deps.publicUrl}/d/${token}`,
+      metadata: { kind: 'balance', saleId: String(sale.id), pianoId: String(piano.id), stockNumber: piano.stockNumber },
+    },
+    { idempotencyKey: `balance-checkout-sale-${sale.id}-after-${sale.balanceCheckoutSessionId ?? 'none'}` },
+  );
+  await Sale.query().patch({ balanceCheckoutSessionId: session.id }).where({ id: sale.id }).whereNull('balance_paid_at');
+  return { url: session.url!, amountMinor: sale.balanceMinor, currency: sale.currency };
 }
 
 /** The sale's lines as a buyer reads them, in the sale's currency. */

@@ -95,6 +95,8 @@ const rest: BadRequest[] = [
   { name: 'deposit as text', route: 'POST /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit', raw: { type: 'text/plain', body: 'receiptToken' } },
   { name: 'deposit over 4 KB', route: 'POST /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit', json: { receiptToken: 'x'.repeat(5000) } },
   { name: 'deposit on an unknown token', route: 'POST /api/public/disclosures/:token/deposit', url: `/api/public/disclosures/${TOKEN_SHAPED}/deposit`, json: { receiptToken: TOKEN_SHAPED } },
+  { name: 'balance on an unknown token', route: 'POST /api/public/disclosures/:token/balance', url: `/api/public/disclosures/${TOKEN_SHAPED}/balance` },
+  { name: 'balance of a piano not sold yet', route: 'POST /api/public/disclosures/:token/balance', url: '/api/public/disclosures/{token}/balance' },
   { name: 'deposit status without a session', route: 'GET /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit' },
   { name: 'deposit status of a session of the wrong shape', route: 'GET /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit?session=%00%00' },
   { name: 'deposit status of an unknown session', route: 'GET /api/public/disclosures/:token/deposit', url: '/api/public/disclosures/{token}/deposit?session=cs_test_unknown_session_1' },

@@ -144,6 +144,7 @@ export const RIGHTS: Record<string, RightsRow> = {
   'route POST /api/public/disclosures/:token/acknowledge': { who: ANYONE },
   'route GET /api/public/disclosures/:token/deposit': { who: ANYONE },
   'route POST /api/public/disclosures/:token/deposit': { who: ANYONE },
+  'route POST /api/public/disclosures/:token/balance': { who: ANYONE },
   'route GET /api/public/receipts/:token.pdf': { who: ANYONE },
   'route POST /api/webhooks/payments': { who: ANYONE },
 
