@@ -7,7 +7,7 @@ import type { User } from '@/modules/accounts/server/user-model';
 import type { PhotoStore } from '@/modules/photos/server/photo-store';
 import type { DisclosureDeps } from '@/modules/disclosure/server/disclosure-service';
 import type { PricingDeps } from '@/modules/pricing/server/pricing-service';
-import { handlePaymentWebhook, publicDepositStatus, startDeposit, type DepositDeps } from '@/modules/deposits/server/deposit-service';
+import { handlePaymentWebhook, publicDepositStatus, startBalancePayment, startDeposit, type DepositDeps } from '@/modules/deposits/server/deposit-service';
 import type Stripe from 'stripe';
 
 import { authRouter, configurePassport, inboxGuard, requireUser, type AuthOptions } from './auth';
@@ -89,6 +89,9 @@ export function createApp(deps: AppDeps): express.Express {
   });
   app.post('/api/public/disclosures/:token/deposit', publicWrites, jsonBody('4kb'), async (req, res) => {
     res.status(201).json(await startDeposit(deposits, req.params.token, req.body));
+  });
+  app.post('/api/public/disclosures/:token/balance', publicWrites, async (req, res) => {
+    res.status(201).json(await startBalancePayment(deposits, req.params.token));
   });
   app.get('/api/public/disclosures/:token/deposit', async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');

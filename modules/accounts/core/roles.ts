@@ -26,6 +26,8 @@ export const ABILITIES = [
   'decidePianos',
   // assessment
   'readSellerDetails',
+  /** A buyer's name and contact details recorded at the sale: personal data, read like a seller's. */
+  'readBuyerDetails',
   /** Take a piano in: its intake, its inspection and corrections of it. */
   'assess',
   'setGradeRules',
@@ -79,7 +81,7 @@ export const ABILITIES = [
 export type Ability = (typeof ABILITIES)[number];
 
 const RIGHTS: Record<Role, readonly Ability[]> = {
-  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'assess', 'uploadPhotos', 'readWorkCosts', 'recordTone', 'readToneResults', 'readOffers', 'answerOffers'],
+  intake: ['readPianos', 'createPianos', 'readSellerDetails', 'readBuyerDetails', 'assess', 'uploadPhotos', 'readWorkCosts', 'recordTone', 'readToneResults', 'readOffers', 'answerOffers'],
   technician: ['readPianos', 'uploadPhotos', 'remeasure', 'readWorkCosts', 'workAtBench', 'correctOwnTime', 'recordTone', 'readToneResults'],
   floor: ['readPianos', 'sellPianos', 'showToBuyers', 'recordTone', 'readToneResults'],
   manager: ABILITIES,

@@ -162,11 +162,15 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       caseNotes: p.caseNotes ?? null,
     };
     let piano: Piano;
+    let waiting: Intake | null = null;
     if (input.pianoId != null) {
       // A piano logged before its inspection: the intake completes its record.
       const existing = await Piano.query(trx).findById(input.pianoId).forUpdate();
       if (!existing) throw notFound(`piano ${input.pianoId}`);
-      if (existing.stage !== 'received' || (await Intake.query(trx).findOne({ piano_id: existing.id }))) {
+      // A piano taken in trade at a sale has its intake waiting, uninspected: the inspection completes it.
+      waiting = (await Intake.query(trx).findOne({ piano_id: existing.id })) ?? null;
+      const assessed = waiting ? await Assessment.query(trx).where('piano_id', existing.id).resultSize() : 0;
+      if (existing.stage !== 'received' || assessed) {
         throw new AppError('CONFLICT', `${existing.stockNumber} already has its intake: correct its assessment instead.`, 'pianoId');
       }
       piano = await existing.$query(trx).patchAndFetch(details);
@@ -174,8 +178,7 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       piano = await Piano.query(trx).insertAndFetch({ ...details, createdById: actor.id });
       await recordArrival(trx, piano, actor.id, actor.role);
     }
-    await Intake.query(trx).insert({
-      pianoId: piano.id,
+    const intake = {
       sellerName: input.seller.name,
       sellerPhone: input.seller.phone ?? null,
       sellerEmail: input.seller.email ?? null,
@@ -185,8 +188,9 @@ export async function submitIntake(actor: Actor, raw: unknown): Promise<Submitte
       inspectedAt: input.inspectedAt,
       notes: input.notes ?? null,
       samePianoAsId: input.samePianoAs ?? null,
-      createdById: actor.id,
-    });
+    };
+    if (waiting) await waiting.$query(trx).patch(intake);
+    else await Intake.query(trx).insert({ ...intake, pianoId: piano.id, createdById: actor.id });
     const assessment = await insertAssessment(trx, actor, piano.id, 1, input.measurements, grade, null);
     // The inspection is in: the piano moves on from received.
     await movePiano({ pianoId: piano.id, action: 'submit_assessment', by: actor.role, userId: actor.id }, trx);

@@ -149,7 +149,7 @@ export const IntakeRecordType = object('IntakeRecord', {
   notes: { type: GraphQLString, description: 'Internal notes; for roles that read seller details.' },
 });
 
-const SellerInputType = input('SellerInput', { name: nn(GraphQLString), phone: GraphQLString, email: GraphQLString, address: GraphQLString });
+export const SellerInputType = input('SellerInput', { name: nn(GraphQLString), phone: GraphQLString, email: GraphQLString, address: GraphQLString });
 const IntakePianoInputType = input('IntakePianoInput', {
   maker: nn(GraphQLString),
   model: GraphQLString,

@@ -2,6 +2,8 @@ import { z } from '@/modules/input/core/zod';
 
 import { CURRENCY_DIGITS, roundMinor, toMinor, type Currency } from '@/modules/shop/core/money';
 
+import { salesTaxMinor } from './sale';
+
 // Shop rules for deposits and the balance at sale: shop defaults, set by a manager.
 /** Where a deposit stands: paid and holding the piano, applied at the sale, or ended otherwise. */
 export const DEPOSIT_STATUSES = ['pending', 'holding', 'applied', 'released', 'expired', 'refunding', 'refunded', 'cancelled'] as const;
@@ -48,9 +50,9 @@ export interface Balance {
   salesTaxPct: number;
 }
 
-/** Balance due at sale: price + sales tax - deposit. Tax is rounded once, on the price, half away from zero. */
+/** Balance due at sale: price + sales tax - deposit. Tax is rounded once, on the price, half away from zero (`salesTaxMinor`). */
 export function balanceDue(priceMinor: number, depositMinor: number, currency: Currency, rules: DepositRules = defaultDepositRules): Balance {
-  const taxMinor = roundMinor((priceMinor * rules.salesTaxPct) / 100);
+  const taxMinor = salesTaxMinor(priceMinor, rules.salesTaxPct);
   const totalMinor = priceMinor + taxMinor;
   return { priceMinor, taxMinor, totalMinor, depositMinor, balanceMinor: totalMinor - depositMinor, currency, salesTaxPct: rules.salesTaxPct };
 }

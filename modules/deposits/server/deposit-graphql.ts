@@ -4,8 +4,8 @@ import { stageType } from '@/modules/pianos/server/piano-graphql';
 import type { GraphDomain } from '@/server/graphql/domain';
 import { nn } from '@/server/graphql/types';
 
-import { depositRules, depositsFor, recordSale, refundDeposit, releaseHold, setDepositRules } from './deposit-service';
-import { DepositRulesInputType, DepositRulesType, DepositType, PianoDepositsType, saleType } from './deposit-types';
+import { depositRules, depositsFor, markBalancePaid, recordSale, refundDeposit, releaseHold, setDepositRules } from './deposit-service';
+import { DepositRulesInputType, DepositRulesType, DepositType, PianoDepositsType, SaleInputType, SaleRecordType, saleType } from './deposit-types';
 
 const int = { type: new GraphQLNonNull(GraphQLInt) };
 const asJson = (d: { $toJson: () => unknown }) => d.$toJson();
@@ -23,7 +23,12 @@ export const depositsGraph: GraphDomain = {
       resolve: async (_r, a: { depositId: number; refund: boolean; why?: string }, ctx) => asJson(await releaseHold(ctx.deposits, ctx.user, a.depositId, a.refund, a.why)),
     },
     refundDeposit: { type: nn(DepositType), args: { depositId: int }, resolve: async (_r, a: { depositId: number }, ctx) => asJson(await refundDeposit(ctx.deposits, ctx.user, a.depositId)) },
-    recordSale: { type: nn(saleType(stageType(typeOf))), args: { pianoId: int }, resolve: (_r, a: { pianoId: number }, ctx) => recordSale(ctx.deposits, ctx.user, a.pianoId) },
+    recordSale: {
+      type: nn(saleType(stageType(typeOf))),
+      args: { pianoId: int, sale: { type: SaleInputType } },
+      resolve: (_r, a: { pianoId: number; sale?: unknown }, ctx) => recordSale(ctx.deposits, ctx.user, a.pianoId, a.sale),
+    },
+    markBalancePaid: { type: nn(SaleRecordType), description: 'Staff took the balance in the shop.', args: { saleId: int }, resolve: (_r, a: { saleId: number }, ctx) => markBalancePaid(ctx.deposits, ctx.user, a.saleId) },
     setDepositRules: { type: nn(DepositRulesType), args: { rules: { type: nn(DepositRulesInputType) } }, resolve: (_r, a: { rules: unknown }, ctx) => setDepositRules(ctx.user, a.rules) },
   }),
 };

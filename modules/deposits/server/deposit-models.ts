@@ -34,3 +34,33 @@ export class PaymentEvent extends BaseModel {
   eventId!: string;
   type!: string;
 }
+
+/** A recorded sale. The buyer's details are personal data: served only to roles with `readBuyerDetails`. */
+export class Sale extends BaseModel {
+  static tableName = 'sales';
+  static hasUpdatedAt = false;
+  id!: number;
+  pianoId!: number;
+  buyerName!: string;
+  buyerPhone!: string | null;
+  buyerEmail!: string | null;
+  buyerAddress!: string | null;
+  currency!: string;
+  agreedPriceMinor!: number;
+  salesTaxPct!: number;
+  taxMinor!: number;
+  totalMinor!: number;
+  depositId!: number | null;
+  depositMinor!: number;
+  tradeInPianoId!: number | null;
+  tradeInAllowanceMinor!: number;
+  balanceMinor!: number;
+  owedToBuyerMinor!: number;
+  recordedById!: number;
+  recordedAt!: string;
+  balancePaidAt!: string | null;
+  balancePaidHow!: 'in_shop' | 'online' | null;
+  balancePaidById!: number | null;
+  balanceCheckoutSessionId!: string | null;
+  balancePaymentIntentId!: string | null;
+}

@@ -5,14 +5,17 @@ import type Stripe from 'stripe';
 import { can, rolesThatCan } from '@/modules/accounts/core/roles';
 import type { Actor } from '@/modules/accounts/server/user-service';
 import { User } from '@/modules/accounts/server/user-model';
-import { balanceDue, depositRulesInput, type DepositRules } from '@/modules/deposits/core/deposit';
+import { balanceDue, depositRulesInput, type Balance, type DepositRules } from '@/modules/deposits/core/deposit';
+import { saleInput, saleTotals, type SaleInput, type SaleTotals } from '@/modules/deposits/core/sale';
+import { Intake } from '@/modules/assessment/server/assessment-models';
 import { Acknowledgement, ShopSetting } from '@/modules/disclosure/server/disclosure-models';
 import { disclosureByToken } from '@/modules/disclosure/server/disclosure-service';
 import type { QueuedMail, RefundNotice } from '@/modules/jobs/core/job-kinds';
 import { enqueue, JobFailure, removeJob } from '@/modules/jobs/server/queue';
 import type { JobRun } from '@/modules/jobs/server/worker';
-import { pianoName } from '@/modules/pianos/core/piano';
+import { pianoName, type PianoInput } from '@/modules/pianos/core/piano';
 import { Piano } from '@/modules/pianos/server/piano-model';
+import { insertArrivedPiano } from '@/modules/pianos/server/piano-service';
 import { movePiano } from '@/modules/pianos/server/stage-service';
 import { verificationCode } from '@/modules/disclosure/core/verification';
 import { formatDayTime, type DealerLocality } from '@/modules/shop/core/dealer-time';
@@ -21,7 +24,7 @@ import { shopLocality } from '@/modules/shop/server/shop-profile-service';
 import type { Clock } from '@/server/clock';
 import { AppError, badInput, notAllowed, notFound } from '@/server/errors';
 
-import { Deposit, PaymentEvent } from './deposit-models';
+import { Deposit, PaymentEvent, Sale } from './deposit-models';
 import { depositRules, publicDepositTerms } from './deposit-rules';
 
 export { depositRules, publicDepositTerms } from './deposit-rules';
@@ -153,6 +156,7 @@ async function requestRefund(trx: Knex.Transaction, deposit: Deposit, notice: Re
 }
 
 async function onCompleted(deps: DepositDeps, trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<void> {
+  if (session.metadata?.kind === 'balance') return onBalancePaid(deps, trx, session);
   const deposit = await Deposit.query(trx).findOne({ checkout_session_id: session.id }).forUpdate();
   if (!deposit || deposit.status !== 'pending' || session.payment_status !== 'paid') return;
   // The piano's row lock makes two payments for one piano take turns: the first holds it.
@@ -298,19 +302,186 @@ export async function refundDeposit(deps: DepositDeps, actor: Actor, depositId: 
   });
 }
 
-/** The sale: a held piano's deposit counts toward the price; the balance due is what is left. */
-export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number) {
+/** The sale's answer: the stage, the balance, and with the sale's details its record (the buyer only for those who may read it). */
+export interface RecordedSale {
+  stage: Piano['stage'];
+  balance: Balance | null;
+  sale: SaleRecord | null;
+}
+type SaleRecord = SaleTotals & { id: number; tradeIn: { pianoId: number; stockNumber: string } | null; buyer: SaleBuyer | null; balancePaidAt: string | null; balancePaidHow: string | null };
+interface SaleBuyer {
+  name: string;
+  email: string | null;
+  phone: string | null;
+  address: string | null;
+}
+
+/**
+ * The sale: a held piano's deposit counts toward the price; the balance due is what is left. With the
+ * sale's details it also records the buyer, the agreed price and tax, and takes the buyer's own piano
+ * in trade: that piano, its arrival and its intake are written in the same transaction as the sale.
+ */
+export async function recordSale(deps: DepositDeps, actor: Actor, pianoId: number, raw?: unknown): Promise<RecordedSale> {
   if (!can(actor.role, 'sellPianos')) throw notAllowed('record sales');
+  const details = raw == null ? null : saleInput.parse(raw);
+  if (details?.tradeIn && !can(actor.role, 'createPianos')) throw notAllowed('take a piano in trade');
   return Piano.transaction(async (trx) => {
     const holding = await Deposit.query(trx).findOne({ piano_id: pianoId, status: 'holding' }).forUpdate();
     const piano = await movePiano({ pianoId, action: 'sell', by: actor.role, userId: actor.id, why: holding ? `Deposit of ${money(holding.amountMinor, holding.currency)} applied` : null }, trx);
+    const now = deps.clock.now();
     if (holding) {
-      await holding.$query(trx).patch({ status: 'applied', closedAt: deps.clock.now().toISOString() });
+      await holding.$query(trx).patch({ status: 'applied', closedAt: now.toISOString() });
       await removeJob(trx, expiryKey(holding.id));
     }
-    const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, (piano.priceCurrency ?? 'USD') as Currency, await depositRules(trx)) : null;
-    return { stage: piano.stage, balance: b };
+    const rules = await depositRules(trx);
+    const currency = (piano.priceCurrency ?? 'USD') as Currency;
+    if (!details) {
+      const b = piano.askingPriceMinor != null ? balanceDue(piano.askingPriceMinor, holding?.amountMinor ?? 0, currency, rules) : null;
+      return { stage: piano.stage, balance: b, sale: null };
+    }
+    let tradeIn: Piano | null = null;
+    if (details.tradeIn) tradeIn = await takeInTrade(trx, actor, details.buyer, details.tradeIn.piano, now);
+    const totals = saleTotals({
+      agreedPriceMinor: details.agreedPriceMinor,
+      currency,
+      salesTaxPct: details.salesTaxPct ?? rules.salesTaxPct,
+      depositMinor: holding?.amountMinor ?? 0,
+      tradeInAllowanceMinor: details.tradeIn?.allowanceMinor ?? 0,
+    });
+    const buyer = { name: details.buyer.name, email: details.buyer.email ?? null, phone: details.buyer.phone ?? null, address: details.buyer.address ?? null };
+    const sale = await Sale.query(trx).insertAndFetch({
+      pianoId: piano.id,
+      buyerName: buyer.name,
+      buyerEmail: buyer.email,
+      buyerPhone: buyer.phone,
+      buyerAddress: buyer.address,
+      currency,
+      agreedPriceMinor: totals.agreedPriceMinor,
+      salesTaxPct: totals.salesTaxPct,
+      taxMinor: totals.taxMinor,
+      totalMinor: totals.totalMinor,
+      depositId: holding?.id ?? null,
+      depositMinor: totals.depositMinor,
+      tradeInPianoId: tradeIn?.id ?? null,
+      tradeInAllowanceMinor: totals.tradeInAllowanceMinor,
+      balanceMinor: totals.balanceMinor,
+      owedToBuyerMinor: totals.owedToBuyerMinor,
+      recordedById: actor.id,
+      recordedAt: now.toISOString(),
+    });
+    const balance: Balance = { priceMinor: totals.agreedPriceMinor, taxMinor: totals.taxMinor, totalMinor: totals.totalMinor, depositMinor: totals.depositMinor, balanceMinor: totals.balanceMinor, currency, salesTaxPct: totals.salesTaxPct };
+    return { stage: piano.stage, balance, sale: saleRecord(actor, sale, tradeIn ?? undefined) };
   });
+}
+
+/** The buyer's own piano enters stock: received today, its intake a trade-in with the buyer as its seller. */
+async function takeInTrade(trx: Knex.Transaction, actor: Actor, buyer: SaleInput['buyer'], p: PianoInput, now: Date): Promise<Piano> {
+  const piano = await insertArrivedPiano(trx, actor, p);
+  await Intake.query(trx).insert({
+    pianoId: piano.id,
+    sellerName: buyer.name,
+    sellerPhone: buyer.phone ?? null,
+    sellerEmail: buyer.email ?? null,
+    sellerAddress: buyer.address ?? null,
+    acquisition: 'trade_in',
+    receivedOn: now.toISOString().slice(0, 10),
+    inspectedAt: 'showroom',
+    notes: 'Taken in trade at a sale; not inspected yet.',
+    samePianoAsId: null,
+    createdById: actor.id,
+  });
+  return piano;
+}
+
+/** Staff take the balance in the shop: marked paid once; a second mark, or one with nothing due, is refused. */
+export async function markBalancePaid(deps: DepositDeps, actor: Actor, saleId: number): Promise<SaleRecord> {
+  if (!can(actor.role, 'sellPianos')) throw notAllowed('take balance payments');
+  return Sale.transaction(async (trx) => {
+    // The row lock makes two marks take turns: the second sees the first one's payment.
+    const sale = await Sale.query(trx).findById(saleId).forUpdate();
+    if (!sale) throw notFound(`sale ${saleId}`);
+    if (sale.balancePaidAt) throw new AppError('CONFLICT', `The balance of this sale was already paid on ${sale.balancePaidAt.slice(0, 10)}.`);
+    if (sale.balanceMinor === 0) throw new AppError('CONFLICT', 'Nothing is due on this sale: the deposit and trade-in allowance cover it.');
+    const paid = await sale.$query(trx).patchAndFetch({ balancePaidAt: deps.clock.now().toISOString(), balancePaidHow: 'in_shop', balancePaidById: actor.id });
+    await enqueueBalanceReceipt(trx, paid);
+    return saleRecord(actor, paid, paid.tradeInPianoId ? await Piano.query(trx).findById(paid.tradeInPianoId) : undefined);
+  });
+}
+
+/** The buyer's receipt for the balance, queued in the transaction that recorded the payment. */
+async function enqueueBalanceReceipt(trx: Knex.Transaction, paid: Sale): Promise<void> {
+  if (!paid.buyerEmail) return;
+  const piano = (await Piano.query(trx).findById(paid.pianoId))!;
+  const where = paid.balancePaidHow === 'online' ? 'online' : 'in our shop';
+  await enqueue(trx, 'send-email', {
+    to: paid.buyerEmail,
+    subject: `Receipt: balance paid for ${piano.stockNumber}`,
+    text: `Dear ${paid.buyerName},\n\nWe received your payment of ${money(paid.balanceMinor, paid.currency)} ${where}, the balance for the ${pianoName(piano)} (stock number ${piano.stockNumber}). Nothing more is due on it.\n\n${saleLines(paid)}\n`,
+  });
+}
+
+/** A completed balance checkout: the sale is paid once, whatever the number of deliveries. */
+async function onBalancePaid(deps: DepositDeps, trx: Knex.Transaction, session: Stripe.Checkout.Session): Promise<void> {
+  const sale = await Sale.query(trx).findById(Number(session.metadata?.saleId)).forUpdate();
+  if (!sale || sale.balancePaidAt || session.payment_status !== 'paid') return;
+  const paid = await sale.$query(trx).patchAndFetch({ balancePaidAt: deps.clock.now().toISOString(), balancePaidHow: 'online', balancePaymentIntentId: String(session.payment_intent) });
+  await enqueueBalanceReceipt(trx, paid);
+}
+
+/** The buyer pays the balance online from their disclosure link: a second checkout, for the sale's balance. */
+export async function startBalancePayment(deps: DepositDeps, token: string): Promise<{ url: string; amountMinor: number; currency: string }> {
+  const { link } = await disclosureByToken(token);
+  const sale = await Sale.query().findOne({ piano_id: link.pianoId });
+  if (!sale) throw new AppError('NOT_FOUND', 'No sale is recorded for this piano yet.');
+  if (sale.balancePaidAt) throw new AppError('CONFLICT', 'The balance is already paid: nothing more is due.');
+  if (sale.balanceMinor === 0) throw new AppError('CONFLICT', 'Nothing is due: the deposit and trade-in allowance cover the sale.');
+  if (sale.balanceCheckoutSessionId) {
+    const open = await deps.stripe.checkout.sessions.retrieve(sale.balanceCheckoutSessionId);
+    if (open.status === 'open' && open.url) return { url: open.url, amountMinor: sale.balanceMinor, currency: sale.currency };
+  }
+  const piano = (await Piano.query().findById(sale.pianoId))!;
+  // Keyed on the checkout it replaces: two presses at once send one key and get one session.
+  const session = await deps.stripe.checkout.sessions.create(
+    {
+      mode: 'payment',
+      ...(sale.buyerEmail ? { customer_email: sale.buyerEmail } : {}),
+      line_items: [{ quantity: 1, price_data: { currency: sale.currency.toLowerCase(), unit_amount: sale.balanceMinor, product_data: { name: `Balance for ${piano.stockNumber}, ${pianoName(piano)}` } } }],
+      success_url: `${deps.publicUrl}/d/${token}`,
+      cancel_url: `${deps.publicUrl}/d/${token}`,
+      metadata: { kind: 'balance', saleId: String(sale.id), pianoId: String(piano.id), stockNumber: piano.stockNumber },
+    },
+    { idempotencyKey: `balance-checkout-sale-${sale.id}-after-${sale.balanceCheckoutSessionId ?? 'none'}` },
+  );
+  await Sale.query().patch({ balanceCheckoutSessionId: session.id }).where({ id: sale.id }).whereNull('balance_paid_at');
+  return { url: session.url!, amountMinor: sale.balanceMinor, currency: sale.currency };
+}
+
+/** The sale's lines as a buyer reads them, in the sale's currency. */
+function saleLines(s: Sale): string {
+  const lines = [`Agreed price ${money(s.agreedPriceMinor, s.currency)}`, `Sales tax (${s.salesTaxPct} %) ${money(s.taxMinor, s.currency)}`, `Total ${money(s.totalMinor, s.currency)}`];
+  if (s.depositMinor) lines.push(`Deposit paid -${money(s.depositMinor, s.currency)}`);
+  if (s.tradeInAllowanceMinor) lines.push(`Trade-in allowance -${money(s.tradeInAllowanceMinor, s.currency)}`);
+  lines.push(`Balance ${money(s.balanceMinor, s.currency)}${s.balancePaidAt ? `, paid ${s.balancePaidAt.slice(0, 10)}` : ''}`);
+  return lines.join('\n');
+}
+
+function saleRecord(actor: Actor, s: Sale, traded?: { id: number; stockNumber: string }): SaleRecord {
+  return {
+    id: s.id,
+    agreedPriceMinor: s.agreedPriceMinor,
+    currency: s.currency as Currency,
+    salesTaxPct: s.salesTaxPct,
+    depositMinor: s.depositMinor,
+    tradeInAllowanceMinor: s.tradeInAllowanceMinor,
+    taxMinor: s.taxMinor,
+    totalMinor: s.totalMinor,
+    balanceMinor: s.balanceMinor,
+    owedToBuyerMinor: s.owedToBuyerMinor,
+    tradeIn: traded ? { pianoId: traded.id, stockNumber: traded.stockNumber } : null,
+    buyer: can(actor.role, 'readBuyerDetails') ? { name: s.buyerName, email: s.buyerEmail, phone: s.buyerPhone, address: s.buyerAddress } : null,
+    balancePaidAt: s.balancePaidAt,
+    balancePaidHow: s.balancePaidHow,
+  };
 }
 
 export async function depositsFor(actor: Actor, pianoId: number) {

@@ -101,6 +101,7 @@ export const RIGHTS: Record<string, RightsRow> = {
   'mutation releaseHold': { who: MANAGER },
   'mutation refundDeposit': { who: MANAGER },
   'mutation recordSale': { who: SELLERS },
+  'mutation markBalancePaid': { who: SELLERS },
   'mutation setDepositRules': { who: MANAGER },
 
   // ---- photos
@@ -151,6 +152,7 @@ export const RIGHTS: Record<string, RightsRow> = {
   'route POST /api/public/disclosures/:token/acknowledge': { who: ANYONE },
   'route GET /api/public/disclosures/:token/deposit': { who: ANYONE },
   'route POST /api/public/disclosures/:token/deposit': { who: ANYONE },
+  'route POST /api/public/disclosures/:token/balance': { who: ANYONE },
   'route GET /api/public/receipts/:token.pdf': { who: ANYONE },
   'route POST /api/webhooks/payments': { who: ANYONE },
 
