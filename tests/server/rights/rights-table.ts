@@ -138,6 +138,8 @@ export const RIGHTS: Record<string, RightsRow> = {
   'route GET /api/pianos/:id/floor-tag.pdf': { who: SELLERS },
   'route GET /api/acknowledgements/:id/signed.pdf': { who: SELLERS },
   // The buyer's side: anyone with the link.
+  // The catalogue of pianos on the floor: public, built from published disclosures only.
+  'route GET /api/public/pianos': { who: ANYONE },
   'route GET /api/public/disclosures/:token': { who: ANYONE },
   'route GET /api/public/disclosures/:token/html': { who: ANYONE },
   'route POST /api/public/disclosures/:token/acknowledge': { who: ANYONE },
