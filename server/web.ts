@@ -8,7 +8,7 @@ const HASHED = /^\/(_expo\/static|assets)\//;
 const FOR_A_YEAR = 'public, max-age=31536000, immutable';
 // The buyer's pages have a bundle of their own (scripts/build-web.sh): a phone reading a disclosure
 // downloads no staff screens.
-const BUYER_PAGES = /^\/d\/[^/]+(\/deposit)?\/?$/;
+const BUYER_PAGES = /^(\/d\/[^/]+(\/deposit)?|\/pianos-for-sale)\/?$/;
 
 /** Serves dist/: hashed files compressed ahead of time when the browser takes that, every other page path the app's page. */
 export function mountWeb(app: express.Express, dir: string, apiPrefixes: string[]): void {

@@ -60,6 +60,8 @@ export interface CatalogueEntry {
 }
 
 export interface CataloguePage {
+  /** the dealer's name as the listed disclosures publish it; null with none listed */
+  dealerName: string | null;
   pianos: CatalogueEntry[];
   total: number;
   offset: number;

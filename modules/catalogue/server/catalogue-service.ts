@@ -60,5 +60,5 @@ export async function catalogue(deps: CatalogueDeps, raw: unknown): Promise<Cata
   );
   // Past the last page the window count is gone with the rows; count again only then.
   const total = rows.length ? Number(rows[0].total) : offset > 0 ? Number((await query.clone().clearSelect().clearOrder().offset(0).limit(1).select(knex.raw('count(*) over () as total')))[0]?.total ?? 0) : 0;
-  return { pianos, total, offset, pageSize: CATALOGUE_PAGE };
+  return { dealerName: rows[0]?.content.dealerName ?? null, pianos, total, offset, pageSize: CATALOGUE_PAGE };
 }
