@@ -32,7 +32,7 @@ const PRICE = `mutation($i: AskingPriceChangeInput!) { changeAskingPrice(input: 
 const COSTS = `query($id: Int!) { pianoMoney(pianoId: $id) { allowanceMinor costBasisMinor marginMinor reconActualMinor priceHistory { fromMinor toMinor reason changedBy } } }`;
 
 async function submit(over: Json = {}) {
-  return (await call('intake', 'mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake(over) })).submitIntake as { pianoId: number; stockNumber: string };
+  return (await call('intake', 'mutation($input: IntakeInput!) { submitIntake(input: $input) { pianoId stockNumber } }', { input: buildIntake(over) })).submitIntake as { pianoId: number; stockNumber: string };
 }
 
 describe('the trade-in offer after an inspection', () => {
@@ -180,7 +180,7 @@ describe('asking prices and their history', () => {
     await api.advance(60_000);
     await call('manager', PRICE, { i: { pianoId, askingPriceMinor: 309500, currency: 'USD', reason: 'Sixty days on the floor' } });
     // The disclosure desk's field takes the same path.
-    await call('manager', 'mutation($i: JSON!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 299500, currency: 'USD', reason: 'Matched at the desk' } });
+    await call('manager', 'mutation($i: AskingPriceInput!) { setAskingPrice(input: $i) { askingPriceMinor } }', { i: { pianoId, askingPriceMinor: 299500, currency: 'USD', reason: 'Matched at the desk' } });
     // The same price again changes nothing.
     await call('manager', PRICE, { i: { pianoId, askingPriceMinor: 299500, currency: 'USD', reason: 'Again' } });
     const history = (await call('manager', COSTS, { id: pianoId })).pianoMoney.priceHistory;

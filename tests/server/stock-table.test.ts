@@ -18,7 +18,7 @@ let traded: { pianoId: number; offerMinor: number };
 beforeAll(async () => {
   api = await startTestApi();
   // One trade-in of our own: accepted at the offer, then priced.
-  const { pianoId } = (await call('mutation($input: JSON!) { submitIntake(input: $input) }', { input: buildIntake({ piano: { maker: 'Quorrel', model: 'Salon 121', serialNumber: 'QS-55123', kind: 'upright', sizeCm: 121, yearFrom: 1990, yearTo: 1994 } }) }, 'intake')).submitIntake;
+  const { pianoId } = (await call('mutation($input: IntakeInput!) { submitIntake(input: $input) { pianoId stockNumber } }', { input: buildIntake({ piano: { maker: 'Quorrel', model: 'Salon 121', serialNumber: 'QS-55123', kind: 'upright', sizeCm: 121, yearFrom: 1990, yearTo: 1994 } }) }, 'intake')).submitIntake;
   const offer = (await call('query($id: Int!) { pianoMoney(pianoId: $id) { offer { offer { offerMinor } } } }', { id: pianoId }, 'intake')).pianoMoney.offer.offer;
   await call('mutation($i: OfferAnswerInput!) { recordOfferAnswer(input: $i) { id } }', { i: { pianoId, answer: 'accepted', offeredMinor: offer.offerMinor } }, 'intake');
   await call('mutation($i: AskingPriceChangeInput!) { changeAskingPrice(input: $i) { pianoId } }', { i: { pianoId, askingPriceMinor: 289500, currency: 'USD', reason: 'First price' } });
