@@ -50,6 +50,8 @@ export const DEMO_PIANOS: DemoPiano[] = [
   { maker: 'Marrowfield', model: 'Spinet 91', serialNumber: 'MF-06650', year: 1979, yearIsEstimate: true, kind: 'upright', sizeCm: 91, finish: 'walnut', stage: 'on_floor', story: { inspection: 'fair', remeasured: 'not_hammers' } },
   { maker: 'Solenne', model: 'Model 3', serialNumber: 'SO-15520', year: 1992, yearIsEstimate: false, kind: 'upright', sizeCm: 121, finish: 'mahogany', stage: 'held', story: { inspection: 'poor_play', sellAsIsWhy: 'The buyer wants it as a project piano to restore himself; told what it needs and priced for it.' } },
   { maker: 'Wendell Kestrel', model: 'Boudoir', serialNumber: 'WK-8102', year: 1964, yearIsEstimate: true, kind: 'grand', sizeCm: 150, finish: 'satin black', stage: 'sold', story: { inspection: 'worn', remeasured: 'all' } },
+  // On the floor for the catalogue's journey alone (no other journey changes it).
+  { maker: 'Almsbury', model: 'Study 114', serialNumber: 'AL-415903', year: 2015, yearIsEstimate: false, kind: 'upright', sizeCm: 114, finish: 'satin walnut', stage: 'on_floor', story: { inspection: 'fair', remeasured: 'all' } },
 ];
 
 // The road each demo piano took to its stage, with the action that made each move.

@@ -21,13 +21,13 @@ import { compiledExecution } from './graphql/compiled-execution';
 import { graphqlRoute } from './graphql/http';
 import { plainResponse } from './graphql/plain-response';
 import { buildSchema } from './graphql/schema';
-import { publicWriteLimit } from './rate-limits';
+import { publicReadLimit, publicWriteLimit } from './rate-limits';
 import { errorHandler, jsonBody, routeNotFound } from './requests';
 import { uploadsRouter } from './uploads';
 import { mountWeb } from './web';
 import type { Mailer } from './mail';
 import { inboxRouter, type MailFake } from './mail-fake';
-import { documentsRouter, publicRouter } from './public-routes';
+import { catalogueRouter, documentsRouter, publicRouter } from './public-routes';
 import { stockRouter } from './stock-routes';
 
 export interface AppDeps {
@@ -97,6 +97,7 @@ export function createApp(deps: AppDeps): express.Express {
     res.setHeader('Cache-Control', 'no-store');
     res.json(await publicDepositStatus(req.params.token, String(req.query.session ?? '')));
   });
+  app.use('/api/public', catalogueRouter({ photos: deps.photos }, publicReadLimit(limits.publicReads)));
   app.use('/api/public', publicRouter(disclosure, publicWrites));
   app.use('/api', uploadsRouter(pp, deps.photos));
   app.use('/api', documentsRouter(pp, disclosure));

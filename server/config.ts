@@ -4,12 +4,15 @@ import path from 'node:path';
 export interface Limits {
   signIn: { failuresPerAddress: number; failuresPerAccount: number; windowMinutes: number };
   publicWrites: { perAddress: number; windowMinutes: number };
+  publicReads: { perAddress: number; windowMinutes: number };
 }
 
 // A person who mistypes a password a few times never reaches these; a guessing script soon does.
 export const DEFAULT_LIMITS: Limits = {
   signIn: { failuresPerAddress: 20, failuresPerAccount: 10, windowMinutes: 15 },
   publicWrites: { perAddress: 30, windowMinutes: 10 },
+  // A buyer paging through the catalogue and changing filters stays far below this.
+  publicReads: { perAddress: 300, windowMinutes: 10 },
 };
 
 export interface Config {
@@ -52,6 +55,10 @@ function limitsConfig(env: NodeJS.ProcessEnv): Limits {
     publicWrites: {
       perAddress: count(env, 'PUBLIC_WRITES_PER_ADDRESS', d.publicWrites.perAddress),
       windowMinutes: count(env, 'PUBLIC_WRITE_WINDOW_MINUTES', d.publicWrites.windowMinutes),
+    },
+    publicReads: {
+      perAddress: count(env, 'PUBLIC_READS_PER_ADDRESS', d.publicReads.perAddress),
+      windowMinutes: count(env, 'PUBLIC_READ_WINDOW_MINUTES', d.publicReads.windowMinutes),
     },
   };
 }

@@ -14,6 +14,7 @@ import {
   type DisclosureDeps,
 } from '@/modules/disclosure/server/disclosure-service';
 
+import { catalogue, type CatalogueDeps } from '@/modules/catalogue/server/catalogue-service';
 import { publicDepositTerms } from '@/modules/deposits/server/deposit-service';
 
 import { requireAbility, requireUser } from './auth';
@@ -57,6 +58,17 @@ export function publicRouter(deps: DisclosureDeps, writeLimit: Middleware): Rout
   router.get('/receipts/:token.pdf', async (req, res) => {
     const { pdf, filename } = await signedPdfByReceipt(deps, req.params.token);
     sendPdf(res, pdf, filename);
+  });
+  return router;
+}
+
+/** The public list of pianos on the floor: anyone may read it, a page at a time, within a limit per address. */
+export function catalogueRouter(deps: CatalogueDeps, readLimit: Middleware): Router {
+  const router = express.Router();
+  router.get('/pianos', readLimit, async (req, res) => {
+    // Holds and sales take a piano off at once: no copy of the list is kept anywhere.
+    res.setHeader('Cache-Control', 'no-store');
+    res.json(await catalogue(deps, req.query));
   });
   return router;
 }

@@ -49,6 +49,11 @@ export function signInLimits(limits: Limits['signIn']): { perAddress: Middleware
   };
 }
 
+/** Anonymous list reads (the catalogue) per address: each one runs a search, so a scraper is slowed. */
+export function publicReadLimit(limits: Limits['publicReads']): Middleware {
+  return rateLimit({ ...common(limits.windowMinutes, limits.perAddress), handler: refuse('Too many requests from this address.') });
+}
+
 /** Anonymous writes (acknowledgements, deposit checkouts) per address, successful or not. */
 export function publicWriteLimit(limits: Limits['publicWrites']): Middleware {
   return rateLimit({ ...common(limits.windowMinutes, limits.perAddress), handler: refuse('Too many requests from this address.') });

@@ -6,9 +6,9 @@ import path from 'node:path';
 // a year and never asks again. The pages themselves (index.html, buyer.html) are asked for each time.
 const HASHED = /^\/(_expo\/static|assets)\//;
 const FOR_A_YEAR = 'public, max-age=31536000, immutable';
-// The buyer's pages (a disclosure, its deposit, the check of a paper's code) have a bundle of their own
-// (scripts/build-web.sh): a phone reading a disclosure downloads no staff screens.
-const BUYER_PAGES = /^\/(d\/[^/]+(\/deposit)?|check(\/[^/]+)?)\/?$/;
+// The buyer's pages (a disclosure, its deposit, the check of a paper's code, the catalogue) have a bundle
+// of their own (scripts/build-web.sh): a phone reading a disclosure downloads no staff screens.
+const BUYER_PAGES = /^\/(d\/[^/]+(\/deposit)?|check(\/[^/]+)?|pianos-for-sale)\/?$/;
 
 /** Serves dist/: hashed files compressed ahead of time when the browser takes that, every other page path the app's page. */
 export function mountWeb(app: express.Express, dir: string, apiPrefixes: string[]): void {

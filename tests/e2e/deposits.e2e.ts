@@ -3,7 +3,7 @@
 import type { BrowserContext } from 'playwright-core';
 
 import { gql, login, TABLET, waitForMail } from './support/api';
-import { baseUrl, newPage, openBrowser, PHONE, shot, signIn } from './support/browser';
+import { baseUrl, newPage, openBrowser, payWithTestCard, PHONE, shot, signIn } from './support/browser';
 
 let staff: { context: BrowserContext; close: () => Promise<void> };
 let buyer: { context: BrowserContext; close: () => Promise<void> };
@@ -15,12 +15,6 @@ afterAll(async () => {
   await staff?.close();
   await buyer?.close();
 });
-
-function payUrl(): string {
-  const url = process.env.E2E_PAY_URL;
-  if (!url) throw new Error('E2E_PAY_URL is not set: the address of the payment stand-in');
-  return url;
-}
 
 it('holds a piano for a buyer who acknowledged the disclosure and paid the deposit', async () => {
   const floorToken = await login('floor@feltwire.test');
@@ -52,11 +46,7 @@ it('holds a piano for a buyer who acknowledged the disclosure and paid the depos
 
   // Off to the payment provider's page; it pays with the test card that succeeds.
   await phone.getByTestId('deposit-start').click();
-  await phone.waitForURL((u) => u.origin === new URL(payUrl()).origin);
-  await phone.getByTestId('checkout-card').fill('4242 4242 4242 4242');
-  await phone.getByTestId('checkout-exp').fill('12/30');
-  await phone.getByTestId('checkout-cvc').fill('123');
-  await phone.getByTestId('checkout-pay').click();
+  await payWithTestCard(phone);
 
   // Back on Feltwire: the page waits for the payment's webhook, then shows the hold.
   await phone.waitForURL(`**/d/${disclosures.token}/deposit?session=*`);

@@ -25,8 +25,8 @@ describe('readConfig', () => {
 
 describe('the request limits', () => {
   it('read their numbers from the environment', () => {
-    const c = readConfig({ ...base, SIGN_IN_FAILURES_PER_ADDRESS: '50', SIGN_IN_FAILURES_PER_ACCOUNT: '5', SIGN_IN_WINDOW_MINUTES: '30', PUBLIC_WRITES_PER_ADDRESS: '100', PUBLIC_WRITE_WINDOW_MINUTES: '1' });
-    expect(c.limits).toEqual({ signIn: { failuresPerAddress: 50, failuresPerAccount: 5, windowMinutes: 30 }, publicWrites: { perAddress: 100, windowMinutes: 1 } });
+    const c = readConfig({ ...base, SIGN_IN_FAILURES_PER_ADDRESS: '50', SIGN_IN_FAILURES_PER_ACCOUNT: '5', SIGN_IN_WINDOW_MINUTES: '30', PUBLIC_WRITES_PER_ADDRESS: '100', PUBLIC_WRITE_WINDOW_MINUTES: '1', PUBLIC_READS_PER_ADDRESS: '900', PUBLIC_READ_WINDOW_MINUTES: '5' });
+    expect(c.limits).toEqual({ signIn: { failuresPerAddress: 50, failuresPerAccount: 5, windowMinutes: 30 }, publicWrites: { perAddress: 100, windowMinutes: 1 }, publicReads: { perAddress: 900, windowMinutes: 5 } });
     expect(readConfig({ ...base }).limits.signIn.failuresPerAddress).toBe(20);
   });
 

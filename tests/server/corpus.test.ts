@@ -7,7 +7,7 @@ import { BAD_REQUESTS, NO_ROUTE, type BadRequest } from './corpus/bad-requests';
 // Routes that take no input at all, so no request to them is malformed.
 const NO_INPUT = ['GET /healthz'];
 // Limits out of the way: the corpus is about what each route says to bad input, not about 429.
-const ROOMY = { signIn: { failuresPerAddress: 10_000, failuresPerAccount: 10_000, windowMinutes: 1 }, publicWrites: { perAddress: 10_000, windowMinutes: 1 } };
+const ROOMY = { signIn: { failuresPerAddress: 10_000, failuresPerAccount: 10_000, windowMinutes: 1 }, publicWrites: { perAddress: 10_000, windowMinutes: 1 }, publicReads: { perAddress: 10_000, windowMinutes: 1 } };
 
 let api: TestApi;
 let before: TableStates;

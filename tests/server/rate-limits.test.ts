@@ -9,6 +9,7 @@ import { startTestApi, type TestApi } from '../support/api';
 const LIMITS: Limits = {
   signIn: { failuresPerAddress: 6, failuresPerAccount: 4, windowMinutes: 15 },
   publicWrites: { perAddress: 5, windowMinutes: 10 },
+  publicReads: { perAddress: 4, windowMinutes: 10 },
 };
 
 let api: TestApi;
@@ -89,8 +90,20 @@ describe('public writes', () => {
   });
 });
 
+describe('public reads', () => {
+  it('limits the catalogue per address, with 429 and a message, and leaves other addresses alone', async () => {
+    const address = '198.51.100.220';
+    for (let i = 0; i < LIMITS.publicReads.perAddress; i++) expect((await api.http.get('/api/public/pianos').set(from(address))).status).toBe(200);
+    const refused = await api.http.get('/api/public/pianos').set(from(address));
+    expect(refused.status).toBe(429);
+    expect(refused.headers['retry-after']).toBeDefined();
+    expect(refused.body.error).toMatch(/^Too many requests from this address\. Try again in \d+ minutes?\.$/);
+    expect((await api.http.get('/api/public/pianos').set(from('198.51.100.221'))).status).toBe(200);
+  });
+});
+
 describe('the configured limits', () => {
   it('default to counts that a person who mistypes never reaches', () => {
-    expect(DEFAULT_LIMITS).toEqual({ signIn: { failuresPerAddress: 20, failuresPerAccount: 10, windowMinutes: 15 }, publicWrites: { perAddress: 30, windowMinutes: 10 } });
+    expect(DEFAULT_LIMITS).toEqual({ signIn: { failuresPerAddress: 20, failuresPerAccount: 10, windowMinutes: 15 }, publicWrites: { perAddress: 30, windowMinutes: 10 }, publicReads: { perAddress: 300, windowMinutes: 10 } });
   });
 });

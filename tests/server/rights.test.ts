@@ -16,7 +16,7 @@ const TABLE = 'tests/server/rights/rights-table.ts';
 const CALLERS: readonly Caller[] = [...ROLES, 'anonymous'];
 // The REST probes come from another machine: the demo inbox opens by itself on the server's own.
 const REMOTE = { 'X-Forwarded-For': '203.0.113.9' };
-const ROOMY = { signIn: { failuresPerAddress: 10_000, failuresPerAccount: 10_000, windowMinutes: 1 }, publicWrites: { perAddress: 10_000, windowMinutes: 1 } };
+const ROOMY = { signIn: { failuresPerAddress: 10_000, failuresPerAccount: 10_000, windowMinutes: 1 }, publicWrites: { perAddress: 10_000, windowMinutes: 1 }, publicReads: { perAddress: 10_000, windowMinutes: 1 } };
 
 type Outcome = 'answered' | 'refused' | { broken: string };
 

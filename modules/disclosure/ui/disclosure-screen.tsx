@@ -60,6 +60,11 @@ function DisclosurePage({ token, disclosure, reload, checkout }: { token: string
     [token],
   );
 
+  // The catalogue's "Hold it with a deposit" lands here: the acknowledgement comes first, so go there.
+  useEffect(() => {
+    if (typeof window !== 'undefined' && window.location?.hash === '#hold') document.getElementById('hold')?.scrollIntoView();
+  }, []);
+
   const updatedSinceSeen = !!seenBefore && seenBefore.version < disclosure.newestVersion && Date.parse(disclosure.changedAt) > Date.parse(seenBefore.changedAt);
 
   return (
@@ -91,6 +96,7 @@ function DisclosurePage({ token, disclosure, reload, checkout }: { token: string
       <DisclosureDocument disclosure={disclosure} />
       <DocumentRecord disclosure={disclosure} token={token} />
 
+      <View nativeID="hold" />
       {disclosure.isNewest ? (
         <AcknowledgeForm token={token} disclosure={disclosure} receipt={receipt} onAcknowledged={acknowledged} onStale={reload} />
       ) : (

@@ -77,3 +77,18 @@ export async function shot(page: Page, name: string): Promise<void> {
   await checkNow(page);
   await page.screenshot({ path: path.join(dir, `${name}.png`), fullPage: false });
 }
+
+export function payUrl(): string {
+  const url = process.env.E2E_PAY_URL;
+  if (!url) throw new Error('E2E_PAY_URL is not set: the address of the payment stand-in');
+  return url;
+}
+
+/** On the payment stand-in's page: pays with the test card that succeeds. */
+export async function payWithTestCard(page: Page): Promise<void> {
+  await page.waitForURL((u) => u.origin === new URL(payUrl()).origin);
+  await page.getByTestId('checkout-card').fill('4242 4242 4242 4242');
+  await page.getByTestId('checkout-exp').fill('12/30');
+  await page.getByTestId('checkout-cvc').fill('123');
+  await page.getByTestId('checkout-pay').click();
+}

@@ -76,6 +76,17 @@ const rest: BadRequest[] = [
   { name: 'printable disclosure at version 2^31', route: 'GET /api/public/disclosures/:token/html', url: '/api/public/disclosures/{token}/html?version=2147483648' },
   { name: 'printable disclosure at version 1e309', route: 'GET /api/public/disclosures/:token/html', url: '/api/public/disclosures/{token}/html?version=1e309' },
   { name: 'printable disclosure of an unknown token', route: 'GET /api/public/disclosures/:token/html', url: `/api/public/disclosures/${TOKEN_SHAPED}/html` },
+  // the catalogue
+  { name: 'catalogue of a kind that is not one', route: 'GET /api/public/pianos', url: '/api/public/pianos?kind=organ' },
+  { name: 'catalogue with a size in words', route: 'GET /api/public/pianos', url: '/api/public/pianos?minSizeCm=big' },
+  { name: 'catalogue with a price past the integer range', route: 'GET /api/public/pianos', url: '/api/public/pianos?maxPriceMinor=2147483648' },
+  { name: 'catalogue with a price of 1e309', route: 'GET /api/public/pianos', url: '/api/public/pianos?minPriceMinor=1e309' },
+  { name: 'catalogue with a filter given twice', route: 'GET /api/public/pianos', url: '/api/public/pianos?kind=grand&kind=upright' },
+  { name: 'catalogue with a filter as an object', route: 'GET /api/public/pianos', url: '/api/public/pianos?maxPriceMinor[$gt]=0' },
+  { name: 'catalogue with an unknown filter', route: 'GET /api/public/pianos', url: "/api/public/pianos?stage=sold'%20or%201=1" },
+  { name: 'catalogue with a range upside down', route: 'GET /api/public/pianos', url: '/api/public/pianos?minSizeCm=200&maxSizeCm=100' },
+  { name: 'catalogue at offset -1', route: 'GET /api/public/pianos', url: '/api/public/pianos?offset=-1' },
+  { name: 'POST to the catalogue', route: NO_ROUTE, url: '/api/public/pianos', raw: { type: 'application/json', body: '{}' } },
   // acknowledgements
   { name: 'acknowledgement without a body', route: 'POST /api/public/disclosures/:token/acknowledge', url: '/api/public/disclosures/{token}/acknowledge' },
   { name: 'acknowledgement with a stale digest', route: 'POST /api/public/disclosures/:token/acknowledge', url: '/api/public/disclosures/{token}/acknowledge', json: { fullName: 'Ada Brightwell', email: 'ada@example.test', read: true, digest: DIGEST } },

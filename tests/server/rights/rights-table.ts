@@ -147,6 +147,8 @@ export const RIGHTS: Record<string, RightsRow> = {
   // Anyone holding a paper checks its verification code against the published version.
   'route GET /api/public/check/:code': { who: ANYONE },
   'route GET /api/public/check/:code/html': { who: ANYONE },
+  // The catalogue of pianos on the floor: public, built from published disclosures only.
+  'route GET /api/public/pianos': { who: ANYONE },
   'route GET /api/public/disclosures/:token': { who: ANYONE },
   'route GET /api/public/disclosures/:token/html': { who: ANYONE },
   'route POST /api/public/disclosures/:token/acknowledge': { who: ANYONE },

@@ -18,20 +18,25 @@ interface BuyerFrameProps {
   documentTitle: string;
   /** the dealer's address and contact, for the foot of the page */
   contact?: readonly string[];
+  /** the column's widest, for a page of many cards (the catalogue); the reading width otherwise */
+  maxWidth?: number;
+  /** the footnote, when not the one for a page shared by link */
+  foot?: string;
   children: ReactNode;
 }
 
 /** A public page for a buyer: the dealer's name on a band of felt, one readable column, no staff navigation. */
-export function BuyerFrame({ dealerName, kind, documentTitle, contact, children }: BuyerFrameProps) {
+export function BuyerFrame({ dealerName, kind, documentTitle, contact, maxWidth, foot, children }: BuyerFrameProps) {
   const wide = useWide();
   const insets = useSafeAreaInsets();
+  const column = [styles.column, maxWidth ? { maxWidth } : null];
   useEffect(() => {
     if (Platform.OS === 'web' && typeof document !== 'undefined') document.title = documentTitle;
   }, [documentTitle]);
   return (
     <ScrollView style={styles.scroll} contentContainerStyle={styles.content}>
       <View role="banner" style={[styles.band, { paddingTop: insets.top + (wide ? SPACE.xl : SPACE.lg) }]}>
-        <View style={styles.column}>
+        <View style={column}>
           <Body variant="heading" tone="inverse" testID="buyer-dealer">
             {dealerName === undefined ? ' ' : dealerName || 'Feltwire'}
           </Body>
@@ -41,10 +46,10 @@ export function BuyerFrame({ dealerName, kind, documentTitle, contact, children 
         </View>
       </View>
       <View role="main" style={[styles.main, wide && styles.mainWide]}>
-        <View style={[styles.column, styles.body]}>{children}</View>
+        <View style={[column, styles.body]}>{children}</View>
       </View>
       <View role="contentinfo" style={[styles.foot, { paddingBottom: insets.bottom + SPACE.xl }]}>
-        <View style={[styles.column, styles.footColumn]}>
+        <View style={[column, styles.footColumn]}>
           {dealerName && contact?.length ? (
             <View testID="buyer-dealer-contact">
               <Body variant="bodyStrong">{dealerName}</Body>
@@ -55,9 +60,13 @@ export function BuyerFrame({ dealerName, kind, documentTitle, contact, children 
               ))}
             </View>
           ) : null}
-          {dealerName ? (
+          {foot ? (
             <Body variant="small" tone="quiet">
-              Shared by {dealerName} through Feltwire. This page is for the person the dealer sent it to; it is not listed anywhere.
+              {foot}
+            </Body>
+          ) : dealerName ? (
+            <Body variant="small" tone="quiet">
+              Shared by {dealerName} through Feltwire.
             </Body>
           ) : null}
         </View>
