@@ -195,16 +195,26 @@ export function StockTableScreen() {
                 </View>
               ))}
               {table.getRowModel().rows.map((row, n) => (
-                <LinkPressable key={row.id} href={`/pianos/${row.original.pianoId}`} insetFocus style={({ hovered }) => [rowTable.row, styles.tableRow, n > 0 && rowTable.rule, hovered && rowTable.hover]} testID="stock-row">
+                // A row of cells, as a table needs; the stock number is the link to the piano.
+                <View role="row" key={row.id} style={[rowTable.row, styles.tableRow, n > 0 && rowTable.rule]} testID="stock-row">
                   {row.getVisibleCells().map((cell) => {
                     const meta = cell.column.columnDef.meta as Meta;
+                    const text = <Text style={[TYPE_SCALE.small, styles.cell, meta.numeric && styles.right, cell.column.id === 'margin' && (row.original.marginMinor ?? 0) < 0 && styles.loss]}>{String(cell.getValue())}</Text>;
                     return (
                       <View role="cell" key={cell.id} style={{ flex: meta.flex }}>
-                        {cell.column.id === 'stage' ? <StageBadge stage={row.original.stage} /> : <Text style={[TYPE_SCALE.small, styles.cell, meta.numeric && styles.right, cell.column.id === 'margin' && (row.original.marginMinor ?? 0) < 0 && styles.loss]}>{String(cell.getValue())}</Text>}
+                        {cell.column.id === 'stage' ? (
+                          <StageBadge stage={row.original.stage} />
+                        ) : cell.column.id === 'stockNumber' ? (
+                          <LinkPressable href={`/pianos/${row.original.pianoId}`} insetFocus style={({ hovered }) => [styles.rowLink, hovered && rowTable.hover]} testID="stock-row-link">
+                            <Text style={[TYPE_SCALE.small, styles.cell, styles.linkText]}>{String(cell.getValue())}</Text>
+                          </LinkPressable>
+                        ) : (
+                          text
+                        )}
                       </View>
                     );
                   })}
-                </LinkPressable>
+                </View>
               ))}
             </View>
           </ScrollView>
@@ -265,6 +275,8 @@ const styles = StyleSheet.create({
   table: { minWidth: 940, flexGrow: 1 },
   tableRow: { gap: SPACE.sm, paddingHorizontal: SPACE.md },
   headButton: { minHeight: 32, justifyContent: 'center' },
+  rowLink: { minHeight: 32, justifyContent: 'center' },
+  linkText: { textDecorationLine: 'underline' },
   cell: { color: PALETTE.ebony },
   right: { textAlign: 'right' },
   loss: { color: PALETTE.rosewood },
