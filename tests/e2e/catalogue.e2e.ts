@@ -51,7 +51,7 @@ it('lets a buyer find a piano by size, read its disclosure and hold it with a de
   // The disclosure opens from the card, with the same price.
   await card.getByTestId('catalogue-open').click();
   await phone.waitForURL('**/d/*');
-  await phone.getByTestId('disclosure-digest').waitFor();
+  await phone.getByTestId('disclosure-code').waitFor();
   expect(await phone.locator('body').textContent()).toContain(price);
   const disclosureUrl = phone.url();
 
