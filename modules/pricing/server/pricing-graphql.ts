@@ -5,7 +5,6 @@ import {
   GraphQLInputObjectType,
   GraphQLInt,
   GraphQLList,
-  GraphQLNonNull,
   GraphQLObjectType,
   GraphQLString,
   type GraphQLFieldConfig,
@@ -19,6 +18,7 @@ import { MAX_STOCK_PAGE, STOCK_SORTS, type StockQueryInput, type StockRow } from
 import { notAllowed } from '@/server/errors';
 import type { GraphContext } from '@/server/graphql/context';
 import type { GraphDomain } from '@/server/graphql/domain';
+import { list, nn } from '@/server/graphql/types';
 
 import {
   changeAskingPrice,
@@ -35,8 +35,6 @@ import {
 import { MARGIN_BARS, pianoStockRow, stockCharts, stockTable } from './stock-service';
 import { Piano } from '@/modules/pianos/server/piano-model';
 
-const nn = <T extends GraphQLOutputType | GraphQLInputType>(t: T) => new GraphQLNonNull(t) as GraphQLNonNull<T>;
-const list = <T extends GraphQLOutputType>(t: T) => nn(new GraphQLList(nn(t)));
 const inList = <T extends GraphQLInputType>(t: T) => new GraphQLList(nn(t));
 type Field = GraphQLFieldConfig<unknown, GraphContext>;
 

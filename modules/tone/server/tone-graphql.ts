@@ -1,11 +1,9 @@
-import { GraphQLBoolean, GraphQLEnumType, GraphQLFloat, GraphQLInputObjectType, GraphQLInt, GraphQLList, GraphQLNonNull, GraphQLObjectType, GraphQLString, type GraphQLNullableType } from 'graphql';
+import { GraphQLBoolean, GraphQLEnumType, GraphQLFloat, GraphQLInputObjectType, GraphQLInt, GraphQLObjectType, GraphQLString } from 'graphql';
 
 import type { GraphDomain } from '@/server/graphql/domain';
+import { list, nn } from '@/server/graphql/types';
 
 import { discardRecording, listRecordings, MAX_RECORDINGS_LISTED } from './tone-service';
-
-const nn = <T extends GraphQLNullableType>(t: T) => new GraphQLNonNull(t);
-const list = <T extends GraphQLNullableType>(t: T) => nn(new GraphQLList(nn(t)));
 
 const ToneNoteType = new GraphQLObjectType({
   name: 'ToneNote',
